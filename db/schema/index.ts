@@ -1,0 +1,4 @@
+export * from "./auth";
+export * from "./materials";
+export * from "./formulations";
+export * from "./records";

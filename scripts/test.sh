@@ -1,0 +1,98 @@
+#!/usr/bin/env bash
+# npm test: install what is missing, start a MariaDB instance and a fake SMTP
+# server of the tests' own, run lint, type-check, unit and integration tests,
+# build the app, run the HTTP and browser tests against it, stop everything,
+# and end with one line "N passed, N failed".
+source "$(dirname "$0")/common.sh"
+source "$ROOT/scripts/services.sh"
+cd "$ROOT"
+set +e
+
+# The tests' own instance, apart from the demo data (never DATABASE_URL).
+unset DATABASE_URL SMTP_URL
+export GELWRIGHT_DB_DIR="$ROOT/.data/mariadb-test"
+export GELWRIGHT_DB_PORT="${GELWRIGHT_TEST_DB_PORT:-3317}"
+export GELWRIGHT_DB_NAME="gelwright_test"
+export FAKE_SMTP_PORT="${GELWRIGHT_TEST_SMTP_PORT:-2526}"
+export SMTP_URL="smtp://127.0.0.1:$FAKE_SMTP_PORT"
+export MAILBOX_DIR="$ROOT/.data/mailbox-test"
+export TEST_APP_PORT="${GELWRIGHT_TEST_APP_PORT:-3100}"
+export BETTER_AUTH_URL="http://localhost:$TEST_APP_PORT"
+export BETTER_AUTH_SECRET="gelwright-test-secret-not-for-production-0001"
+export CHROMIUM_PATH="${CHROMIUM_PATH:-/usr/bin/chromium}"
+OUT="$ROOT/.tmp/test"
+rm -rf "$OUT" "$MAILBOX_DIR"
+mkdir -p "$OUT" "$MAILBOX_DIR"
+
+passed=0
+failed=0
+failures=()
+check() {
+  # check NAME COMMAND... : one pass or fail for a whole command.
+  local name="$1"; shift
+  log "── $name"
+  if "$@"; then passed=$((passed + 1)); else failed=$((failed + 1)); failures+=("$name"); fi
+}
+vitest_run() {
+  # vitest_run NAME CONFIG : adds every test's result to the counts.
+  local name="$1" cfg="$2" json="$OUT/$1.json"
+  log "── $name tests"
+  npx vitest run --config "$cfg" --reporter=default --reporter=json --outputFile.json="$json"
+  local rc=$?
+  if [ -f "$json" ]; then
+    read -r p f < <(node -e 'const r=require(process.argv[1]);console.log(r.numPassedTests, r.numFailedTests + (r.numRuntimeErrorTestSuites||0) + (r.numFailedTestSuites&&!r.numFailedTests?r.numFailedTestSuites:0))' "$json")
+    passed=$((passed + p)); failed=$((failed + f))
+    [ "$rc" -ne 0 ] && [ "$f" -eq 0 ] && { failed=$((failed + 1)); failures+=("$name (runner exited $rc)"); }
+    [ "$f" -gt 0 ] && failures+=("$name ($f)")
+  else
+    failed=$((failed + 1)); failures+=("$name (no report)")
+  fi
+}
+
+cleanup() {
+  [ -n "${APP_PID:-}" ] && { kill -- "-$APP_PID" 2>/dev/null; wait "$APP_PID" 2>/dev/null; APP_PID=""; }
+  stop_pidfile "$ROOT/.data/test-fake-smtp.pid"
+  bash scripts/db.sh stop >/dev/null 2>&1
+}
+trap cleanup EXIT
+
+set -e
+apt_install curl mariadb-server mariadb-client chromium fonts-liberation
+ensure_node_modules
+bash scripts/db.sh start
+set +e
+start_fake_smtp "$FAKE_SMTP_PORT" "$MAILBOX_DIR" "$ROOT/.data/test-fake-smtp.pid"
+bash scripts/db.sh drop "$GELWRIGHT_DB_NAME" && bash scripts/db.sh create "$GELWRIGHT_DB_NAME"
+check "migrate the test database" npx tsx db/migrate.ts
+check "seed the test database" npx tsx db/seed.ts
+
+check "lint" npx eslint . --max-warnings=0
+check "type-check" npx tsc --noEmit
+vitest_run "unit-and-integration" vitest.config.ts
+
+log "── build"
+if npx next build >"$OUT/build.log" 2>&1; then
+  passed=$((passed + 1))
+  tail -25 "$OUT/build.log"
+  if (echo >"/dev/tcp/127.0.0.1/$TEST_APP_PORT") 2>/dev/null; then
+    log "Port $TEST_APP_PORT is already in use; stop what runs there (or set GELWRIGHT_TEST_APP_PORT)."
+    failed=$((failed + 1)); failures+=("port $TEST_APP_PORT busy")
+  else
+    GELWRIGHT_SIGNIN_RATE_LIMIT=5 setsid npx next start -H localhost -p "$TEST_APP_PORT" >"$OUT/app.log" 2>&1 &
+    APP_PID=$!
+    if wait_http "http://localhost:$TEST_APP_PORT/api/health" 60; then
+      vitest_run "http-and-browser" vitest.e2e.config.ts
+    else
+      failed=$((failed + 1)); failures+=("app did not start (see .tmp/test/app.log)")
+    fi
+  fi
+else
+  cat "$OUT/build.log"
+  failed=$((failed + 1)); failures+=("build")
+fi
+
+cleanup
+trap - EXIT
+[ ${#failures[@]} -gt 0 ] && log "Failed: ${failures[*]}"
+echo "$passed passed, $failed failed"
+[ "$failed" -eq 0 ]
