@@ -1,0 +1,853 @@
+/**
+ * Reference materials shipped with Gelwright and copied into each team's
+ * library. Every value names its source in the material's `sources` map
+ * (property → source); values recalled rather than looked up say
+ * "from memory". Molar masses are computed from the formula with the
+ * IUPAC/CIAAW 2021 abridged atomic weights (data/atomic-weights.ts) and
+ * cross-checked in lib/formulation/reference-data.test.ts.
+ *
+ * GHS hazard statements are the ones commonly listed for these materials;
+ * always check the supplier's safety data sheet for the grade in hand.
+ *
+ * Units: molarMass g/mol, density and phaseDensity g/cm³ (≈ g/mL) at about
+ * 20–25 °C, temperatures °C, fractions by mass.
+ */
+import type { Material } from "../lib/formulation/material-schema";
+
+/** Source strings used throughout this file. */
+const SRC = {
+  ciaaw: "computed from the formula with IUPAC/CIAAW 2021 standard atomic weights, abridged values",
+  stoichiometry:
+    "from the formula: one network-forming atom and one hydrolysable group per alkoxy group; Brinker & Scherer, Sol-Gel Science (1990), ch. 3",
+  residueOxide: "stoichiometry of the oxide formed on complete hydrolysis and condensation; Brinker & Scherer, Sol-Gel Science (1990), ch. 3",
+  residueSilsesquioxane:
+    "R-SiO1.5 unit kept by an organically modified silane on complete condensation (R stays bonded to Si); Brinker & Scherer, Sol-Gel Science (1990)",
+  silsesquioxaneDensity: "typical skeletal density of an organosilsesquioxane network (from memory)",
+  fusedSilica: "CRC Handbook of Chemistry and Physics, fused (amorphous) silica ≈ 2.20 g/cm³",
+  anatase: "CRC Handbook of Chemistry and Physics, TiO2 anatase (from memory); amorphous sol-gel titania is less dense",
+  zirconia: "CRC Handbook of Chemistry and Physics, ZrO2 monoclinic (from memory); amorphous sol-gel zirconia is less dense",
+  alumina: "CRC Handbook of Chemistry and Physics, α-Al2O3 (from memory); amorphous or γ alumina from gels is less dense",
+  phosphorusPentoxide: "CRC Handbook of Chemistry and Physics, P2O5 (from memory)",
+  calciumOxide: "CRC Handbook of Chemistry and Physics, CaO (from memory)",
+  supplierDensity: "typical supplier data sheet value at 20–25 °C (from memory)",
+  crcOrganic: "CRC Handbook of Chemistry and Physics, Physical Constants of Organic Compounds, 20 °C (from memory)",
+  crcAqueous: "CRC Handbook of Chemistry and Physics, Concentrative Properties of Aqueous Solutions, 20 °C (from memory)",
+  water20: "CRC Handbook of Chemistry and Physics, density of water at 20 °C (0.99820 g/cm³; also Kell 1975)",
+  polymerHandbook: "Polymer Handbook, 4th ed. (Brandrup, Immergut, Grulke, 1999), typical value (from memory)",
+  markHandbook: "Mark, Physical Properties of Polymers Handbook, typical value (from memory)",
+  tga: "onset of mass loss in thermogravimetry, typical value (from memory)",
+  gradeMax: "typical continuous-use maximum of common grades (from memory); check the grade's data sheet",
+  stock: "nominal concentration of the commercial stock; the balance is water",
+  ghs: "GHS hazard statements as commonly listed by suppliers (from memory); check the supplier's safety data sheet",
+  ghsNone: "not classified as hazardous by common suppliers (from memory); check the supplier's safety data sheet",
+  cas: "CAS Registry Number (from memory; check digit verified in tests)",
+  repeatUnit: "repeat unit of the polymer",
+} as const;
+
+/** Alcohols released by hydrolysis; molar masses from the formula (IUPAC/CIAAW 2021). */
+const ALCOHOL = {
+  methanol: { name: "methanol", molarMass: 32.042 }, // CH4O
+  ethanol: { name: "ethanol", molarMass: 46.069 }, // C2H6O
+  propan1ol: { name: "1-propanol", molarMass: 60.096 }, // C3H8O
+  propan2ol: { name: "2-propanol", molarMass: 60.096 }, // C3H8O
+  butan1ol: { name: "1-butanol", molarMass: 74.123 }, // C4H10O
+  butan2ol: { name: "2-butanol", molarMass: 74.123 }, // C4H10O
+} as const;
+
+/** Sources shared by every alkoxide precursor. */
+const alkoxideSources = {
+  formula: "IUPAC name and composition of the compound",
+  molarMass: SRC.ciaaw,
+  "precursor.residueFormula": SRC.residueOxide,
+  "precursor.residueMolarMass": SRC.ciaaw,
+  "precursor.residuePerMolecule": SRC.residueOxide,
+  "precursor.networkAtomsPerMolecule": SRC.stoichiometry,
+  "precursor.hydrolysableGroupsPerMolecule": SRC.stoichiometry,
+  "precursor.leavingAlcohol": "alcohol of the alkoxy group; Brinker & Scherer, Sol-Gel Science (1990), ch. 3",
+  hazards: SRC.ghs,
+  casNumber: SRC.cas,
+} as const;
+
+/** Sources shared by organically modified silanes R-Si(OR')3. */
+const ormosilSources = {
+  ...alkoxideSources,
+  "precursor.residueFormula": SRC.residueSilsesquioxane,
+  "precursor.residuePerMolecule": SRC.residueSilsesquioxane,
+  "precursor.residueDensity": SRC.silsesquioxaneDensity,
+} as const;
+
+const precursors: Material[] = [
+  {
+    id: "teos",
+    name: "Tetraethoxysilane (TEOS)",
+    kind: "precursor",
+    casNumber: "78-10-4",
+    formula: "Si(OC2H5)4",
+    molarMass: 208.329,
+    density: 0.933,
+    precursor: {
+      residueFormula: "SiO2",
+      residueMolarMass: 60.083,
+      residuePerMolecule: 1,
+      residueDensity: 2.2,
+      networkAtomsPerMolecule: 1,
+      hydrolysableGroupsPerMolecule: 4,
+      leavingAlcohol: ALCOHOL.ethanol,
+    },
+    hazards: ["H226", "H319", "H332", "H335"],
+    sources: { ...alkoxideSources, density: SRC.crcOrganic, "precursor.residueDensity": SRC.fusedSilica },
+  },
+  {
+    id: "tmos",
+    name: "Tetramethoxysilane (TMOS)",
+    kind: "precursor",
+    casNumber: "681-84-5",
+    formula: "Si(OCH3)4",
+    molarMass: 152.221,
+    density: 1.032,
+    precursor: {
+      residueFormula: "SiO2",
+      residueMolarMass: 60.083,
+      residuePerMolecule: 1,
+      residueDensity: 2.2,
+      networkAtomsPerMolecule: 1,
+      hydrolysableGroupsPerMolecule: 4,
+      leavingAlcohol: ALCOHOL.methanol,
+    },
+    hazards: ["H226", "H318", "H330"],
+    sources: { ...alkoxideSources, density: SRC.supplierDensity, "precursor.residueDensity": SRC.fusedSilica },
+  },
+  {
+    id: "mtes",
+    name: "Methyltriethoxysilane (MTES)",
+    kind: "precursor",
+    casNumber: "2031-67-6",
+    formula: "CH3Si(OC2H5)3",
+    molarMass: 178.303,
+    density: 0.895,
+    precursor: {
+      residueFormula: "(CH3)SiO1.5",
+      residueMolarMass: 67.1185,
+      residuePerMolecule: 1,
+      residueDensity: 1.3,
+      networkAtomsPerMolecule: 1,
+      hydrolysableGroupsPerMolecule: 3,
+      leavingAlcohol: ALCOHOL.ethanol,
+    },
+    hazards: ["H226"],
+    sources: { ...ormosilSources, density: SRC.supplierDensity },
+  },
+  {
+    id: "mtms",
+    name: "Methyltrimethoxysilane (MTMS)",
+    kind: "precursor",
+    casNumber: "1185-55-3",
+    formula: "CH3Si(OCH3)3",
+    molarMass: 136.222,
+    density: 0.955,
+    precursor: {
+      residueFormula: "(CH3)SiO1.5",
+      residueMolarMass: 67.1185,
+      residuePerMolecule: 1,
+      residueDensity: 1.3,
+      networkAtomsPerMolecule: 1,
+      hydrolysableGroupsPerMolecule: 3,
+      leavingAlcohol: ALCOHOL.methanol,
+    },
+    hazards: ["H225"],
+    sources: { ...ormosilSources, density: SRC.supplierDensity },
+  },
+  {
+    id: "gptms",
+    name: "3-Glycidoxypropyltrimethoxysilane (GPTMS)",
+    kind: "precursor",
+    casNumber: "2530-83-8",
+    formula: "C9H20O5Si",
+    molarMass: 236.339,
+    density: 1.07,
+    precursor: {
+      // R = glycidoxypropyl C6H11O2; residue R-SiO1.5 = C6H11O3.5Si
+      residueFormula: "(C6H11O2)SiO1.5",
+      residueMolarMass: 167.2355,
+      residuePerMolecule: 1,
+      residueDensity: 1.35,
+      networkAtomsPerMolecule: 1,
+      hydrolysableGroupsPerMolecule: 3,
+      leavingAlcohol: ALCOHOL.methanol,
+    },
+    hazards: ["H318"],
+    sources: { ...ormosilSources, density: SRC.supplierDensity },
+  },
+  {
+    id: "maptms",
+    name: "3-Methacryloxypropyltrimethoxysilane (MAPTMS)",
+    kind: "precursor",
+    casNumber: "2530-85-0",
+    formula: "C10H20O5Si",
+    molarMass: 248.35,
+    density: 1.045,
+    precursor: {
+      // R = methacryloxypropyl C7H11O2; residue R-SiO1.5 = C7H11O3.5Si
+      residueFormula: "(C7H11O2)SiO1.5",
+      residueMolarMass: 179.2465,
+      residuePerMolecule: 1,
+      residueDensity: 1.3,
+      networkAtomsPerMolecule: 1,
+      hydrolysableGroupsPerMolecule: 3,
+      leavingAlcohol: ALCOHOL.methanol,
+    },
+    hazards: [],
+    sources: { ...ormosilSources, density: SRC.supplierDensity, hazards: SRC.ghsNone },
+  },
+  {
+    id: "aptes",
+    name: "3-Aminopropyltriethoxysilane (APTES)",
+    kind: "precursor",
+    casNumber: "919-30-2",
+    formula: "H2N(CH2)3Si(OC2H5)3",
+    molarMass: 221.372,
+    density: 0.946,
+    precursor: {
+      // R = aminopropyl C3H8N; residue R-SiO1.5 = C3H8NO1.5Si
+      residueFormula: "(C3H8N)SiO1.5",
+      residueMolarMass: 110.1875,
+      residuePerMolecule: 1,
+      residueDensity: 1.3,
+      networkAtomsPerMolecule: 1,
+      hydrolysableGroupsPerMolecule: 3,
+      leavingAlcohol: ALCOHOL.ethanol,
+    },
+    hazards: ["H302", "H314", "H317"],
+    sources: { ...ormosilSources, density: SRC.supplierDensity },
+  },
+  {
+    id: "vtes",
+    name: "Vinyltriethoxysilane (VTES)",
+    kind: "precursor",
+    casNumber: "78-08-0",
+    formula: "CH2CHSi(OC2H5)3",
+    molarMass: 190.314,
+    density: 0.903,
+    precursor: {
+      // R = vinyl C2H3; residue R-SiO1.5 = C2H3O1.5Si
+      residueFormula: "(C2H3)SiO1.5",
+      residueMolarMass: 79.1295,
+      residuePerMolecule: 1,
+      residueDensity: 1.3,
+      networkAtomsPerMolecule: 1,
+      hydrolysableGroupsPerMolecule: 3,
+      leavingAlcohol: ALCOHOL.ethanol,
+    },
+    hazards: ["H226", "H332"],
+    sources: { ...ormosilSources, density: SRC.supplierDensity },
+  },
+  {
+    id: "ti-isopropoxide",
+    name: "Titanium(IV) isopropoxide",
+    kind: "precursor",
+    casNumber: "546-68-9",
+    formula: "Ti(OC3H7)4",
+    molarMass: 284.219,
+    density: 0.96,
+    precursor: {
+      residueFormula: "TiO2",
+      residueMolarMass: 79.865,
+      residuePerMolecule: 1,
+      residueDensity: 3.9,
+      networkAtomsPerMolecule: 1,
+      hydrolysableGroupsPerMolecule: 4,
+      leavingAlcohol: ALCOHOL.propan2ol,
+    },
+    hazards: ["H226", "H319", "H336"],
+    sources: { ...alkoxideSources, density: SRC.supplierDensity, "precursor.residueDensity": SRC.anatase },
+  },
+  {
+    id: "ti-butoxide",
+    name: "Titanium(IV) n-butoxide",
+    kind: "precursor",
+    casNumber: "5593-70-4",
+    formula: "Ti(OC4H9)4",
+    molarMass: 340.327,
+    density: 1.0,
+    precursor: {
+      residueFormula: "TiO2",
+      residueMolarMass: 79.865,
+      residuePerMolecule: 1,
+      residueDensity: 3.9,
+      networkAtomsPerMolecule: 1,
+      hydrolysableGroupsPerMolecule: 4,
+      leavingAlcohol: ALCOHOL.butan1ol,
+    },
+    hazards: ["H226", "H315", "H318", "H335", "H336"],
+    sources: { ...alkoxideSources, density: SRC.supplierDensity, "precursor.residueDensity": SRC.anatase },
+  },
+  {
+    id: "zr-propoxide-70",
+    name: "Zirconium(IV) n-propoxide, 70 wt% in 1-propanol",
+    kind: "precursor",
+    casNumber: "23519-77-9",
+    formula: "Zr(OC3H7)4",
+    molarMass: 327.576,
+    density: 1.044,
+    assay: 0.7,
+    solventFraction: 0.3,
+    precursor: {
+      residueFormula: "ZrO2",
+      residueMolarMass: 123.222,
+      residuePerMolecule: 1,
+      residueDensity: 5.68,
+      networkAtomsPerMolecule: 1,
+      hydrolysableGroupsPerMolecule: 4,
+      leavingAlcohol: ALCOHOL.propan1ol,
+    },
+    hazards: ["H225", "H318", "H336"],
+    sources: {
+      ...alkoxideSources,
+      density: "supplier data sheet value for the 70 wt% solution, 25 °C (from memory)",
+      assay: "nominal concentration of the commercial solution",
+      solventFraction: "balance of the commercial solution is 1-propanol",
+      "precursor.residueDensity": SRC.zirconia,
+    },
+  },
+  {
+    id: "al-sec-butoxide",
+    name: "Aluminium tri-sec-butoxide",
+    kind: "precursor",
+    casNumber: "2269-22-9",
+    formula: "Al(OC4H9)3",
+    molarMass: 246.327,
+    density: 0.967,
+    precursor: {
+      residueFormula: "Al2O3",
+      residueMolarMass: 101.961,
+      residuePerMolecule: 0.5,
+      residueDensity: 3.99,
+      networkAtomsPerMolecule: 1,
+      hydrolysableGroupsPerMolecule: 3,
+      leavingAlcohol: ALCOHOL.butan2ol,
+    },
+    hazards: ["H226", "H315", "H318"],
+    sources: { ...alkoxideSources, density: SRC.supplierDensity, "precursor.residueDensity": SRC.alumina },
+  },
+  {
+    id: "triethyl-phosphate",
+    name: "Triethyl phosphate (TEP)",
+    kind: "precursor",
+    casNumber: "78-40-0",
+    formula: "(C2H5O)3PO",
+    molarMass: 182.156,
+    density: 1.072,
+    precursor: {
+      residueFormula: "P2O5",
+      residueMolarMass: 141.943,
+      residuePerMolecule: 0.5,
+      residueDensity: 2.39,
+      networkAtomsPerMolecule: 1,
+      hydrolysableGroupsPerMolecule: 3,
+      leavingAlcohol: ALCOHOL.ethanol,
+    },
+    hazards: ["H302", "H319"],
+    sources: { ...alkoxideSources, density: SRC.crcOrganic, "precursor.residueDensity": SRC.phosphorusPentoxide },
+  },
+  {
+    id: "ca-nitrate-4h2o",
+    name: "Calcium nitrate tetrahydrate",
+    kind: "precursor",
+    casNumber: "13477-34-4",
+    formula: "Ca(NO3)2·4H2O",
+    molarMass: 236.146,
+    density: 1.896,
+    crystalWaterPerFormula: 4,
+    precursor: {
+      residueFormula: "CaO",
+      residueMolarMass: 56.077,
+      residuePerMolecule: 1,
+      residueDensity: 3.34,
+      networkAtomsPerMolecule: 0,
+      hydrolysableGroupsPerMolecule: 0,
+      conversionTemperatureC: 550,
+    },
+    hazards: ["H272", "H302", "H318"],
+    sources: {
+      formula: "composition of the tetrahydrate",
+      molarMass: SRC.ciaaw,
+      density: "CRC Handbook of Chemistry and Physics, Physical Constants of Inorganic Compounds (from memory)",
+      crystalWaterPerFormula: "composition of the tetrahydrate",
+      "precursor.residueFormula": "CaO left after nitrate decomposition",
+      "precursor.residueMolarMass": SRC.ciaaw,
+      "precursor.residuePerMolecule": "one Ca per formula unit",
+      "precursor.residueDensity": SRC.calciumOxide,
+      "precursor.networkAtomsPerMolecule": "Ca is a network modifier, not a network former (common practice, no source)",
+      "precursor.hydrolysableGroupsPerMolecule": "no alkoxy groups",
+      "precursor.conversionTemperatureC":
+        "nitrate decomposition in sol-gel bioactive glasses needs roughly 500–600 °C (from memory)",
+      hazards: SRC.ghs,
+      casNumber: SRC.cas,
+    },
+  },
+];
+
+/** Sources shared by polymer organic phases. */
+const polymerSources = {
+  formula: SRC.repeatUnit,
+  density: SRC.polymerHandbook,
+  "thermal.glassTransitionC": SRC.polymerHandbook,
+  "thermal.meltingC": SRC.polymerHandbook,
+  "thermal.degradationOnsetC": SRC.tga,
+  hazards: SRC.ghsNone,
+  casNumber: SRC.cas,
+} as const;
+
+const pvaThermal = { glassTransitionC: 85, meltingC: 228, degradationOnsetC: 230 };
+
+const organics: Material[] = [
+  {
+    id: "peg-2000",
+    name: "Poly(ethylene glycol), Mn ≈ 2000",
+    kind: "organic",
+    casNumber: "25322-68-3",
+    formula: "C2H4O",
+    density: 1.2,
+    thermal: { glassTransitionC: -67, meltingC: 52, degradationOnsetC: 300 },
+    hazards: [],
+    sources: {
+      ...polymerSources,
+      density: "solid PEG 2000, typical value (from memory)",
+      "thermal.glassTransitionC": "poly(ethylene oxide), " + SRC.polymerHandbook,
+      "thermal.meltingC": "PEG 2000, typical supplier value (from memory)",
+    },
+  },
+  {
+    id: "pva",
+    name: "Poly(vinyl alcohol), fully hydrolysed",
+    kind: "organic",
+    casNumber: "9002-89-5",
+    formula: "C2H4O",
+    density: 1.27,
+    thermal: pvaThermal,
+    hazards: [],
+    sources: { ...polymerSources },
+  },
+  {
+    id: "pva-10-aq",
+    name: "Poly(vinyl alcohol), 10 wt% in water",
+    kind: "organic",
+    formula: "C2H4O",
+    density: 1.02,
+    assay: 0.1,
+    waterFraction: 0.9,
+    phaseDensity: 1.27,
+    thermal: pvaThermal,
+    hazards: [],
+    sources: {
+      ...polymerSources,
+      casNumber: "none: a solution prepared in the lab",
+      density: "10 wt% aqueous PVA solution, typical value (from memory)",
+      assay: "prepared concentration",
+      waterFraction: "balance of the prepared solution is water",
+      phaseDensity: "dry PVA, " + SRC.polymerHandbook,
+    },
+  },
+  {
+    id: "pcl",
+    name: "Poly(ε-caprolactone)",
+    kind: "organic",
+    casNumber: "24980-41-4",
+    formula: "C6H10O2",
+    density: 1.145,
+    thermal: { glassTransitionC: -60, meltingC: 60, degradationOnsetC: 350 },
+    hazards: [],
+    sources: { ...polymerSources },
+  },
+  {
+    id: "pdms-silanol",
+    name: "Poly(dimethylsiloxane), silanol-terminated",
+    kind: "organic",
+    casNumber: "70131-67-8",
+    formula: "C2H6OSi",
+    density: 0.97,
+    // No melting point given: the silanol-terminated oil is an amorphous liquid above its
+    // crystallisation range (about −40 °C), so a melting caution would flag every step.
+    thermal: { glassTransitionC: -125, degradationOnsetC: 300 },
+    hazards: [],
+    sources: { ...polymerSources, density: SRC.supplierDensity },
+  },
+  {
+    id: "chitosan",
+    name: "Chitosan",
+    kind: "organic",
+    casNumber: "9012-76-4",
+    formula: "C6H11NO4",
+    density: 1.35,
+    thermal: { degradationOnsetC: 220 },
+    hazards: [],
+    sources: {
+      ...polymerSources,
+      formula: "glucosamine repeat unit (fully deacetylated)",
+      density: "typical value for dry chitosan (from memory)",
+    },
+  },
+  {
+    id: "gelatin",
+    name: "Gelatin (type A or B)",
+    kind: "organic",
+    casNumber: "9000-70-8",
+    density: 1.35,
+    thermal: { meltingC: 35, degradationOnsetC: 220 },
+    hazards: [],
+    sources: {
+      casNumber: SRC.cas,
+      density: "typical value for dry gelatin (from memory)",
+      "thermal.meltingC": "helix–coil transition of hydrated gelatin gels, about 35 °C (from memory)",
+      "thermal.degradationOnsetC": SRC.tga,
+      hazards: SRC.ghsNone,
+    },
+  },
+  {
+    id: "epoxy-dgeba",
+    name: "Bisphenol A diglycidyl ether epoxy resin (DGEBA)",
+    kind: "organic",
+    casNumber: "1675-54-3",
+    formula: "C21H24O4",
+    molarMass: 340.419,
+    density: 1.16,
+    thermal: { degradationOnsetC: 300 },
+    hazards: ["H315", "H317", "H319", "H411"],
+    sources: {
+      formula: "pure DGEBA monomer; commercial resins are slightly oligomerised",
+      molarMass: SRC.ciaaw,
+      density: SRC.supplierDensity,
+      "thermal.degradationOnsetC": SRC.tga,
+      hazards: SRC.ghs,
+      casNumber: SRC.cas,
+    },
+  },
+  {
+    id: "pmma",
+    name: "Poly(methyl methacrylate)",
+    kind: "organic",
+    casNumber: "9011-14-7",
+    formula: "C5H8O2",
+    density: 1.18,
+    thermal: { glassTransitionC: 105, degradationOnsetC: 250 },
+    hazards: [],
+    sources: { ...polymerSources },
+  },
+];
+
+/** Sources shared by polymer substrates. */
+const substrateSources = {
+  ...polymerSources,
+  "thermal.maxServiceC": SRC.gradeMax,
+} as const;
+
+const substrates: Material[] = [
+  {
+    id: "polycarbonate",
+    name: "Polycarbonate (bisphenol A)",
+    kind: "substrate",
+    casNumber: "25037-45-0",
+    formula: "C16H14O3",
+    density: 1.2,
+    thermal: { glassTransitionC: 147, degradationOnsetC: 450, maxServiceC: 125 },
+    hazards: [],
+    sources: { ...substrateSources },
+  },
+  {
+    id: "pmma-sheet",
+    name: "PMMA sheet",
+    kind: "substrate",
+    casNumber: "9011-14-7",
+    formula: "C5H8O2",
+    density: 1.19,
+    thermal: { glassTransitionC: 105, degradationOnsetC: 250, maxServiceC: 80 },
+    hazards: [],
+    sources: { ...substrateSources },
+  },
+  {
+    id: "peek",
+    name: "PEEK",
+    kind: "substrate",
+    casNumber: "29658-26-2",
+    formula: "C19H12O3",
+    density: 1.3,
+    thermal: { glassTransitionC: 143, meltingC: 343, degradationOnsetC: 550, maxServiceC: 250 },
+    hazards: [],
+    sources: { ...substrateSources, density: SRC.markHandbook },
+  },
+  {
+    id: "pet",
+    name: "PET film",
+    kind: "substrate",
+    casNumber: "25038-59-9",
+    formula: "C10H8O4",
+    density: 1.38,
+    thermal: { glassTransitionC: 75, meltingC: 255, degradationOnsetC: 400, maxServiceC: 105 },
+    hazards: [],
+    sources: { ...substrateSources },
+  },
+  {
+    id: "pla",
+    name: "PLA",
+    kind: "substrate",
+    casNumber: "26100-51-6",
+    formula: "C3H4O2",
+    density: 1.24,
+    thermal: { glassTransitionC: 58, meltingC: 170, degradationOnsetC: 300, maxServiceC: 50 },
+    hazards: [],
+    sources: { ...substrateSources, density: SRC.markHandbook },
+  },
+  {
+    id: "uhmwpe",
+    name: "UHMWPE",
+    kind: "substrate",
+    casNumber: "9002-88-4",
+    formula: "C2H4",
+    density: 0.93,
+    thermal: { glassTransitionC: -120, meltingC: 135, degradationOnsetC: 400, maxServiceC: 80 },
+    hazards: [],
+    sources: { ...substrateSources },
+  },
+  {
+    id: "aluminium-6061",
+    name: "Aluminium alloy 6061-T6",
+    kind: "substrate",
+    density: 2.7,
+    thermal: { meltingC: 582, maxServiceC: 150 },
+    hazards: [],
+    sources: {
+      density: "ASM Handbook, aluminium alloy 6061 (from memory)",
+      "thermal.meltingC": "solidus of alloy 6061, ASM Handbook (from memory)",
+      "thermal.maxServiceC": "the T6 temper over-ages and loses strength above about 150–175 °C (from memory)",
+      hazards: SRC.ghsNone,
+    },
+  },
+  {
+    id: "soda-lime-glass",
+    name: "Soda-lime glass",
+    kind: "substrate",
+    casNumber: "65997-17-3",
+    density: 2.5,
+    thermal: { glassTransitionC: 564, maxServiceC: 500 },
+    hazards: [],
+    sources: {
+      density: "CRC Handbook of Chemistry and Physics, soda-lime glass ≈ 2.5 g/cm³ (from memory)",
+      "thermal.glassTransitionC": "typical soda-lime float glass (from memory)",
+      "thermal.maxServiceC": "kept below the strain point (≈ 510 °C) to avoid distortion (from memory)",
+      hazards: SRC.ghsNone,
+      casNumber: SRC.cas,
+    },
+  },
+];
+
+/** Sources shared by solvents. */
+const solventSources = {
+  formula: "composition of the compound",
+  molarMass: SRC.ciaaw,
+  density: SRC.crcOrganic,
+  hazards: SRC.ghs,
+  casNumber: SRC.cas,
+} as const;
+
+const solvents: Material[] = [
+  {
+    id: "ethanol",
+    name: "Ethanol, absolute",
+    kind: "solvent",
+    casNumber: "64-17-5",
+    formula: "C2H5OH",
+    molarMass: 46.069,
+    density: 0.7893,
+    hazards: ["H225", "H319"],
+    sources: { ...solventSources },
+  },
+  {
+    id: "methanol",
+    name: "Methanol",
+    kind: "solvent",
+    casNumber: "67-56-1",
+    formula: "CH3OH",
+    molarMass: 32.042,
+    density: 0.7914,
+    hazards: ["H225", "H301", "H311", "H331", "H370"],
+    sources: { ...solventSources },
+  },
+  {
+    id: "1-propanol",
+    name: "1-Propanol",
+    kind: "solvent",
+    casNumber: "71-23-8",
+    formula: "C3H7OH",
+    molarMass: 60.096,
+    density: 0.8035,
+    hazards: ["H225", "H318", "H336"],
+    sources: { ...solventSources },
+  },
+  {
+    id: "2-propanol",
+    name: "2-Propanol",
+    kind: "solvent",
+    casNumber: "67-63-0",
+    formula: "C3H7OH",
+    molarMass: 60.096,
+    density: 0.7855,
+    hazards: ["H225", "H319", "H336"],
+    sources: { ...solventSources },
+  },
+  {
+    id: "1-butanol",
+    name: "1-Butanol",
+    kind: "solvent",
+    casNumber: "71-36-3",
+    formula: "C4H9OH",
+    molarMass: 74.123,
+    density: 0.8095,
+    hazards: ["H226", "H302", "H315", "H318", "H335", "H336"],
+    sources: { ...solventSources },
+  },
+];
+
+const waters: Material[] = [
+  {
+    id: "water-di",
+    name: "Deionised water",
+    kind: "water",
+    casNumber: "7732-18-5",
+    formula: "H2O",
+    molarMass: 18.015,
+    density: 0.9982,
+    hazards: [],
+    sources: {
+      formula: "composition of the compound",
+      molarMass: SRC.ciaaw,
+      density: SRC.water20,
+      hazards: "not hazardous",
+      casNumber: SRC.cas,
+    },
+  },
+];
+
+/** Sources shared by catalyst stocks. */
+const catalystSources = {
+  formula: "active compound",
+  molarMass: SRC.ciaaw,
+  density: SRC.crcAqueous,
+  assay: SRC.stock,
+  waterFraction: SRC.stock,
+  hazards: SRC.ghs,
+  casNumber: "CAS Registry Number of the active compound (from memory; check digit verified in tests)",
+} as const;
+
+const catalysts: Material[] = [
+  {
+    id: "hcl-37",
+    name: "Hydrochloric acid, 37 wt%",
+    kind: "catalyst",
+    casNumber: "7647-01-0",
+    formula: "HCl",
+    molarMass: 36.458,
+    density: 1.18,
+    assay: 0.37,
+    waterFraction: 0.63,
+    hazards: ["H290", "H314", "H335"],
+    sources: { ...catalystSources },
+  },
+  {
+    id: "hno3-65",
+    name: "Nitric acid, 65 wt%",
+    kind: "catalyst",
+    casNumber: "7697-37-2",
+    formula: "HNO3",
+    molarMass: 63.012,
+    density: 1.39,
+    assay: 0.65,
+    waterFraction: 0.35,
+    hazards: ["H272", "H290", "H314", "H331"],
+    sources: { ...catalystSources },
+  },
+  {
+    id: "acetic-acid-glacial",
+    name: "Acetic acid, glacial",
+    kind: "catalyst",
+    casNumber: "64-19-7",
+    formula: "CH3COOH",
+    molarMass: 60.052,
+    density: 1.049,
+    hazards: ["H226", "H314"],
+    sources: {
+      formula: "composition of the compound",
+      molarMass: SRC.ciaaw,
+      density: SRC.crcOrganic,
+      hazards: SRC.ghs,
+      casNumber: SRC.cas,
+    },
+  },
+  {
+    id: "ammonia-25",
+    name: "Aqueous ammonia, 25 wt%",
+    kind: "catalyst",
+    casNumber: "1336-21-6",
+    formula: "NH3",
+    molarMass: 17.031,
+    density: 0.907,
+    assay: 0.25,
+    waterFraction: 0.75,
+    hazards: ["H290", "H314", "H335", "H400"],
+    sources: { ...catalystSources, casNumber: "CAS Registry Number of ammonium hydroxide solution (from memory; check digit verified in tests)" },
+  },
+];
+
+/** Property paths a material defines ("density", "precursor.residueDensity", "thermal.meltingC" …). */
+function definedProperties(material: Material): Set<string> {
+  const paths = new Set<string>();
+  for (const [key, value] of Object.entries(material)) {
+    if (value === undefined || value === null || ["id", "name", "kind", "sources"].includes(key)) continue;
+    if (key === "precursor" || key === "thermal") {
+      for (const [inner, innerValue] of Object.entries(value as object)) {
+        if (innerValue !== undefined) paths.add(`${key}.${inner}`);
+      }
+    } else {
+      paths.add(key);
+    }
+  }
+  return paths;
+}
+
+/** Keeps only the sources of properties the material actually defines (the shared source maps are broader). */
+function keepRelevantSources(material: Material): Material {
+  const defined = definedProperties(material);
+  const sources = Object.fromEntries(Object.entries(material.sources ?? {}).filter(([key]) => defined.has(key)));
+  return { ...material, sources };
+}
+
+/**
+ * The reference materials library: precursors, organic phases, substrates,
+ * solvents, water and catalyst stocks, with stable slug ids.
+ *
+ * @example
+ * ```ts
+ * referenceMaterials.find((m) => m.id === "teos")?.molarMass; // 208.329 g/mol
+ * ```
+ */
+export const referenceMaterials: Material[] = [
+  ...precursors,
+  ...organics,
+  ...substrates,
+  ...solvents,
+  ...waters,
+  ...catalysts,
+].map(keepRelevantSources);
+
+/**
+ * Looks up a reference material by its slug id.
+ *
+ * @example
+ * ```ts
+ * referenceMaterial("ethanol").density; // 0.7893 g/cm³
+ * ```
+ */
+export function referenceMaterial(id: string): Material {
+  const found = referenceMaterials.find((material) => material.id === id);
+  if (!found) throw new Error(`no reference material "${id}"`);
+  return found;
+}

@@ -1,0 +1,50 @@
+/**
+ * Gelwright formulation engine: pure TypeScript, no framework, database or
+ * auth imports; runs on the server and in the browser.
+ */
+export { computeFormulation } from "./compute";
+export { ENGINE_VERSION, WATER_MOLAR_MASS_G_PER_MOL, DEFAULT_THERMAL_MARGIN_C, WEIGHT_FRACTION_SUM_TOLERANCE } from "./constants";
+export { FormulationError, isFormulationError, type FieldIssue, type FormulationErrorCode } from "./errors";
+export {
+  materialSchema,
+  precursorDataSchema,
+  thermalDataSchema,
+  MATERIAL_KINDS,
+  type Material,
+  type MaterialKind,
+  type PrecursorData,
+  type ThermalData,
+} from "./material-schema";
+export {
+  formulationInputSchema,
+  basisSchema,
+  componentSchema,
+  waterSpecSchema,
+  solventSpecSchema,
+  catalystSpecSchema,
+  processStepSchema,
+  type FormulationInput,
+  type Basis,
+  type Component,
+  type ProcessStep,
+} from "./input-schema";
+export { parseFormulationInput } from "./validate";
+export { parseFormula, molarMassOf } from "./formula";
+export { residueYield } from "./precursor";
+export { hardLimit } from "./thermal";
+export type {
+  FormulationResult,
+  RecipeLine,
+  LineRole,
+  WaterResult,
+  AlcoholRelease,
+  SolResult,
+  CompositeResult,
+  CompositePhase,
+  Shrinkage,
+  ThermalResult,
+  ThermalCheck,
+  ThermalLimit,
+  ThermalStatus,
+  Notice,
+} from "./result-types";

@@ -1,0 +1,257 @@
+import { z } from "zod";
+import { WEIGHT_FRACTION_SUM_TOLERANCE } from "./constants";
+import { dec, ZERO } from "./decimal";
+import { materialSchema, type Material, type MaterialKind } from "./material-schema";
+import { BATCH_AMOUNT, DENSITY_G_PER_CM3, DURATION_H, MARGIN_C, MOLAR_RATIO, TEMPERATURE_C, WEIGHT_FRACTION } from "./limits";
+import { fraction, nonEmptyString, positiveNumber, rangedNumber, required, zeroOrRangedNumber } from "./zod-helpers";
+
+/**
+ * What fixes the batch size:
+ * - solidMass: dry composite mass `grams` (g);
+ * - solidsContent: sol mass `solMassGrams` (g) and solids content
+ *   `solidsFraction` (dry composite mass / sol mass, 0 < x < 1);
+ * - gelBody: mould volume `volumeMl` (mL), target bulk density `bulkDensity`
+ *   (g/cm³) and expected linear drying shrinkage `linearShrinkage` (0 ≤ s < 1,
+ *   default 0).
+ *
+ * @example
+ * ```ts
+ * basisSchema.parse({ type: "gelBody", volumeMl: 50, bulkDensity: 0.5, linearShrinkage: 0.25 });
+ * ```
+ */
+export const basisSchema = z.discriminatedUnion(
+  "type",
+  [
+    z.object({ type: z.literal("solidMass"), grams: rangedNumber("dry solid mass (g)", BATCH_AMOUNT) }),
+    z.object({
+      type: z.literal("solidsContent"),
+      solMassGrams: rangedNumber("sol mass (g)", BATCH_AMOUNT),
+      solidsFraction: positiveNumber("solids content").lt(1, { error: "solids content must be below 1" }),
+    }),
+    z.object({
+      type: z.literal("gelBody"),
+      volumeMl: rangedNumber("mould volume (mL)", BATCH_AMOUNT),
+      bulkDensity: rangedNumber("bulk density (g/cm³)", DENSITY_G_PER_CM3),
+      linearShrinkage: fraction("linear shrinkage", true).optional(),
+    }),
+  ],
+  { error: 'basis type must be "solidMass", "solidsContent" or "gelBody"' },
+);
+
+/**
+ * One component of the dry composite: a precursor (weight fraction of its
+ * residue) or an organic phase (dry weight fraction); 0 or 1e-6 … 1.
+ *
+ * @example
+ * ```ts
+ * componentSchema.parse({ materialId: "teos", weightFraction: 0.6 });
+ * ```
+ */
+export const componentSchema = z.object(
+  {
+    materialId: nonEmptyString("material id"),
+    weightFraction: zeroOrRangedNumber("weight fraction", WEIGHT_FRACTION),
+  },
+  { error: required("component", "an object") },
+);
+
+/**
+ * Water target: R (mol H2O per mol network-forming atom) or h (per mol hydrolysable group).
+ *
+ * @example
+ * ```ts
+ * waterSpecSchema.parse({ materialId: "water-di", ratio: "R", value: 4 });
+ * ```
+ */
+export const waterSpecSchema = z.object(
+  {
+    materialId: nonEmptyString("water material id"),
+    ratio: z.enum(["R", "h"], { error: 'water ratio must be "R" or "h"' }),
+    value: rangedNumber("water ratio", MOLAR_RATIO),
+  },
+  { error: required("water", "an object") },
+);
+
+/**
+ * Added solvent: mol per mol network-forming atom, or a fill to the basis's sol mass or mould volume.
+ *
+ * @example
+ * ```ts
+ * solventSpecSchema.parse({ materialId: "ethanol", mode: "molPerNetworkAtom", value: 4 });
+ * ```
+ */
+export const solventSpecSchema = z.discriminatedUnion(
+  "mode",
+  [
+    z.object({
+      materialId: nonEmptyString("solvent material id"),
+      mode: z.literal("molPerNetworkAtom"),
+      value: rangedNumber("solvent ratio (mol per mol network atom)", MOLAR_RATIO),
+    }),
+    z.object({ materialId: nonEmptyString("solvent material id"), mode: z.literal("fill") }),
+  ],
+  { error: 'solvent mode must be "molPerNetworkAtom" or "fill"' },
+);
+
+/**
+ * Catalyst: mol of the active acid or base per mol network-forming atom.
+ *
+ * @example
+ * ```ts
+ * catalystSpecSchema.parse({ materialId: "hcl-37", molPerNetworkAtom: 0.01 });
+ * ```
+ */
+export const catalystSpecSchema = z.object(
+  {
+    materialId: nonEmptyString("catalyst material id"),
+    molPerNetworkAtom: rangedNumber("catalyst ratio (mol per mol network atom)", MOLAR_RATIO),
+  },
+  { error: required("catalyst", "an object") },
+);
+
+/**
+ * A process step: name, temperature (°C) and duration (h).
+ *
+ * @example
+ * ```ts
+ * processStepSchema.parse({ name: "Thermal cure", temperatureC: 120, durationH: 2 });
+ * ```
+ */
+export const processStepSchema = z.object(
+  {
+    name: nonEmptyString("step name"),
+    temperatureC: rangedNumber("step temperature (°C)", TEMPERATURE_C),
+    durationH: rangedNumber("step duration (h)", DURATION_H),
+  },
+  { error: required("process step", "an object") },
+);
+
+type Ctx = z.RefinementCtx;
+
+function addIssue(ctx: Ctx, path: (string | number)[], code: string, message: string): void {
+  ctx.addIssue({ code: "custom", path, message, params: { code } });
+}
+
+const KIND_WORDS: Record<MaterialKind, string> = {
+  precursor: "a precursor",
+  organic: "an organic phase",
+  substrate: "a substrate",
+  solvent: "a solvent",
+  water: "water",
+  catalyst: "a catalyst",
+};
+
+function checkReference(
+  ctx: Ctx,
+  byId: Map<string, Material>,
+  id: string,
+  path: (string | number)[],
+  kinds: readonly MaterialKind[],
+): void {
+  const material = byId.get(id);
+  if (!material) {
+    addIssue(ctx, path, "unknown_material", `material "${id}" is not in the materials list`);
+    return;
+  }
+  if (!kinds.includes(material.kind)) {
+    const wanted = kinds.map((kind) => KIND_WORDS[kind]).join(" or ");
+    addIssue(ctx, path, "wrong_kind", `"${material.name}" is ${KIND_WORDS[material.kind]}, expected ${wanted}`);
+  }
+}
+
+/**
+ * Everything the engine needs, inline (the engine never reads a database).
+ * Shapes and ranges are checked field by field; cross-field checks (weight
+ * fractions summing to 1 within 1e-6, references to known materials of the
+ * right kind, no fill without a sol mass or mould volume) are custom issues
+ * whose `params.code` is the FormulationError code.
+ *
+ * @example
+ * ```ts
+ * const result = formulationInputSchema.safeParse(body);
+ * if (!result.success) console.log(result.error.issues);
+ * ```
+ */
+export const formulationInputSchema = z
+  .object(
+    {
+      materials: z.array(materialSchema, { error: required("materials", "a list") }),
+      basis: basisSchema,
+      components: z
+        .array(componentSchema, { error: required("components", "a list") })
+        .min(1, { error: "at least one component is required" }),
+      water: waterSpecSchema,
+      solvent: solventSpecSchema.optional(),
+      catalyst: catalystSpecSchema.optional(),
+      substrateId: nonEmptyString("substrate id").optional(),
+      steps: z.array(processStepSchema, { error: required("process steps", "a list") }),
+      marginC: rangedNumber("thermal margin (°C)", MARGIN_C).optional(),
+      measuredBulkDensity: rangedNumber("measured bulk density (g/cm³)", DENSITY_G_PER_CM3).optional(),
+      /** Optional order of addition: material ids; lines not listed follow in the default order. */
+      additionOrder: z.array(nonEmptyString("material id"), { error: required("addition order", "a list") }).optional(),
+    },
+    { error: required("formulation input", "an object") },
+  )
+  .superRefine((input, ctx) => {
+    const byId = new Map<string, Material>();
+    input.materials.forEach((material, index) => {
+      if (byId.has(material.id)) {
+        addIssue(ctx, ["materials", index, "id"], "duplicate_material", `material id "${material.id}" appears twice`);
+      } else {
+        byId.set(material.id, material);
+      }
+    });
+
+    const seen = new Set<string>();
+    let total = ZERO;
+    input.components.forEach((component, index) => {
+      const path = ["components", index, "materialId"];
+      checkReference(ctx, byId, component.materialId, path, ["precursor", "organic"]);
+      if (seen.has(component.materialId)) {
+        addIssue(ctx, path, "duplicate_component", `"${component.materialId}" is listed twice; combine its weight fractions`);
+      }
+      seen.add(component.materialId);
+      total = total.plus(dec(component.weightFraction));
+    });
+    if (total.minus(1).abs().greaterThan(WEIGHT_FRACTION_SUM_TOLERANCE)) {
+      addIssue(
+        ctx,
+        ["components"],
+        "fractions_do_not_sum",
+        `weight fractions sum to ${Number(total.toPrecision(8))}, they must sum to 1`,
+      );
+    }
+
+    checkReference(ctx, byId, input.water.materialId, ["water", "materialId"], ["water"]);
+    if (input.solvent) {
+      checkReference(ctx, byId, input.solvent.materialId, ["solvent", "materialId"], ["solvent"]);
+      if (input.solvent.mode === "fill" && input.basis.type === "solidMass") {
+        addIssue(
+          ctx,
+          ["solvent", "mode"],
+          "nothing_to_fill",
+          "a solvent fill needs a sol mass (solids-content basis) or a mould volume (gel-body basis); a dry-solid-mass basis leaves nothing to fill",
+        );
+      }
+    }
+    if (input.catalyst) {
+      checkReference(ctx, byId, input.catalyst.materialId, ["catalyst", "materialId"], ["catalyst"]);
+    }
+    if (input.substrateId !== undefined) {
+      checkReference(ctx, byId, input.substrateId, ["substrateId"], ["substrate"]);
+    }
+    input.additionOrder?.forEach((id, index) => {
+      if (!byId.has(id)) {
+        addIssue(ctx, ["additionOrder", index], "unknown_material", `material "${id}" is not in the materials list`);
+      }
+    });
+  });
+
+/** The engine's input, see `formulationInputSchema`. */
+export type FormulationInput = z.infer<typeof formulationInputSchema>;
+/** The batch-size basis, see `basisSchema`. */
+export type Basis = z.infer<typeof basisSchema>;
+/** A dry-composite component, see `componentSchema`. */
+export type Component = z.infer<typeof componentSchema>;
+/** A process step, see `processStepSchema`. */
+export type ProcessStep = z.infer<typeof processStepSchema>;

@@ -1,0 +1,189 @@
+import { z } from "zod";
+import {
+  ASSAY,
+  DENSITY_G_PER_CM3,
+  MOLAR_MASS_G_PER_MOL,
+  PER_MOLECULE,
+  RESIDUE_UNITS_PER_MOLECULE,
+  TEMPERATURE_C,
+} from "./limits";
+import { fraction, nonEmptyString, rangedNumber, required, zeroOrRangedNumber } from "./zod-helpers";
+
+/** The kinds of material a formulation can reference. */
+export const MATERIAL_KINDS = ["precursor", "organic", "substrate", "solvent", "water", "catalyst"] as const;
+
+/** Tolerance on assay + waterFraction + solventFraction ≤ 1 (dimensionless). Common practice, no source. */
+const COMPOSITION_SUM_TOLERANCE = 1e-9;
+
+/** CAS Registry Number layout: 2–7 digits, 2 digits, 1 check digit. */
+const CAS_NUMBER = /^\d{2,7}-\d{2}-\d$/;
+
+/**
+ * CAS Registry Number check digit: the sum of each digit (excluding the check
+ * digit) times its position counted from the right, modulo 10.
+ * Source: CAS, "CAS Registry Number" format description (published algorithm).
+ *
+ * @example
+ * ```ts
+ * casCheckDigitValid("7732-18-5"); // true (water: 8·1 + 1·2 + 2·3 + 3·4 + 7·5 + 7·6 = 105 → 5)
+ * ```
+ */
+export function casCheckDigitValid(cas: string): boolean {
+  const digits = cas.replace(/-/g, "");
+  const check = Number(digits.slice(-1));
+  const body = digits.slice(0, -1);
+  let total = 0;
+  for (let i = 0; i < body.length; i += 1) total += Number(body[body.length - 1 - i]) * (i + 1);
+  return total % 10 === check;
+}
+
+/**
+ * True for a plain object whose values are all strings (property → source).
+ *
+ * @example
+ * ```ts
+ * isStringMap({ density: "CRC Handbook" }); // true
+ * ```
+ */
+export function isStringMap(value: unknown): value is Record<string, string> {
+  if (typeof value !== "object" || value === null || Array.isArray(value)) return false;
+  for (const key in value) {
+    if (typeof (value as Record<string, unknown>)[key] !== "string") return false;
+  }
+  return true;
+}
+
+/** GHS hazard statement code, e.g. "H225", "H360FD", "EUH014" (UN GHS). */
+const HAZARD_CODE = /^(EUH|H)\d{3}[A-Za-z]{0,2}$/;
+
+/**
+ * What a precursor leaves in the dry solid and what it releases.
+ * - residueFormula / residueMolarMass (g/mol): the oxide (SiO2, TiO2, Al2O3 …)
+ *   or R-SiO1.5 unit of an organically modified silane;
+ * - residuePerMolecule: residue formula units per precursor molecule
+ *   (1 for TEOS → SiO2, 0.5 for Al(OR)3 → ½ Al2O3);
+ * - residueDensity (g/cm³): skeletal density of the dry residue phase;
+ * - networkAtomsPerMolecule: Si, Ti, Zr, Al, P atoms per molecule;
+ * - hydrolysableGroupsPerMolecule: alkoxy groups per molecule;
+ * - leavingAlcohol: alcohol released by hydrolysis (name, molar mass g/mol);
+ * - conversionTemperatureC (°C): temperature needed to turn it into the stated residue.
+ *
+ * @example
+ * ```ts
+ * precursorDataSchema.parse({ residueFormula: "SiO2", residueMolarMass: 60.083, residuePerMolecule: 1,
+ *   residueDensity: 2.2, networkAtomsPerMolecule: 1, hydrolysableGroupsPerMolecule: 4 });
+ * ```
+ */
+export const precursorDataSchema = z.object(
+  {
+    residueFormula: nonEmptyString("residue formula"),
+    residueMolarMass: rangedNumber("residue molar mass (g/mol)", MOLAR_MASS_G_PER_MOL),
+    residuePerMolecule: rangedNumber("residue formula units per molecule", RESIDUE_UNITS_PER_MOLECULE),
+    residueDensity: rangedNumber("residue density (g/cm³)", DENSITY_G_PER_CM3),
+    networkAtomsPerMolecule: zeroOrRangedNumber("network-forming atoms per molecule", PER_MOLECULE),
+    hydrolysableGroupsPerMolecule: zeroOrRangedNumber("hydrolysable groups per molecule", PER_MOLECULE),
+    leavingAlcohol: z
+      .object(
+        {
+          name: nonEmptyString("alcohol name"),
+          molarMass: rangedNumber("alcohol molar mass (g/mol)", MOLAR_MASS_G_PER_MOL),
+        },
+        { error: required("leaving alcohol", "an object") },
+      )
+      .optional(),
+    conversionTemperatureC: rangedNumber("conversion temperature (°C)", TEMPERATURE_C).optional(),
+  },
+  { error: required("precursor data", "an object") },
+);
+
+/**
+ * Thermal limits, °C: glass transition, melting, degradation onset (e.g.
+ * onset of mass loss in thermogravimetry) and a grade-specific maximum
+ * service temperature.
+ *
+ * @example
+ * ```ts
+ * thermalDataSchema.parse({ glassTransitionC: 147, degradationOnsetC: 450, maxServiceC: 125 });
+ * ```
+ */
+export const thermalDataSchema = z.object(
+  {
+    glassTransitionC: rangedNumber("glass transition (°C)", TEMPERATURE_C).optional(),
+    meltingC: rangedNumber("melting point (°C)", TEMPERATURE_C).optional(),
+    degradationOnsetC: rangedNumber("degradation onset (°C)", TEMPERATURE_C).optional(),
+    maxServiceC: rangedNumber("maximum service temperature (°C)", TEMPERATURE_C).optional(),
+  },
+  { error: required("thermal data", "an object") },
+);
+
+/**
+ * A material as supplied. Units: molarMass g/mol of the active compound
+ * (including water of crystallisation); density g/cm³ as supplied;
+ * phaseDensity g/cm³ of the dry organic phase; assay, waterFraction and
+ * solventFraction are mass fractions of the material as supplied. For
+ * polymers, `formula` is the repeat unit.
+ *
+ * @example
+ * ```ts
+ * materialSchema.parse({ id: "ethanol", name: "Ethanol", kind: "solvent", formula: "C2H6O", molarMass: 46.069, density: 0.7893 });
+ * ```
+ */
+export const materialSchema = z
+  .object(
+    {
+      id: nonEmptyString("material id"),
+      name: nonEmptyString("material name"),
+      kind: z.enum(MATERIAL_KINDS, {
+        error: `kind must be one of ${MATERIAL_KINDS.join(", ")}`,
+      }),
+      formula: z.string({ error: required("formula", "text") }).optional(),
+      casNumber: z
+        .string({ error: required("CAS number", "text") })
+        .regex(CAS_NUMBER, { error: "CAS number must look like 78-10-4" })
+        .refine(casCheckDigitValid, { error: "CAS number check digit does not match" })
+        .nullable()
+        .optional(),
+      molarMass: rangedNumber("molar mass (g/mol)", MOLAR_MASS_G_PER_MOL).optional(),
+      density: rangedNumber("density (g/cm³)", DENSITY_G_PER_CM3).optional(),
+      assay: rangedNumber("assay", ASSAY).optional(),
+      waterFraction: fraction("water fraction", true).optional(),
+      solventFraction: fraction("solvent fraction", true).optional(),
+      crystalWaterPerFormula: zeroOrRangedNumber("water of crystallisation per formula unit", PER_MOLECULE).optional(),
+      phaseDensity: rangedNumber("dry phase density (g/cm³)", DENSITY_G_PER_CM3).optional(),
+      precursor: precursorDataSchema.optional(),
+      thermal: thermalDataSchema.optional(),
+      hazards: z
+        .array(
+          z.string({ error: required("hazard statement", "text") }).regex(HAZARD_CODE, {
+            error: "hazard statements must be GHS codes such as H225",
+          }),
+          { error: required("hazards", "a list of GHS codes") },
+        )
+        .optional(),
+      // A single check instead of a per-entry record schema: sources never enter the
+      // arithmetic, and this keeps validation cheap on every engine call.
+      sources: z
+        .custom<Record<string, string>>(isStringMap, { error: "sources must map each property name to a source text" })
+        .optional(),
+    },
+    { error: required("material", "an object") },
+  )
+  .superRefine((material, ctx) => {
+    const total = (material.assay ?? 1) + (material.waterFraction ?? 0) + (material.solventFraction ?? 0);
+    if (total > 1 + COMPOSITION_SUM_TOLERANCE) {
+      ctx.addIssue({
+        code: "custom",
+        path: ["assay"],
+        message: `assay + water fraction + solvent fraction is ${Number(total.toPrecision(6))}, it must not exceed 1`,
+      });
+    }
+  });
+
+/** A material as supplied, see `materialSchema`. */
+export type Material = z.infer<typeof materialSchema>;
+/** A material's kind. */
+export type MaterialKind = (typeof MATERIAL_KINDS)[number];
+/** Precursor data of a material, see `precursorDataSchema`. */
+export type PrecursorData = z.infer<typeof precursorDataSchema>;
+/** Thermal limits of a material, see `thermalDataSchema`. */
+export type ThermalData = z.infer<typeof thermalDataSchema>;

@@ -1,0 +1,149 @@
+/**
+ * Types of the engine's result. All numbers are plain JS numbers at full
+ * precision; rounding is for display only.
+ */
+
+/** Role of a dispensed material in the batch. */
+export type LineRole = "precursor" | "organic" | "solvent" | "water" | "catalyst";
+
+/** One dispensed material of the batch recipe. */
+export interface RecipeLine {
+  materialId: string;
+  role: LineRole;
+  /** mol of the active compound (precursor, solvent, catalyst) or of water to add. */
+  moles?: number;
+  /** g to weigh, as supplied. */
+  massGrams: number;
+  /** mL to dispense, as supplied (mass / density as supplied). */
+  volumeMl: number;
+  /** g of residue (precursor) or of dry phase (organic) in the dry composite. */
+  residueGrams?: number;
+  /** mol of network-forming atoms (Si, Ti, Zr, Al, P). */
+  networkAtomMol?: number;
+  /** mol of hydrolysable (alkoxy) groups. */
+  hydrolysableGroupMol?: number;
+  /** mol of water carried (solution water and water of crystallisation). */
+  carriedWaterMol?: number;
+  /** g of solvent carried (e.g. 1-propanol in a zirconium propoxide solution). */
+  carriedSolventGrams?: number;
+}
+
+/** Water bookkeeping, mol unless stated. */
+export interface WaterResult {
+  /** W = R·Σa or h·Σg. */
+  targetMol: number;
+  /** C, water brought by the other materials. */
+  carriedMol: number;
+  /** max(W − C, 0). */
+  addMol: number;
+  addGrams: number;
+  addMl: number;
+  /** Σg: water for full hydrolysis. */
+  hydrolysisMol: number;
+  /** Σg / 2: net water consumed by complete condensation. */
+  condensationMol: number;
+  /** (C + added) / Σa. */
+  effectiveR: number;
+  /** (C + added) / Σg. */
+  effectiveH: number;
+}
+
+/** Alcohol released on full hydrolysis. */
+export interface AlcoholRelease {
+  name: string;
+  mol: number;
+  grams: number;
+}
+
+/** The sol (everything dispensed, ideal mixing). */
+export interface SolResult {
+  massGrams: number;
+  /** mL, ideal mixing (Σ mass / density): an approximation. */
+  volumeMl: number;
+  /** g of dry composite per litre of sol. */
+  residueGramsPerL: number;
+  /** mol network-forming atoms per litre of sol. */
+  networkAtomMolarity: number;
+  /** dry composite mass / sol mass. */
+  solidsFraction: number;
+}
+
+/** One phase of the dry composite. */
+export interface CompositePhase {
+  materialId: string;
+  residueFormula?: string;
+  weightFraction: number;
+  volumeFraction: number;
+  /** g/cm³ of the dry phase. */
+  density: number;
+}
+
+/** Volumetric and linear shrinkage (fractions, 0.3 = 30 %). */
+export interface Shrinkage {
+  volumetric: number;
+  linear: number;
+}
+
+/** The ideal dry composite. */
+export interface CompositeResult {
+  /** g. */
+  massGrams: number;
+  /** g/cm³, rule of mixtures. */
+  theoreticalDensity: number;
+  /** 1 − ρb / ρth, when a bulk density is known. */
+  porosity?: number;
+  phases: CompositePhase[];
+  /** sol → dense solid. */
+  denseShrinkage: Shrinkage;
+  /** sol → dry gel of the known bulk density. */
+  dryGelShrinkage?: Shrinkage;
+}
+
+/** Status of a thermal check, worst last. */
+export type ThermalStatus = "clear" | "caution" | "fail";
+
+/** Which thermal limit a check or the allowed maximum refers to. */
+export type ThermalLimit = "degradationOnset" | "maxService" | "melting" | "glassTransition" | "conversion";
+
+/** One (material × step) thermal check. */
+export interface ThermalCheck {
+  materialId: string;
+  stepName: string;
+  /** °C of the step. */
+  temperatureC: number;
+  limit: ThermalLimit;
+  /** °C of that limit. */
+  limitC: number;
+  /** °C margin applied. */
+  marginC: number;
+  status: ThermalStatus;
+}
+
+/** Thermal compatibility of the process steps. */
+export interface ThermalResult {
+  status: ThermalStatus;
+  /** °C: lowest (hard limit − margin) over organic phases and the substrate. */
+  maxAllowedC?: number;
+  binding?: { materialId: string; limit: ThermalLimit };
+  checks: ThermalCheck[];
+}
+
+/** A message for the formulator or reviewer. */
+export interface Notice {
+  level: "info" | "caution" | "error";
+  code: string;
+  message: string;
+  field?: string;
+}
+
+/** Everything computeFormulation derives from a FormulationInput. */
+export interface FormulationResult {
+  engineVersion: string;
+  lines: RecipeLine[];
+  water: WaterResult;
+  alcohol: AlcoholRelease[];
+  sol: SolResult;
+  composite: CompositeResult;
+  thermal: ThermalResult;
+  notices: Notice[];
+}

@@ -1,0 +1,103 @@
+import { WATER_MOLAR_MASS_G_PER_MOL } from "./constants";
+import { type Dec, dec, ONE, WATER_MOLAR_MASS, ZERO } from "./decimal";
+import { FormulationError } from "./errors";
+import { requireDensity, waterFractionOf, type IndexedMaterial } from "./material-index";
+
+/** What a fill makes the sol up to. */
+export interface FillTarget {
+  /** "mass": sol mass in g (solids-content basis); "volume": mould volume in mL (gel-body basis). */
+  kind: "mass" | "volume";
+  /** g or mL. */
+  amount: Dec;
+}
+
+/** Result of a fill: solvent as supplied (g) and water still to add (mol). */
+export interface FillResult {
+  solventGrams: Dec;
+  addWaterMol: Dec;
+}
+
+/**
+ * Solves a solvent fill (chemistry: "Solvent 2."): the added solvent makes
+ * the sol up to the basis's sol mass (or mould volume, ideal mixing),
+ * counting the water the solvent itself carries toward the water target.
+ * With c_s the cost of 1 g solvent (1 g, or 1/ρs mL), c_w the cost of 1 mol
+ * added water (M_w g, or M_w/ρw mL) and p = waterFraction / 18.015 the water
+ * carried per g solvent, the solvent mass m solves
+ * m · c_s + max(0, need − m · p) · c_w = target − others.
+ * Throws "mould_too_small" (field basis.volumeMl) or "solids_content_too_high"
+ * (field basis.solidsFraction) when the other reagents alone exceed the target.
+ *
+ * @param p - target; mass and volume of everything else; water still needed
+ *   (mol, W − C without the solvent, may be negative); solvent and water materials
+ * @returns solvent grams and water to add (mol), both ≥ 0
+ * @example
+ * ```ts
+ * // 100 g sol, others 40 g, 0.5 mol water needed (9.0075 g), dry ethanol → 50.9925 g ethanol
+ * solveFill({ target: { kind: "mass", amount: new Dec(100) }, otherGrams: new Dec(40), otherMl: new Dec(45),
+ *   waterNeededMol: new Dec(0.5), solvent: ethanol, water: waterDi }).solventGrams.toNumber(); // 50.9925
+ * ```
+ */
+export function solveFill(p: {
+  target: FillTarget;
+  otherGrams: Dec;
+  otherMl: Dec;
+  waterNeededMol: Dec;
+  solvent: IndexedMaterial;
+  water: IndexedMaterial;
+}): FillResult {
+  const isVolume = p.target.kind === "volume";
+  const needMol = p.waterNeededMol.greaterThan(0) ? p.waterNeededMol : ZERO;
+  const waterMolarMass = dec(p.water.material.molarMass ?? WATER_MOLAR_MASS_G_PER_MOL);
+  const solventCost = isVolume ? ONE.div(requireDensity(p.solvent)) : ONE;
+  const waterCost = needMol.isZero()
+    ? ZERO
+    : isVolume
+      ? waterMolarMass.div(requireDensity(p.water))
+      : waterMolarMass;
+  const carriedPerGram = waterFractionOf(p.solvent.material).div(WATER_MOLAR_MASS);
+  const available = p.target.amount.minus(isVolume ? p.otherMl : p.otherGrams);
+  const reagentsAlone = p.target.amount.minus(available).plus(needMol.times(waterCost));
+
+  let solventGrams: Dec;
+  let addWaterMol: Dec;
+  if (needMol.isZero()) {
+    solventGrams = available.div(solventCost);
+    addWaterMol = ZERO;
+  } else {
+    const coefficient = solventCost.minus(carriedPerGram.times(waterCost));
+    if (!coefficient.greaterThan(0)) {
+      throw new FormulationError(
+        "invalid_input",
+        `${p.solvent.path}.waterFraction`,
+        `${p.solvent.material.name} carries so much water that adding it cannot make up the sol; use a drier solvent`,
+      );
+    }
+    solventGrams = available.minus(needMol.times(waterCost)).div(coefficient);
+    addWaterMol = needMol.minus(solventGrams.times(carriedPerGram));
+    if (addWaterMol.isNegative()) {
+      solventGrams = available.div(solventCost);
+      addWaterMol = ZERO;
+    }
+  }
+
+  if (solventGrams.isNegative()) {
+    const unit = isVolume ? "mL" : "g";
+    const show = (value: Dec): string => String(Number(value.toPrecision(5)));
+    if (isVolume) {
+      throw new FormulationError(
+        "mould_too_small",
+        "basis.volumeMl",
+        `the reagents alone take ${show(reagentsAlone)} ${unit}, more than the ${show(p.target.amount)} ${unit} mould; ` +
+          "lower the bulk density, raise the expected shrinkage or use a larger mould",
+      );
+    }
+    throw new FormulationError(
+      "solids_content_too_high",
+      "basis.solidsFraction",
+      `the reagents alone weigh ${show(reagentsAlone)} ${unit}, more than the ${show(p.target.amount)} ${unit} sol; ` +
+        "lower the solids content",
+    );
+  }
+  return { solventGrams, addWaterMol };
+}

@@ -1,0 +1,45 @@
+import { FormulationError, type FieldIssue, type FormulationErrorCode } from "./errors";
+import { formulationInputSchema, type FormulationInput } from "./input-schema";
+import { fieldPath } from "./zod-helpers";
+
+const CUSTOM_CODES: ReadonlySet<string> = new Set<FormulationErrorCode>([
+  "fractions_do_not_sum",
+  "unknown_material",
+  "duplicate_material",
+  "duplicate_component",
+  "wrong_kind",
+  "nothing_to_fill",
+]);
+
+function codeOf(issue: { code: string; params?: unknown }): FormulationErrorCode {
+  if (issue.code === "custom" && issue.params && typeof issue.params === "object") {
+    const code = (issue.params as { code?: unknown }).code;
+    if (typeof code === "string" && CUSTOM_CODES.has(code)) return code as FormulationErrorCode;
+  }
+  return "invalid_input";
+}
+
+/**
+ * Validates raw input against `formulationInputSchema`. Throws a
+ * FormulationError naming the first offending field (code "invalid_input",
+ * or the specific code of a cross-field check such as
+ * "fractions_do_not_sum"), with every issue in `error.issues`.
+ *
+ * @param raw - untrusted input (e.g. a parsed request body)
+ * @returns the validated FormulationInput
+ * @example
+ * ```ts
+ * const input = parseFormulationInput(JSON.parse(body));
+ * ```
+ */
+export function parseFormulationInput(raw: unknown): FormulationInput {
+  const parsed = formulationInputSchema.safeParse(raw);
+  if (parsed.success) return parsed.data;
+  const issues: FieldIssue[] = parsed.error.issues.map((issue) => ({
+    field: fieldPath(issue.path),
+    message: issue.message,
+  }));
+  const first = parsed.error.issues[0];
+  const firstIssue = issues[0] ?? { field: "", message: "the input is not valid" };
+  throw new FormulationError(first ? codeOf(first) : "invalid_input", firstIssue.field, firstIssue.message, issues);
+}

@@ -1,0 +1,96 @@
+import { Dec, ZERO } from "./decimal";
+import type { Notice } from "./result-types";
+
+/**
+ * Target water W, mol: R · Σa (R = mol H2O per mol network-forming atom) or
+ * h · Σg (h = mol H2O per mol hydrolysable group).
+ *
+ * @param ratio - "R" or "h"
+ * @param value - the ratio's value
+ * @param networkAtomMol - Σa, mol
+ * @param hydrolysableGroupMol - Σg, mol
+ * @returns W in mol (decimal)
+ * @example
+ * ```ts
+ * waterTarget("R", new Dec(4), new Dec(0.1), new Dec(0.4)).toNumber(); // 0.4 mol
+ * ```
+ */
+export function waterTarget(ratio: "R" | "h", value: Dec, networkAtomMol: Dec, hydrolysableGroupMol: Dec): Dec {
+  return value.times(ratio === "R" ? networkAtomMol : hydrolysableGroupMol);
+}
+
+/**
+ * Water to add, mol: W − C, or 0 when the carried water C already reaches
+ * the target (never negative).
+ *
+ * @example
+ * ```ts
+ * waterToAdd(new Dec(0.4), new Dec(0.05)).toNumber(); // 0.35
+ * waterToAdd(new Dec(0.4), new Dec(0.5)).toNumber();  // 0
+ * ```
+ */
+export function waterToAdd(targetMol: Dec, carriedMol: Dec): Dec {
+  const add = targetMol.minus(carriedMol);
+  return add.isNegative() ? ZERO : add;
+}
+
+/** Formats a number for a notice (display only). */
+function show(value: Dec): string {
+  return String(Number(value.toPrecision(4)));
+}
+
+/**
+ * Notices about the water balance (chemistry: "Water"): carried water above
+ * the target (caution, with the ratio reached), effective water below the net
+ * condensation need Σg/2 (caution: alkoxy groups remain), or below full
+ * hydrolysis Σg (info).
+ *
+ * @param p - mol figures: target W, carried C, total (C + added), Σa and Σg
+ * @returns notices, possibly empty
+ * @example
+ * ```ts
+ * waterNotices({ targetMol: new Dec(0.1), carriedMol: new Dec(0.2), totalMol: new Dec(0.2), networkAtomMol: new Dec(0.1), hydrolysableGroupMol: new Dec(0.4) });
+ * // [{ level: "caution", code: "carried_water_exceeds_target", … }, { level: "info", code: "below_full_hydrolysis", … }]
+ * ```
+ */
+export function waterNotices(p: {
+  targetMol: Dec;
+  carriedMol: Dec;
+  totalMol: Dec;
+  networkAtomMol: Dec;
+  hydrolysableGroupMol: Dec;
+}): Notice[] {
+  const notices: Notice[] = [];
+  const effectiveR = (): Dec => p.totalMol.div(p.networkAtomMol);
+  if (p.carriedMol.greaterThan(p.targetMol)) {
+    notices.push({
+      level: "caution",
+      code: "carried_water_exceeds_target",
+      field: "water.value",
+      message:
+        `The other materials already bring ${show(p.carriedMol)} mol water, more than the target ${show(p.targetMol)} mol; ` +
+        `no water is added and the ratio reached is R = ${show(effectiveR())} (h = ${show(p.totalMol.div(p.hydrolysableGroupMol))}).`,
+    });
+  }
+  const netCondensation = p.hydrolysableGroupMol.div(2);
+  if (p.totalMol.lessThan(netCondensation)) {
+    notices.push({
+      level: "caution",
+      code: "below_net_condensation",
+      field: "water.value",
+      message:
+        `Effective R = ${show(effectiveR())} is below the net-condensation ratio ${show(netCondensation.div(p.networkAtomMol))}: ` +
+        "not enough water for complete condensation, alkoxy groups will remain in the gel.",
+    });
+  } else if (p.totalMol.lessThan(p.hydrolysableGroupMol)) {
+    notices.push({
+      level: "info",
+      code: "below_full_hydrolysis",
+      field: "water.value",
+      message:
+        `Effective R = ${show(effectiveR())} is below the full-hydrolysis ratio ${show(p.hydrolysableGroupMol.div(p.networkAtomMol))}; ` +
+        "hydrolysis relies on the water released by condensation.",
+    });
+  }
+  return notices;
+}
