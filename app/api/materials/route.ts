@@ -1,0 +1,18 @@
+import { createMaterial, getMaterialByName, listMaterials } from "@/db/queries/materials";
+import { conflict, readJson, route } from "@/lib/api";
+import { requireContext } from "@/lib/session";
+import { materialBodySchema, materialListQuerySchema, parseQuery } from "@/lib/validations/api";
+
+export const GET = route(async (req) => {
+  const ctx = await requireContext(req.headers, "material:read");
+  return Response.json(await listMaterials(ctx.teamId, parseQuery(req.url, materialListQuerySchema)));
+});
+
+export const POST = route(async (req) => {
+  const ctx = await requireContext(req.headers, "material:create");
+  const { material, casNumber } = await readJson(req, materialBodySchema);
+  if (await getMaterialByName(ctx.teamId, material.name)) {
+    throw conflict(`The library already has a material named "${material.name}".`);
+  }
+  return Response.json(await createMaterial(ctx.teamId, ctx.userId, material, casNumber), { status: 201 });
+});

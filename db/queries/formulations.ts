@@ -1,0 +1,395 @@
+import { and, asc, desc, eq, exists, inArray, like, or, sql, type SQL } from "drizzle-orm";
+import { db } from "@/db";
+import type { DbOrTx } from "@/db/client";
+import { formulations, reviews, revisions, user, REVISION_STATES, type RevisionRow } from "@/db/schema";
+import { conflict, notFound } from "@/lib/api";
+import { diffRevisions } from "@/lib/diff";
+import { computeFormulation, ENGINE_VERSION, type FormulationInput, type FormulationResult } from "@/lib/formulation";
+import { assertReviewable, assertSubmittable, nextState, type RevisionState, type WorkflowAction } from "@/lib/workflow";
+import { recordEvent } from "./audit";
+
+export interface Actor {
+  userId: string;
+  teamId: string;
+}
+
+/** Runs the engine; an engine error is kept as a message so a draft can still be saved. */
+export function evaluate(input: FormulationInput): { result: FormulationResult | null; computeError: string | null } {
+  try {
+    return { result: computeFormulation(input), computeError: null };
+  } catch (err) {
+    if (err instanceof Error && err.name === "FormulationError") return { result: null, computeError: err.message };
+    throw err;
+  }
+}
+
+export interface FormulationListQuery {
+  q?: string;
+  state?: RevisionState;
+  project?: string;
+  sort?: "name" | "updatedAt" | "state" | "project";
+  dir?: "asc" | "desc";
+  page?: number;
+  pageSize?: number;
+  /** Production sees only formulations with a released revision. */
+  releasedOnly?: boolean;
+}
+
+const releasedExists = exists(
+  db
+    .select({ one: sql`1` })
+    .from(revisions)
+    .where(and(eq(revisions.formulationId, formulations.id), eq(revisions.state, "released"))),
+);
+
+export async function listFormulations(teamId: string, query: FormulationListQuery = {}) {
+  const where: SQL[] = [eq(formulations.teamId, teamId)];
+  if (query.state) where.push(eq(formulations.latestState, query.state));
+  if (query.project) where.push(eq(formulations.project, query.project));
+  if (query.q) {
+    const pattern = `%${query.q.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
+    where.push(or(like(formulations.name, pattern), like(formulations.project, pattern))!);
+  }
+  if (query.releasedOnly) where.push(releasedExists);
+  const column = {
+    name: formulations.name,
+    updatedAt: formulations.updatedAt,
+    state: formulations.latestState,
+    project: formulations.project,
+  }[query.sort ?? "updatedAt"];
+  const order = (query.dir ?? (query.sort === "name" ? "asc" : "desc")) === "desc" ? desc(column) : asc(column);
+  const pageSize = Math.min(query.pageSize ?? 25, 200);
+  const page = Math.max(query.page ?? 1, 1);
+  const [rows, [count]] = await Promise.all([
+    db
+      .select({
+        id: formulations.id,
+        name: formulations.name,
+        project: formulations.project,
+        latestState: formulations.latestState,
+        latestRevision: formulations.latestRevision,
+        updatedAt: formulations.updatedAt,
+        createdBy: formulations.createdBy,
+      })
+      .from(formulations)
+      .where(and(...where))
+      .orderBy(order, asc(formulations.id))
+      .limit(pageSize)
+      .offset((page - 1) * pageSize),
+    db.select({ n: sql<number>`count(*)` }).from(formulations).where(and(...where)),
+  ]);
+  return { rows, total: Number(count?.n ?? 0), page, pageSize };
+}
+
+/** A formulation with the list of its revisions; production sees released ones only. */
+export async function getFormulation(teamId: string, id: string, opts: { releasedOnly?: boolean } = {}) {
+  const [f] = await db.select().from(formulations).where(and(eq(formulations.teamId, teamId), eq(formulations.id, id))).limit(1);
+  if (!f) return null;
+  const revs = await db
+    .select({
+      id: revisions.id,
+      number: revisions.number,
+      state: revisions.state,
+      version: revisions.version,
+      authorId: revisions.authorId,
+      authorName: user.name,
+      createdAt: revisions.createdAt,
+      updatedAt: revisions.updatedAt,
+      engineVersion: revisions.engineVersion,
+    })
+    .from(revisions)
+    .leftJoin(user, eq(user.id, revisions.authorId))
+    .where(
+      and(
+        eq(revisions.formulationId, id),
+        opts.releasedOnly ? eq(revisions.state, "released") : undefined,
+      ),
+    )
+    .orderBy(desc(revisions.number));
+  if (opts.releasedOnly && revs.length === 0) return null;
+  return { ...f, revisions: revs };
+}
+
+/** One revision with its reviews; null when not in this team (or not released, for production). */
+export async function getRevision(teamId: string, revisionId: string, opts: { releasedOnly?: boolean } = {}) {
+  const [row] = await db
+    .select({ revision: revisions, formulationName: formulations.name, project: formulations.project, authorName: user.name })
+    .from(revisions)
+    .innerJoin(formulations, eq(formulations.id, revisions.formulationId))
+    .leftJoin(user, eq(user.id, revisions.authorId))
+    .where(and(eq(revisions.teamId, teamId), eq(revisions.id, revisionId)))
+    .limit(1);
+  if (!row) return null;
+  if (opts.releasedOnly && row.revision.state !== "released") return null;
+  const revReviews = await db
+    .select({
+      id: reviews.id,
+      decision: reviews.decision,
+      comment: reviews.comment,
+      createdAt: reviews.createdAt,
+      reviewerId: reviews.reviewerId,
+      reviewerName: user.name,
+    })
+    .from(reviews)
+    .leftJoin(user, eq(user.id, reviews.reviewerId))
+    .where(eq(reviews.revisionId, revisionId))
+    .orderBy(asc(reviews.createdAt));
+  return { ...row.revision, formulationName: row.formulationName, project: row.project, authorName: row.authorName, reviews: revReviews };
+}
+
+export async function createFormulation(
+  actor: Actor,
+  data: { name: string; project?: string | null; description?: string | null; input: FormulationInput },
+) {
+  const { result, computeError } = evaluate(data.input);
+  const formulationId = crypto.randomUUID();
+  const revisionId = crypto.randomUUID();
+  await db.transaction(async (tx) => {
+    const [dup] = await tx
+      .select({ id: formulations.id })
+      .from(formulations)
+      .where(and(eq(formulations.teamId, actor.teamId), eq(formulations.name, data.name)))
+      .limit(1);
+    if (dup) throw conflict(`A formulation named "${data.name}" already exists in this team.`);
+    await tx.insert(formulations).values({
+      id: formulationId,
+      teamId: actor.teamId,
+      name: data.name,
+      project: data.project ?? null,
+      description: data.description ?? null,
+      createdBy: actor.userId,
+    });
+    await tx.insert(revisions).values({
+      id: revisionId,
+      teamId: actor.teamId,
+      formulationId,
+      number: 1,
+      input: data.input,
+      result,
+      computeError,
+      engineVersion: ENGINE_VERSION,
+      authorId: actor.userId,
+    });
+    await recordEvent(tx, {
+      teamId: actor.teamId,
+      actorId: actor.userId,
+      action: "formulation.created",
+      entityType: "formulation",
+      entityId: formulationId,
+      summary: { after: { name: data.name, revision: 1, state: "draft" } },
+    });
+  });
+  return { formulationId, revisionId };
+}
+
+async function lockRevision(tx: DbOrTx, teamId: string, revisionId: string): Promise<RevisionRow> {
+  const [row] = await tx
+    .select()
+    .from(revisions)
+    .where(and(eq(revisions.teamId, teamId), eq(revisions.id, revisionId)))
+    .for("update")
+    .limit(1);
+  if (!row) throw notFound("revision");
+  return row;
+}
+
+async function touchFormulation(tx: DbOrTx, formulationId: string, number: number, state: RevisionState) {
+  // The list shows the newest revision's state; older revisions changing state do not move it.
+  await tx
+    .update(formulations)
+    .set({ latestState: state, latestRevision: number, updatedAt: new Date() })
+    .where(and(eq(formulations.id, formulationId), sql`${formulations.latestRevision} <= ${number}`));
+}
+
+/**
+ * Saves a draft. `version` is the counter the client read: when someone saved
+ * in between, nothing is written and a 409 tells the user to reload.
+ */
+export async function saveDraft(actor: Actor, revisionId: string, data: { input: FormulationInput; version: number }) {
+  const { result, computeError } = evaluate(data.input);
+  return db.transaction(async (tx) => {
+    const current = await lockRevision(tx, actor.teamId, revisionId);
+    if (current.state !== "draft") {
+      throw conflict(
+        `Revision ${current.number} is ${current.state.replace("_", " ")} and can no longer change. Start a new revision to edit it.`,
+      );
+    }
+    if (current.version !== data.version) {
+      throw conflict(
+        `Someone saved this draft after you opened it (your copy is version ${data.version}, the saved one is ${current.version}). Nothing was overwritten: reload to see their changes, then apply yours again.`,
+      );
+    }
+    const res = await tx
+      .update(revisions)
+      .set({ input: data.input, result, computeError, engineVersion: ENGINE_VERSION, version: current.version + 1 })
+      .where(and(eq(revisions.id, revisionId), eq(revisions.version, data.version), eq(revisions.state, "draft")));
+    if (res[0].affectedRows !== 1) throw conflict("This draft changed while saving; reload and try again.");
+    await touchFormulation(tx, current.formulationId, current.number, "draft");
+    await recordEvent(tx, {
+      teamId: actor.teamId,
+      actorId: actor.userId,
+      action: "revision.saved",
+      entityType: "revision",
+      entityId: revisionId,
+      summary: { before: { version: current.version }, after: { version: current.version + 1, computeError } },
+    });
+    return { version: current.version + 1, result, computeError };
+  });
+}
+
+/**
+ * Starts a new draft revision from the newest one (approved and released
+ * revisions never change). Refused while a draft or a review is open.
+ */
+export async function startRevision(actor: Actor, formulationId: string) {
+  return db.transaction(async (tx) => {
+    const [f] = await tx
+      .select()
+      .from(formulations)
+      .where(and(eq(formulations.teamId, actor.teamId), eq(formulations.id, formulationId)))
+      .for("update")
+      .limit(1);
+    if (!f) throw notFound("formulation");
+    const [latest] = await tx
+      .select()
+      .from(revisions)
+      .where(eq(revisions.formulationId, formulationId))
+      .orderBy(desc(revisions.number))
+      .limit(1);
+    if (!latest) throw notFound("revision");
+    const open = await tx
+      .select({ number: revisions.number, state: revisions.state })
+      .from(revisions)
+      .where(and(eq(revisions.formulationId, formulationId), inArray(revisions.state, ["draft", "in_review"])))
+      .limit(1);
+    if (open[0]) {
+      throw conflict(`Revision ${open[0].number} is still ${open[0].state === "draft" ? "a draft" : "in review"}: edit that one instead.`);
+    }
+    const id = crypto.randomUUID();
+    const number = latest.number + 1;
+    const { result, computeError } = evaluate(latest.input);
+    await tx.insert(revisions).values({
+      id,
+      teamId: actor.teamId,
+      formulationId,
+      number,
+      input: latest.input,
+      result,
+      computeError,
+      engineVersion: ENGINE_VERSION,
+      authorId: actor.userId,
+    });
+    await touchFormulation(tx, formulationId, number, "draft");
+    await recordEvent(tx, {
+      teamId: actor.teamId,
+      actorId: actor.userId,
+      action: "revision.started",
+      entityType: "revision",
+      entityId: id,
+      summary: { before: { revision: latest.number }, after: { revision: number, state: "draft" } },
+    });
+    return { revisionId: id, number };
+  });
+}
+
+export interface TransitionOutcome {
+  revisionId: string;
+  formulationId: string;
+  formulationName: string;
+  number: number;
+  from: RevisionState;
+  to: RevisionState;
+  authorId: string | null;
+}
+
+/** Moves a revision through its life; one transaction, one audit event. */
+export async function transition(
+  actor: Actor,
+  revisionId: string,
+  action: WorkflowAction,
+  opts: { comment?: string | null } = {},
+): Promise<TransitionOutcome> {
+  return db.transaction(async (tx) => {
+    const rev = await lockRevision(tx, actor.teamId, revisionId);
+    const to = nextState(rev.state, action);
+    const now = new Date();
+    const set: Partial<typeof revisions.$inferInsert> = { state: to };
+    if (action === "submit") {
+      assertSubmittable(rev.result ?? null, rev.computeError);
+      set.submittedAt = now;
+    }
+    if (action === "approve" || action === "return") {
+      assertReviewable({
+        decision: action === "approve" ? "approved" : "returned",
+        reviewerId: actor.userId,
+        authorId: rev.authorId,
+        comment: opts.comment,
+        thermalStatus: rev.result?.thermal.status,
+      });
+      await tx.insert(reviews).values({
+        teamId: actor.teamId,
+        revisionId,
+        reviewerId: actor.userId,
+        decision: action === "approve" ? "approved" : "returned",
+        comment: opts.comment?.trim() || null,
+      });
+      if (action === "approve") {
+        set.approvedAt = now;
+        set.approvedBy = actor.userId;
+      }
+    }
+    if (action === "release") {
+      set.releasedAt = now;
+      // One released revision per formulation: the previous one is archived.
+      const older = await tx
+        .select({ id: revisions.id, number: revisions.number })
+        .from(revisions)
+        .where(and(eq(revisions.formulationId, rev.formulationId), eq(revisions.state, "released")));
+      for (const o of older) {
+        await tx.update(revisions).set({ state: "archived" }).where(eq(revisions.id, o.id));
+        await recordEvent(tx, {
+          teamId: actor.teamId,
+          actorId: actor.userId,
+          action: "revision.archived",
+          entityType: "revision",
+          entityId: o.id,
+          summary: { before: { state: "released" }, after: { state: "archived" }, note: `superseded by revision ${rev.number}` },
+        });
+      }
+    }
+    await tx.update(revisions).set(set).where(eq(revisions.id, revisionId));
+    await touchFormulation(tx, rev.formulationId, rev.number, to);
+    await recordEvent(tx, {
+      teamId: actor.teamId,
+      actorId: actor.userId,
+      action: `revision.${action === "approve" ? "approved" : action === "return" ? "returned" : action === "submit" ? "submitted" : action === "release" ? "released" : "archived"}`,
+      entityType: "revision",
+      entityId: revisionId,
+      summary: { before: { state: rev.state }, after: { state: to }, note: opts.comment?.trim() || undefined },
+    });
+    const [f] = await tx.select({ name: formulations.name }).from(formulations).where(eq(formulations.id, rev.formulationId));
+    return {
+      revisionId,
+      formulationId: rev.formulationId,
+      formulationName: f?.name ?? "",
+      number: rev.number,
+      from: rev.state,
+      to,
+      authorId: rev.authorId,
+    };
+  });
+}
+
+/** Differences between two revisions (by number) of one formulation. */
+export async function diffFormulationRevisions(teamId: string, formulationId: string, from: number, to: number) {
+  const rows = await db
+    .select({ number: revisions.number, input: revisions.input, result: revisions.result })
+    .from(revisions)
+    .where(and(eq(revisions.teamId, teamId), eq(revisions.formulationId, formulationId), inArray(revisions.number, [from, to])));
+  const a = rows.find((r) => r.number === from);
+  const b = rows.find((r) => r.number === to);
+  if (!a || !b) return null;
+  return { from, to, ...diffRevisions({ input: a.input, result: a.result ?? null }, { input: b.input, result: b.result ?? null }) };
+}
+
+export { REVISION_STATES };

@@ -1,0 +1,50 @@
+import { and, eq } from "drizzle-orm";
+import type { DbOrTx } from "@/db/client";
+import { materials } from "@/db/schema";
+import { referenceMaterials } from "@/data/materials";
+
+/**
+ * Copies the reference materials (data/materials.ts) into a team's library,
+ * skipping names the team already has. Copies keep their sources.
+ * Returns a map from reference id to the team's material id.
+ */
+export async function copyReferenceMaterials(dbx: DbOrTx, teamId: string, userId: string | null): Promise<Map<string, string>> {
+  const existing = await dbx
+    .select({ id: materials.id, name: materials.name, referenceId: materials.referenceId })
+    .from(materials)
+    .where(eq(materials.teamId, teamId));
+  const byName = new Map(existing.map((e) => [e.name, e.id]));
+  const ids = new Map<string, string>();
+  const rows = [];
+  for (const ref of referenceMaterials) {
+    const found = byName.get(ref.name);
+    if (found) {
+      ids.set(ref.id, found);
+      continue;
+    }
+    const id = crypto.randomUUID();
+    ids.set(ref.id, id);
+    rows.push({
+      id,
+      teamId,
+      referenceId: ref.id,
+      name: ref.name,
+      kind: ref.kind,
+      casNumber: ref.casNumber ?? null,
+      data: { ...ref, id },
+      createdBy: userId,
+    });
+  }
+  if (rows.length) await dbx.insert(materials).values(rows);
+  return ids;
+}
+
+/** The team's copy of a reference material, by reference id. */
+export async function teamMaterialByReference(dbx: DbOrTx, teamId: string, referenceId: string) {
+  const [row] = await dbx
+    .select()
+    .from(materials)
+    .where(and(eq(materials.teamId, teamId), eq(materials.referenceId, referenceId)))
+    .limit(1);
+  return row ?? null;
+}

@@ -1,0 +1,89 @@
+import { and, asc, eq, sql } from "drizzle-orm";
+import { db } from "@/db";
+import { invitation, member, user } from "@/db/schema";
+import { conflict, notFound } from "@/lib/api";
+import type { RoleName } from "@/lib/permissions";
+import { recordEvent } from "./audit";
+
+export async function listMembers(teamId: string) {
+  return db
+    .select({ id: member.id, userId: member.userId, role: member.role, createdAt: member.createdAt, name: user.name, email: user.email })
+    .from(member)
+    .innerJoin(user, eq(user.id, member.userId))
+    .where(eq(member.organizationId, teamId))
+    .orderBy(asc(user.name));
+}
+
+/** E-mail addresses of the team's members with one of `roles`. */
+export async function emailsByRole(teamId: string, roles: RoleName[]): Promise<string[]> {
+  const rows = await db
+    .select({ email: user.email, role: member.role })
+    .from(member)
+    .innerJoin(user, eq(user.id, member.userId))
+    .where(eq(member.organizationId, teamId));
+  return rows.filter((r) => roles.includes(r.role as RoleName)).map((r) => r.email);
+}
+
+export async function emailOfUser(userId: string | null): Promise<string | null> {
+  if (!userId) return null;
+  const [row] = await db.select({ email: user.email }).from(user).where(eq(user.id, userId)).limit(1);
+  return row?.email ?? null;
+}
+
+export async function listInvitations(teamId: string) {
+  return db
+    .select({ id: invitation.id, email: invitation.email, role: invitation.role, status: invitation.status, expiresAt: invitation.expiresAt, createdAt: invitation.createdAt })
+    .from(invitation)
+    .where(eq(invitation.organizationId, teamId))
+    .orderBy(asc(invitation.createdAt));
+}
+
+async function adminCount(teamId: string): Promise<number> {
+  const [row] = await db
+    .select({ n: sql<number>`count(*)` })
+    .from(member)
+    .where(and(eq(member.organizationId, teamId), eq(member.role, "admin")));
+  return Number(row?.n ?? 0);
+}
+
+/** Changes a member's role; the team always keeps at least one admin. */
+export async function changeRole(teamId: string, actorId: string, memberId: string, role: RoleName) {
+  return db.transaction(async (tx) => {
+    const [m] = await tx.select().from(member).where(and(eq(member.organizationId, teamId), eq(member.id, memberId))).for("update").limit(1);
+    if (!m) throw notFound("member");
+    if (m.role === "admin" && role !== "admin" && (await adminCount(teamId)) <= 1) {
+      throw conflict("This is the team's last admin. Make someone else admin first.");
+    }
+    await tx.update(member).set({ role }).where(eq(member.id, memberId));
+    await recordEvent(tx, {
+      teamId,
+      actorId,
+      action: "member.role_changed",
+      entityType: "member",
+      entityId: memberId,
+      summary: { before: { role: m.role }, after: { role } },
+    });
+    return { ...m, role };
+  });
+}
+
+/** Removes a member; never the team's last admin. */
+export async function removeMember(teamId: string, actorId: string, memberId: string) {
+  return db.transaction(async (tx) => {
+    const [m] = await tx.select().from(member).where(and(eq(member.organizationId, teamId), eq(member.id, memberId))).for("update").limit(1);
+    if (!m) throw notFound("member");
+    if (m.role === "admin" && (await adminCount(teamId)) <= 1) {
+      throw conflict("This is the team's last admin and cannot be removed.");
+    }
+    await tx.delete(member).where(eq(member.id, memberId));
+    await recordEvent(tx, {
+      teamId,
+      actorId,
+      action: "member.removed",
+      entityType: "member",
+      entityId: memberId,
+      summary: { before: { userId: m.userId, role: m.role } },
+    });
+    return true;
+  });
+}

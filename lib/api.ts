@@ -1,0 +1,155 @@
+import "server-only";
+import { ZodError, type ZodType } from "zod";
+import { config } from "./config";
+
+/** The one error shape of every route: { error: { code, message, fields? } }. */
+export interface ApiErrorBody {
+  error: { code: string; message: string; fields?: Record<string, string> };
+}
+
+/** An error meant for the client, with its HTTP status. */
+export class ApiError extends Error {
+  constructor(
+    readonly status: number,
+    readonly code: string,
+    message: string,
+    readonly fields?: Record<string, string>,
+  ) {
+    super(message);
+    this.name = "ApiError";
+  }
+}
+
+export const unauthorized = () => new ApiError(401, "unauthorized", "Sign in to continue.");
+export const forbidden = (what = "do this") =>
+  new ApiError(403, "forbidden", `Your role in this team does not allow you to ${what}.`);
+export const notFound = (what = "record") => new ApiError(404, "not_found", `No such ${what}.`);
+export const conflict = (message: string) => new ApiError(409, "conflict", message);
+
+/** Turns a zod issue path into "components.2.weightFraction". */
+export function issuePath(path: readonly PropertyKey[]): string {
+  return path.length ? path.map(String).join(".") : "body";
+}
+
+export function zodFields(err: ZodError): Record<string, string> {
+  const fields: Record<string, string> = {};
+  for (const issue of err.issues) {
+    const key = issuePath(issue.path);
+    fields[key] ??= issue.message;
+  }
+  return fields;
+}
+
+interface FieldError {
+  code: string;
+  field: string;
+  message: string;
+  issues?: { field: string; message: string }[];
+}
+
+function isFieldError(err: unknown): err is FieldError {
+  return (
+    err instanceof Error &&
+    err.name === "FormulationError" &&
+    typeof (err as Partial<FieldError>).field === "string" &&
+    typeof (err as Partial<FieldError>).code === "string"
+  );
+}
+
+function isDbUnavailable(err: unknown): boolean {
+  const codes = new Set(["ECONNREFUSED", "PROTOCOL_CONNECTION_LOST", "ETIMEDOUT", "ECONNRESET", "ER_CON_COUNT_ERROR", "EPIPE"]);
+  for (let e: unknown = err, i = 0; e && i < 5; i++) {
+    const code = (e as { code?: unknown }).code;
+    if (typeof code === "string" && codes.has(code)) return true;
+    e = (e as { cause?: unknown }).cause;
+  }
+  return false;
+}
+
+/** Maps any thrown value to a JSON response; unknown errors never leak detail. */
+export function errorResponse(err: unknown): Response {
+  const json = (status: number, body: ApiErrorBody) => Response.json(body, { status });
+  if (err instanceof ApiError) {
+    return json(err.status, { error: { code: err.code, message: err.message, fields: err.fields } });
+  }
+  if (err instanceof ZodError) {
+    const fields = zodFields(err);
+    const first = Object.entries(fields)[0];
+    return json(422, {
+      error: { code: "invalid_input", message: first ? `${first[0]}: ${first[1]}` : "The input is not valid.", fields },
+    });
+  }
+  if (isFieldError(err)) {
+    const fields: Record<string, string> = {};
+    for (const i of err.issues ?? [{ field: err.field, message: err.message }]) fields[i.field] ??= i.message;
+    fields[err.field] ??= err.message;
+    return json(422, { error: { code: err.code, message: err.message, fields } });
+  }
+  if (err instanceof Error && err.name === "WorkflowError") {
+    const w = err as Error & { code: string; field?: string };
+    const status = w.code === "wrong_state" ? 409 : 422;
+    return json(status, { error: { code: w.code, message: w.message, fields: w.field ? { [w.field]: w.message } : undefined } });
+  }
+  if (isDbUnavailable(err)) {
+    console.error("[api] database unavailable:", err instanceof Error ? err.message : err);
+    return Response.json(
+      { error: { code: "unavailable", message: "The database is not reachable. Nothing was saved; try again shortly." } },
+      { status: 503, headers: { "Retry-After": "5" } },
+    );
+  }
+  console.error("[api] unexpected error:", err);
+  return json(500, { error: { code: "internal", message: "Something went wrong on our side. Nothing was changed." } });
+}
+
+const MAX_BODY_BYTES = 1_000_000;
+
+/** Reads and validates a JSON body: 413 when too large, 400 when not JSON, 422 when invalid. */
+export async function readJson<T>(req: Request, schema: ZodType<T>, maxBytes = MAX_BODY_BYTES): Promise<T> {
+  const length = Number(req.headers.get("content-length") ?? 0);
+  if (length > maxBytes) throw new ApiError(413, "too_large", `The request body is larger than ${maxBytes} bytes.`);
+  const text = await req.text();
+  if (text.length > maxBytes) throw new ApiError(413, "too_large", `The request body is larger than ${maxBytes} bytes.`);
+  let data: unknown;
+  try {
+    data = text.length ? JSON.parse(text) : {};
+  } catch {
+    throw new ApiError(400, "malformed_json", "The request body is not valid JSON.");
+  }
+  return schema.parse(data);
+}
+
+type RouteContext<P> = { params: Promise<P> };
+
+const SAFE_METHODS = new Set(["GET", "HEAD", "OPTIONS"]);
+const trustedOrigins = new Set(
+  [config.baseUrl, ...(process.env.GELWRIGHT_TRUSTED_ORIGINS ?? "").split(",")]
+    .map((o) => o.trim())
+    .filter(Boolean)
+    .map((o) => new URL(o).origin),
+);
+
+/**
+ * Cross-site request check for changes: a browser always sends Origin on a
+ * POST/PUT/PATCH/DELETE, and it must be our own. (Cookies are SameSite=Lax too.)
+ */
+function assertSameOrigin(req: Request): void {
+  if (SAFE_METHODS.has(req.method)) return;
+  const origin = req.headers.get("origin");
+  if (origin && !trustedOrigins.has(origin)) {
+    throw new ApiError(403, "bad_origin", "This request came from another site and was refused.");
+  }
+}
+
+/** Wraps a route handler so every error becomes the one JSON error shape. */
+export function route<P = Record<string, string>>(
+  fn: (req: Request, ctx: RouteContext<P>) => Promise<Response>,
+): (req: Request, ctx: RouteContext<P>) => Promise<Response> {
+  return async (req, ctx) => {
+    try {
+      assertSameOrigin(req);
+      return await fn(req, ctx);
+    } catch (err) {
+      return errorResponse(err);
+    }
+  };
+}

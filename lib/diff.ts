@@ -1,0 +1,87 @@
+/**
+ * Differences between two revisions: their inputs and their key results,
+ * as a flat list of paths with the value before and after.
+ */
+import type { FormulationInput, FormulationResult } from "@/lib/formulation";
+
+export interface DiffEntry {
+  path: string;
+  before: unknown;
+  after: unknown;
+}
+
+type Flat = Record<string, unknown>;
+
+function flatten(value: unknown, prefix: string, out: Flat): Flat {
+  if (value === null || typeof value !== "object") {
+    out[prefix] = value;
+    return out;
+  }
+  if (Array.isArray(value)) {
+    if (value.length === 0) out[prefix] = [];
+    value.forEach((v, i) => flatten(v, `${prefix}[${i}]`, out));
+    return out;
+  }
+  const entries = Object.entries(value as Record<string, unknown>);
+  if (entries.length === 0) out[prefix] = {};
+  for (const [k, v] of entries) flatten(v, prefix ? `${prefix}.${k}` : k, out);
+  return out;
+}
+
+/** Input fields keyed by material name rather than position, so reordering reads well. */
+function inputView(input: FormulationInput): Record<string, unknown> {
+  const names = new Map(input.materials.map((m) => [m.id, m.name]));
+  const name = (id: string | undefined) => (id ? (names.get(id) ?? id) : undefined);
+  return {
+    basis: input.basis,
+    components: Object.fromEntries(input.components.map((c) => [name(c.materialId)!, c.weightFraction])),
+    water: { ...input.water, materialId: name(input.water.materialId) },
+    solvent: input.solvent ? { ...input.solvent, materialId: name(input.solvent.materialId) } : null,
+    catalyst: input.catalyst ? { ...input.catalyst, materialId: name(input.catalyst.materialId) } : null,
+    substrate: name(input.substrateId) ?? null,
+    steps: input.steps,
+    marginC: input.marginC ?? 20,
+    measuredBulkDensity: input.measuredBulkDensity ?? null,
+    materialProperties: Object.fromEntries(
+      input.materials.map((m) => {
+        const { id: _id, name: _name, sources: _s, ...props } = m;
+        void _id; void _name; void _s;
+        return [m.name, props];
+      }),
+    ),
+  };
+}
+
+function resultView(result: FormulationResult | null, input: FormulationInput): Record<string, unknown> {
+  if (!result) return { computed: false };
+  const names = new Map(input.materials.map((m) => [m.id, m.name]));
+  return {
+    lines: Object.fromEntries(result.lines.map((l) => [names.get(l.materialId) ?? l.materialId, { massGrams: l.massGrams, volumeMl: l.volumeMl }])),
+    waterToAddGrams: result.water.addGrams,
+    effectiveR: result.water.effectiveR,
+    solidsFraction: result.sol.solidsFraction,
+    theoreticalDensity: result.composite.theoreticalDensity,
+    thermalStatus: result.thermal.status,
+    maxAllowedC: result.thermal.maxAllowedC ?? null,
+  };
+}
+
+function diffFlat(a: Flat, b: Flat, prefix: string): DiffEntry[] {
+  const keys = [...new Set([...Object.keys(a), ...Object.keys(b)])].sort();
+  const out: DiffEntry[] = [];
+  for (const k of keys) {
+    if (JSON.stringify(a[k]) !== JSON.stringify(b[k])) out.push({ path: `${prefix}${k}`, before: a[k] ?? null, after: b[k] ?? null });
+  }
+  return out;
+}
+
+/** Everything that differs between revision A (before) and B (after). */
+export function diffRevisions(
+  a: { input: FormulationInput; result: FormulationResult | null },
+  b: { input: FormulationInput; result: FormulationResult | null },
+): { input: DiffEntry[]; results: DiffEntry[] } {
+  return {
+    input: diffFlat(flatten(inputView(a.input), "", {}), flatten(inputView(b.input), "", {}), ""),
+    results: diffFlat(flatten(resultView(a.result, a.input), "", {}), flatten(resultView(b.result, b.input), "", {}), ""),
+  };
+}

@@ -1,0 +1,68 @@
+/**
+ * Who may do what in a team. Defined once here and checked on the server by
+ * every route handler, server action and page (see lib/session.ts).
+ *
+ * Roles are per membership: one user can be a reviewer in one team and a
+ * formulator in another.
+ */
+import { createAccessControl } from "better-auth/plugins/access";
+import { defaultStatements } from "better-auth/plugins/organization/access";
+
+export const statements = {
+  ...defaultStatements,
+  material: ["read", "create", "update", "delete"],
+  formulation: ["read", "readUnreleased", "create", "update", "submit", "review", "release", "archive"],
+  batch: ["read", "create", "update"],
+  audit: ["read"],
+  mailbox: ["read"],
+} as const;
+
+export const ac = createAccessControl(statements);
+
+export const admin = ac.newRole({
+  organization: ["update"],
+  member: ["create", "update", "delete"],
+  invitation: ["create", "cancel"],
+  material: ["read", "create", "update", "delete"],
+  formulation: ["read", "readUnreleased", "create", "update", "submit", "release", "archive"],
+  batch: ["read"],
+  audit: ["read"],
+  mailbox: ["read"],
+});
+
+export const formulator = ac.newRole({
+  material: ["read", "create", "update"],
+  formulation: ["read", "readUnreleased", "create", "update", "submit"],
+  batch: ["read"],
+  audit: ["read"],
+});
+
+export const reviewer = ac.newRole({
+  material: ["read"],
+  formulation: ["read", "readUnreleased", "review", "release"],
+  batch: ["read"],
+  audit: ["read"],
+});
+
+export const production = ac.newRole({
+  material: ["read"],
+  formulation: ["read"],
+  batch: ["read", "create", "update"],
+});
+
+export const roles = { admin, formulator, reviewer, production } as const;
+export type RoleName = keyof typeof roles;
+export const ROLE_NAMES = Object.keys(roles) as RoleName[];
+
+type Statements = typeof statements;
+export type Permission = {
+  [K in keyof Statements]: `${K & string}:${Statements[K][number]}`;
+}[keyof Statements];
+
+/** True when `role` grants `permission` ("resource:action"). */
+export function can(role: string | null | undefined, permission: Permission): boolean {
+  if (!role || !(role in roles)) return false;
+  const [resource, action] = permission.split(":") as [keyof Statements, string];
+  const result = roles[role as RoleName].authorize({ [resource]: [action] } as never);
+  return result.success;
+}

@@ -1,0 +1,188 @@
+/**
+ * Who may call what: every API route against every role (a table), signed-out
+ * callers (401), and another team's ids (404, nothing changed).
+ */
+import { readdirSync, readFileSync } from "node:fs";
+import { join, relative, sep } from "node:path";
+import { beforeAll, describe, expect, it } from "vitest";
+import { coatInput, library, type LibraryMaterial } from "./fixtures";
+import { anonymous, demo, signIn, signUp, type Client } from "./http";
+
+type Role = "admin" | "formulator" | "reviewer" | "production";
+const clients = {} as Record<Role, Client>;
+let lib: Map<string, LibraryMaterial>;
+let ids: { formulation: string; draft: string; released: string; material: string; member: string };
+const stamp = Date.now().toString(36);
+
+beforeAll(async () => {
+  for (const role of ["admin", "formulator", "reviewer", "production"] as Role[]) clients[role] = await signIn(demo[role]);
+  lib = await library(clients.formulator);
+  const list = (await (await clients.formulator.fetch("/api/formulations?pageSize=100")).json()) as {
+    rows: { id: string; name: string }[];
+  };
+  const hc3 = list.rows.find((r) => r.name === "Visor hard coat HC-3")!;
+  const f = (await (await clients.formulator.fetch(`/api/formulations/${hc3.id}`)).json()) as {
+    revisions: { id: string; state: string }[];
+  };
+  const monolith = list.rows.find((r) => r.name === "Silica–PDMS monolith M-1")!;
+  const m = (await (await clients.formulator.fetch(`/api/formulations/${monolith.id}`)).json()) as { revisions: { id: string }[] };
+  const members = (await (await clients.admin.fetch("/api/members")).json()) as { rows: { id: string; email: string }[] };
+  ids = {
+    formulation: hc3.id,
+    released: f.revisions.find((r) => r.state === "released")!.id,
+    draft: m.revisions[0]!.id,
+    material: lib.get("ethanol")!.id,
+    member: members.rows.find((x) => x.email === demo.production)!.id,
+  };
+});
+
+interface Case {
+  /** The route file's pattern under app/, e.g. "/api/revisions/[id]". */
+  route: string;
+  name: string;
+  method: "GET" | "POST" | "PUT" | "PATCH" | "DELETE";
+  path: () => string;
+  body?: () => unknown;
+  /** Expected status per role; a role not allowed gets 403 (or 404 where the record is hidden from it). */
+  expect: Record<Role, number>;
+}
+
+// Calls that read, or that fail validation after the permission check, so the table can run in any order.
+const cases: Case[] = [
+  { route: "/api/formulations", name: "list formulations", method: "GET", path: () => "/api/formulations", expect: { admin: 200, formulator: 200, reviewer: 200, production: 200 } },
+  { route: "/api/formulations", name: "create formulation (invalid body)", method: "POST", path: () => "/api/formulations", body: () => ({}), expect: { admin: 422, formulator: 422, reviewer: 403, production: 403 } },
+  { route: "/api/formulations/[id]", name: "get formulation", method: "GET", path: () => `/api/formulations/${ids.formulation}`, expect: { admin: 200, formulator: 200, reviewer: 200, production: 200 } },
+  { route: "/api/formulations/[id]/diff", name: "diff revisions", method: "GET", path: () => `/api/formulations/${ids.formulation}/diff?from=1&to=2`, expect: { admin: 200, formulator: 200, reviewer: 200, production: 403 } },
+  { route: "/api/revisions/[id]", name: "get released revision", method: "GET", path: () => `/api/revisions/${ids.released}`, expect: { admin: 200, formulator: 200, reviewer: 200, production: 200 } },
+  { route: "/api/revisions/[id]", name: "get draft revision", method: "GET", path: () => `/api/revisions/${ids.draft}`, expect: { admin: 200, formulator: 200, reviewer: 200, production: 404 } },
+  { route: "/api/revisions/[id]", name: "save draft (invalid body)", method: "PUT", path: () => `/api/revisions/${ids.draft}`, body: () => ({ version: "x" }), expect: { admin: 422, formulator: 422, reviewer: 403, production: 403 } },
+  { route: "/api/revisions/[id]/[action]", name: "approve a draft (wrong state)", method: "POST", path: () => `/api/revisions/${ids.draft}/approve`, body: () => ({}), expect: { admin: 403, formulator: 403, reviewer: 409, production: 403 } },
+  { route: "/api/revisions/[id]/[action]", name: "release a draft (wrong state)", method: "POST", path: () => `/api/revisions/${ids.draft}/release`, body: () => ({}), expect: { admin: 409, formulator: 403, reviewer: 409, production: 403 } },
+  { route: "/api/revisions/[id]/[action]", name: "unknown action", method: "POST", path: () => `/api/revisions/${ids.draft}/explode`, body: () => ({}), expect: { admin: 404, formulator: 404, reviewer: 404, production: 404 } },
+  { route: "/api/materials", name: "list materials", method: "GET", path: () => "/api/materials", expect: { admin: 200, formulator: 200, reviewer: 200, production: 200 } },
+  { route: "/api/materials", name: "create material (invalid body)", method: "POST", path: () => "/api/materials", body: () => ({ material: {} }), expect: { admin: 422, formulator: 422, reviewer: 403, production: 403 } },
+  { route: "/api/materials/[id]", name: "get material", method: "GET", path: () => `/api/materials/${ids.material}`, expect: { admin: 200, formulator: 200, reviewer: 200, production: 200 } },
+  { route: "/api/materials/[id]", name: "update material (invalid body)", method: "PUT", path: () => `/api/materials/${ids.material}`, body: () => ({ material: { name: "" } }), expect: { admin: 422, formulator: 422, reviewer: 403, production: 403 } },
+  { route: "/api/materials/[id]", name: "delete material (missing id)", method: "DELETE", path: () => "/api/materials/00000000-0000-0000-0000-000000000000", expect: { admin: 404, formulator: 403, reviewer: 403, production: 403 } },
+  { route: "/api/members", name: "list members", method: "GET", path: () => "/api/members", expect: { admin: 200, formulator: 200, reviewer: 200, production: 200 } },
+  { route: "/api/members/[id]", name: "change role (invalid role)", method: "PATCH", path: () => `/api/members/${ids.member}`, body: () => ({ role: "owner" }), expect: { admin: 422, formulator: 403, reviewer: 403, production: 403 } },
+  { route: "/api/members/[id]", name: "remove member (missing id)", method: "DELETE", path: () => "/api/members/nobody", expect: { admin: 404, formulator: 403, reviewer: 403, production: 403 } },
+  { route: "/api/invitations", name: "list invitations", method: "GET", path: () => "/api/invitations", expect: { admin: 200, formulator: 403, reviewer: 403, production: 403 } },
+  { route: "/api/invitations", name: "invite (invalid e-mail)", method: "POST", path: () => "/api/invitations", body: () => ({ email: "nope", role: "formulator" }), expect: { admin: 422, formulator: 403, reviewer: 403, production: 403 } },
+  { route: "/api/audit", name: "audit log", method: "GET", path: () => "/api/audit", expect: { admin: 200, formulator: 200, reviewer: 200, production: 403 } },
+  { route: "/api/mailbox", name: "captured mail", method: "GET", path: () => "/api/mailbox", expect: { admin: 200, formulator: 403, reviewer: 403, production: 403 } },
+  { route: "/api/compute", name: "compute", method: "POST", path: () => "/api/compute", body: () => coatInput(lib), expect: { admin: 200, formulator: 200, reviewer: 200, production: 200 } },
+  { route: "/api/formulations/[id]/revisions", name: "start a new revision (missing formulation)", method: "POST", path: () => "/api/formulations/missing/revisions", body: () => ({}), expect: { admin: 404, formulator: 404, reviewer: 403, production: 403 } },
+];
+
+// Creating a team needs only a signed-in user (a new account starts its own team).
+const teamCase: Case = {
+  route: "/api/teams",
+  name: "create team",
+  method: "POST",
+  path: () => "/api/teams",
+  body: () => ({ name: "" }),
+  expect: { admin: 422, formulator: 422, reviewer: 422, production: 422 },
+};
+
+/** Routes anyone may call: the health check and better-auth's own endpoints. */
+const PUBLIC_ROUTES = new Set(["/api/health", "/api/auth/[...all]"]);
+
+/** Every exported handler of every route file under app/api, as "METHOD /api/…". */
+function routeHandlers(): string[] {
+  const root = join(process.cwd(), "app");
+  const out: string[] = [];
+  const walk = (dir: string) => {
+    for (const entry of readdirSync(dir, { withFileTypes: true })) {
+      const full = join(dir, entry.name);
+      if (entry.isDirectory()) walk(full);
+      else if (entry.name === "route.ts") {
+        const pattern = "/" + relative(root, dir).split(sep).filter((seg) => !/^\(.*\)$/.test(seg)).join("/");
+        for (const m of readFileSync(full, "utf8").matchAll(/export const (?:\{ )?(GET|POST|PUT|PATCH|DELETE)\b|export async function (GET|POST|PUT|PATCH|DELETE)\b/g)) {
+          out.push(`${m[1] ?? m[2]} ${pattern}`);
+        }
+        const destructured = readFileSync(full, "utf8").match(/export const \{ ([A-Z, ]+) \}/);
+        if (destructured) for (const method of destructured[1]!.split(/,\s*/)) out.push(`${method} ${pattern}`);
+      }
+    }
+  };
+  walk(join(root, "api"));
+  return [...new Set(out)].sort();
+}
+
+function call(client: Client, c: Case) {
+  return client.fetch(c.path(), { method: c.method, json: c.body ? c.body() : undefined });
+}
+
+describe("role × route", () => {
+  it("has an entry for every handler of every route file under app/api", () => {
+    const covered = new Set([...cases, teamCase].map((c) => `${c.method} ${c.route}`));
+    const handlers = routeHandlers();
+    expect(handlers.length).toBeGreaterThan(20);
+    const missing = handlers.filter((h) => !covered.has(h) && !PUBLIC_ROUTES.has(h.split(" ")[1]!));
+    expect(missing, "add these to the table in this file").toEqual([]);
+  });
+
+  for (const c of [...cases, teamCase]) {
+    it(`${c.method} ${c.name}: ${JSON.stringify(c.expect)}`, async () => {
+      const got: Record<string, number> = {};
+      for (const role of Object.keys(c.expect) as Role[]) got[role] = (await call(clients[role], c)).status;
+      expect(got).toEqual(c.expect);
+    });
+  }
+
+  it("answers 401 with the one error shape to a caller who is not signed in, on every route", async () => {
+    const anon = anonymous();
+    for (const c of [...cases, teamCase]) {
+      const res = await call(anon, c);
+      expect(res.status, `${c.method} ${c.path()}`).toBe(401);
+      const body = (await res.json()) as { error: { code: string; message: string } };
+      expect(body.error.code).toBe("unauthorized");
+    }
+  });
+});
+
+describe("another team's records", () => {
+  let other: Client;
+  beforeAll(async () => {
+    other = await signUp(`owner-${stamp}@elsewhere.example`, "Olive Other");
+    const res = await other.fetch("/api/teams", { method: "POST", json: { name: `Other Lab ${stamp}` } });
+    expect(res.status).toBe(201);
+  });
+
+  it("gives the other team its own library, seeded from the reference materials", async () => {
+    const own = await library(other);
+    expect(own.get("teos")?.id).toBeDefined();
+    expect(own.get("teos")!.id).not.toBe(lib.get("teos")!.id);
+  });
+
+  it("answers 404 on every route given Larkspur's ids, and changes nothing", async () => {
+    const before = await (await clients.admin.fetch(`/api/revisions/${ids.draft}`)).json();
+    const beforeMaterial = await (await clients.admin.fetch(`/api/materials/${ids.material}`)).json();
+    const otherLib = await library(other);
+    const probes: [Case["method"], string, unknown?][] = [
+      ["GET", `/api/formulations/${ids.formulation}`],
+      ["GET", `/api/formulations/${ids.formulation}/diff?from=1&to=2`],
+      ["POST", `/api/formulations/${ids.formulation}/revisions`, {}],
+      ["GET", `/api/revisions/${ids.draft}`],
+      ["PUT", `/api/revisions/${ids.draft}`, { version: 1, input: coatInput(otherLib) }],
+      ["POST", `/api/revisions/${ids.draft}/submit`, {}],
+      ["POST", `/api/revisions/${ids.released}/archive`, {}],
+      ["GET", `/api/materials/${ids.material}`],
+      ["PUT", `/api/materials/${ids.material}`, { material: { ...otherLib.get("ethanol"), referenceId: undefined, updatedAt: undefined } }],
+      ["DELETE", `/api/materials/${ids.material}`],
+      ["PATCH", `/api/members/${ids.member}`, { role: "admin" }],
+      ["DELETE", `/api/members/${ids.member}`],
+    ];
+    for (const [method, path, json] of probes) {
+      const res = await other.fetch(path, { method, json });
+      expect(res.status, `${method} ${path}`).toBe(404);
+    }
+    const list = (await (await other.fetch("/api/formulations")).json()) as { total: number };
+    expect(list.total).toBe(0);
+    expect(await (await clients.admin.fetch(`/api/revisions/${ids.draft}`)).json()).toEqual(before);
+    expect(await (await clients.admin.fetch(`/api/materials/${ids.material}`)).json()).toEqual(beforeMaterial);
+    const members = (await (await clients.admin.fetch("/api/members")).json()) as { rows: { id: string; role: string }[] };
+    expect(members.rows.find((m) => m.id === ids.member)?.role).toBe("production");
+  });
+});

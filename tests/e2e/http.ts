@@ -1,0 +1,67 @@
+/** Helpers for tests that talk HTTP to the app that scripts/test.sh started. */
+export const BASE = `http://localhost:${process.env.TEST_APP_PORT ?? 3100}`;
+export const DEMO_PASSWORD = "larkspur-demo-2026";
+
+// Each test file loads this module afresh: a random block keeps their addresses apart.
+const block = Math.floor(Math.random() * 250);
+let ip = 0;
+/** A distinct client address per sign-in, so the sign-in rate limit applies per test client. */
+export function nextClientIp(): string {
+  ip++;
+  return `10.${block}.${Math.floor(ip / 250) % 250}.${(ip % 250) + 1}`;
+}
+
+export interface Client {
+  cookie: string;
+  ip: string;
+  fetch: (path: string, init?: RequestInit & { json?: unknown }) => Promise<Response>;
+}
+
+function makeFetch(cookie: string, clientIp: string) {
+  return (path: string, init: RequestInit & { json?: unknown } = {}) => {
+    const headers = new Headers(init.headers);
+    if (cookie) headers.set("cookie", cookie);
+    headers.set("origin", BASE);
+    headers.set("x-forwarded-for", clientIp);
+    let body = init.body;
+    if (init.json !== undefined) {
+      headers.set("content-type", "application/json");
+      body = JSON.stringify(init.json);
+    }
+    return fetch(`${BASE}${path}`, { ...init, headers, body, redirect: "manual" });
+  };
+}
+
+export function anonymous(): Client {
+  const clientIp = nextClientIp();
+  return { cookie: "", ip: clientIp, fetch: makeFetch("", clientIp) };
+}
+
+export async function signIn(email: string, password = DEMO_PASSWORD): Promise<Client> {
+  const clientIp = nextClientIp();
+  const res = await makeFetch("", clientIp)("/api/auth/sign-in/email", { method: "POST", json: { email, password } });
+  if (res.status !== 200) throw new Error(`sign-in of ${email} failed: ${res.status} ${await res.text()}`);
+  const cookie = res.headers
+    .getSetCookie()
+    .map((c) => c.split(";")[0])
+    .join("; ");
+  return { cookie, ip: clientIp, fetch: makeFetch(cookie, clientIp) };
+}
+
+export async function signUp(email: string, name: string, password = "a-test-password-1"): Promise<Client> {
+  const clientIp = nextClientIp();
+  const res = await makeFetch("", clientIp)("/api/auth/sign-up/email", { method: "POST", json: { email, password, name } });
+  if (res.status !== 200) throw new Error(`sign-up of ${email} failed: ${res.status} ${await res.text()}`);
+  const cookie = res.headers
+    .getSetCookie()
+    .map((c) => c.split(";")[0])
+    .join("; ");
+  return { cookie, ip: clientIp, fetch: makeFetch(cookie, clientIp) };
+}
+
+export const demo = {
+  admin: "admin@larkspur.example",
+  formulator: "formulator@larkspur.example",
+  reviewer: "reviewer@larkspur.example",
+  production: "production@larkspur.example",
+} as const;
