@@ -1,0 +1,225 @@
+/**
+ * A corpus of bad input against every write route: wrong types, missing and
+ * extra fields, huge numbers, NaN and Infinity strings, unicode, oversized and
+ * malformed bodies. Every case must get a 4xx in the one error shape, naming
+ * the field, never a 500 or a stack trace, and the database must not change.
+ */
+import { beforeAll, describe, expect, it } from "vitest";
+import { formulationInputSchema, materialSchema } from "@/lib/formulation";
+import { coatInput, library } from "./fixtures";
+import { demo, signIn, type Client } from "./http";
+
+type Json = null | boolean | number | string | Json[] | { [k: string]: Json };
+
+interface BadCase {
+  label: string;
+  client: () => Client;
+  method: string;
+  path: () => string;
+  body: string;
+  /** Dotted path the error should name (its first two segments are checked). */
+  field?: string;
+}
+
+const NUMBER_BAD: Json[] = ["abc", null, true, [], {}, "NaN", "Infinity", "1e999"];
+const STRING_BAD: Json[] = [12345, null, false, [], { x: 1 }];
+
+/** Every leaf of a JSON value with its dotted path. */
+function leaves(value: Json, prefix = ""): { path: string; value: Json }[] {
+  if (value === null || typeof value !== "object") return [{ path: prefix, value }];
+  const entries = Array.isArray(value) ? value.map((v, i) => [String(i), v] as const) : Object.entries(value);
+  return entries.flatMap(([k, v]) => leaves(v, prefix ? `${prefix}.${k}` : k));
+}
+
+function setAt(root: Json, path: string, value: Json | undefined): Json {
+  const copy = structuredClone(root) as Record<string, Json>;
+  const keys = path.split(".");
+  let node = copy as Record<string, Json>;
+  for (const k of keys.slice(0, -1)) node = node[k] as Record<string, Json>;
+  const last = keys[keys.length - 1]!;
+  if (value === undefined) {
+    if (Array.isArray(node)) node.splice(Number(last), 1);
+    else delete node[last];
+  } else node[last] = value;
+  return copy;
+}
+
+/** Mutations of a valid body that must each be refused. */
+function mutations(
+  valid: Json,
+  skip: (path: string) => boolean,
+  accepts: (body: Json) => boolean,
+): { label: string; body: Json; field: string }[] {
+  const out: { label: string; body: Json; field: string }[] = [];
+  for (const { path, value } of leaves(valid)) {
+    if (skip(path)) continue;
+    const bad = typeof value === "number" ? NUMBER_BAD : typeof value === "string" ? STRING_BAD : [];
+    for (const b of bad) out.push({ label: `${path} = ${JSON.stringify(b)}`, body: setAt(valid, path, b), field: path });
+    // Negative temperatures are real (a glass transition of −125 °C); every other number here must be ≥ 0.
+    if (typeof value === "number" && !/C$/.test(path)) {
+      out.push({ label: `${path} = -1`, body: setAt(valid, path, -1), field: path });
+    }
+  }
+  // A value the shared schema accepts (null for a nullable CAS number) is not bad input.
+  return out.filter((m) => !accepts(m.body));
+}
+
+let formulator: Client, admin: Client;
+let draftId = "";
+let materialId = "";
+let memberId = "";
+let validInput: Json;
+let validMaterial: Json;
+const cases: BadCase[] = [];
+
+async function snapshot() {
+  const f = (await (await admin.fetch("/api/formulations?pageSize=200&sort=name")).json()) as { total: number; rows: unknown[] };
+  const m = (await (await admin.fetch("/api/materials?pageSize=500")).json()) as { total: number; rows: unknown[] };
+  const d = await (await admin.fetch(`/api/revisions/${draftId}`)).json();
+  const mem = await (await admin.fetch("/api/members")).json();
+  const a = (await (await admin.fetch("/api/audit?pageSize=1")).json()) as { total: number };
+  return { f, m, d, mem, audit: a.total };
+}
+
+beforeAll(async () => {
+  formulator = await signIn(demo.formulator);
+  admin = await signIn(demo.admin);
+  const lib = await library(formulator);
+  validInput = coatInput(lib) as unknown as Json;
+  const list = (await (await formulator.fetch("/api/formulations?pageSize=100")).json()) as { rows: { id: string; name: string }[] };
+  const monolith = list.rows.find((r) => r.name === "Silica–PDMS monolith M-1")!;
+  const f = (await (await formulator.fetch(`/api/formulations/${monolith.id}`)).json()) as { revisions: { id: string }[] };
+  draftId = f.revisions[0]!.id;
+  const ethanol = lib.get("ethanol")!;
+  materialId = ethanol.id;
+  const { referenceId: _r, updatedAt: _u, ...material } = ethanol;
+  void _r; void _u;
+  validMaterial = material as Json;
+  const members = (await (await admin.fetch("/api/members")).json()) as { rows: { id: string; email: string }[] };
+  memberId = members.rows.find((m) => m.email === demo.production)!.id;
+
+  // Material ids are referenced by the rest of the input; changing them is a different test.
+  const skipInput = (p: string) => /(^|\.)id$|sources|hazards|formula$|name$/.test(p);
+  const skipMaterial = (p: string) => /sources|hazards|^formula$|^id$/.test(p);
+  const f2 = () => formulator;
+  const a = () => admin;
+  for (const m of mutations(validInput, skipInput, (b) => formulationInputSchema.safeParse(b).success)) {
+    cases.push({ label: `compute ${m.label}`, client: f2, method: "POST", path: () => "/api/compute", body: JSON.stringify(m.body), field: m.field });
+    cases.push({
+      label: `create formulation input.${m.label}`,
+      client: f2,
+      method: "POST",
+      path: () => "/api/formulations",
+      body: JSON.stringify({ name: "Bad input probe", input: m.body }),
+      field: `input.${m.field}`,
+    });
+    cases.push({
+      label: `save draft input.${m.label}`,
+      client: f2,
+      method: "PUT",
+      path: () => `/api/revisions/${draftId}`,
+      body: JSON.stringify({ version: 1, input: m.body }),
+      field: `input.${m.field}`,
+    });
+  }
+  for (const m of mutations(validMaterial, skipMaterial, (b) => materialSchema.safeParse(b).success)) {
+    const renamesIt = m.field === "name";
+    cases.push({
+      label: `update material ${m.label}`,
+      client: f2,
+      method: "PUT",
+      path: () => `/api/materials/${materialId}`,
+      body: JSON.stringify({ material: m.body }),
+      field: `material.${m.field}`,
+    });
+    if (renamesIt) continue;
+    cases.push({
+      label: `create material ${m.label}`,
+      client: f2,
+      method: "POST",
+      path: () => "/api/materials",
+      body: JSON.stringify({ material: setAt(m.body, "name", "Bad input probe material") }),
+      field: `material.${m.field}`,
+    });
+  }
+  const simple: [string, () => Client, string, () => string, Json, string][] = [
+    ["invite", a, "POST", () => "/api/invitations", { email: "not-an-address", role: "formulator" }, "email"],
+    ["invite", a, "POST", () => "/api/invitations", { email: "x@y.example", role: "owner" }, "role"],
+    ["invite", a, "POST", () => "/api/invitations", { email: "x@y.example" }, "role"],
+    ["invite", a, "POST", () => "/api/invitations", { email: "é@☃.example", role: 7 }, "role"],
+    ["invite", a, "POST", () => "/api/invitations", { email: "x@y.example", role: "formulator", extra: true }, "body"],
+    ["change role", a, "PATCH", () => `/api/members/${memberId}`, { role: "" }, "role"],
+    ["change role", a, "PATCH", () => `/api/members/${memberId}`, { role: null }, "role"],
+    ["change role", a, "PATCH", () => `/api/members/${memberId}`, {}, "role"],
+    ["change role", a, "PATCH", () => `/api/members/${memberId}`, { role: ["admin"] }, "role"],
+    ["create team", a, "POST", () => "/api/teams", { name: "" }, "name"],
+    ["create team", a, "POST", () => "/api/teams", { name: "x".repeat(500) }, "name"],
+    ["create team", a, "POST", () => "/api/teams", { name: 42 }, "name"],
+    ["return", () => formulator, "POST", () => `/api/revisions/${draftId}/submit`, { comment: 5 }, "comment"],
+    ["create formulation", f2, "POST", () => "/api/formulations", { name: "", input: validInput }, "name"],
+    ["create formulation", f2, "POST", () => "/api/formulations", { name: "ok", input: validInput, surprise: 1 }, "body"],
+    ["create formulation", f2, "POST", () => "/api/formulations", { input: validInput }, "name"],
+    ["create formulation", f2, "POST", () => "/api/formulations", { name: "x" }, "input"],
+    ["save draft", f2, "PUT", () => `/api/revisions/${draftId}`, { input: validInput }, "version"],
+    ["save draft", f2, "PUT", () => `/api/revisions/${draftId}`, { version: -3, input: validInput }, "version"],
+    ["save draft", f2, "PUT", () => `/api/revisions/${draftId}`, { version: "1", input: validInput }, "version"],
+    ["compute", f2, "POST", () => "/api/compute", [], "body"],
+    ["compute", f2, "POST", () => "/api/compute", "just a string", "body"],
+    ["compute", f2, "POST", () => "/api/compute", { ...(validInput as object), components: [] }, "components"],
+  ];
+  for (const [label, client, method, path, body, field] of simple) {
+    cases.push({ label: `${label} ${JSON.stringify(body).slice(0, 60)}`, client, method, path, body: JSON.stringify(body), field });
+  }
+  for (const [method, path] of [
+    ["POST", () => "/api/compute"],
+    ["POST", () => "/api/formulations"],
+    ["PUT", () => `/api/revisions/${draftId}`],
+    ["POST", () => "/api/materials"],
+    ["PUT", () => `/api/materials/${materialId}`],
+    ["POST", () => "/api/invitations"],
+    ["PATCH", () => `/api/members/${memberId}`],
+    ["POST", () => "/api/teams"],
+    ["POST", () => `/api/revisions/${draftId}/return`],
+  ] as [string, () => string][]) {
+    for (const [label, body] of [
+      ["malformed JSON", "{\"name\": "],
+      ["truncated unicode", "{\"name\": \"\uD83D"],
+      ["oversized body", JSON.stringify({ pad: "☃".repeat(700_000) })],
+    ] as [string, string][]) {
+      cases.push({ label: `${method} ${path()} ${label}`, client: path().includes("members") || path().includes("invitations") || path().includes("teams") ? a : f2, method, path, body });
+    }
+  }
+});
+
+describe("bad input on every write route", () => {
+  it("is a corpus of at least 300 cases", () => {
+    expect(cases.length).toBeGreaterThanOrEqual(300);
+  });
+
+  it("answers every case with a 4xx naming the field, never a 500 or a stack trace, and changes nothing", async () => {
+    const before = await snapshot();
+    const problems: string[] = [];
+    for (const c of cases) {
+      const res = await c.client().fetch(c.path(), { method: c.method, body: c.body, headers: { "content-type": "application/json" } });
+      const text = await res.text();
+      let body: { error?: { code?: string; message?: string; fields?: Record<string, string> } } = {};
+      try {
+        body = JSON.parse(text);
+      } catch {
+        problems.push(`${c.label}: not JSON (${res.status})`);
+        continue;
+      }
+      if (res.status < 400 || res.status >= 500) problems.push(`${c.label}: status ${res.status}`);
+      if (!body.error?.message) problems.push(`${c.label}: no error message`);
+      if (/node_modules|\n\s+at |stack/i.test(text)) problems.push(`${c.label}: leaks internals`);
+      if (c.field && res.status === 422) {
+        const want = c.field.split(".").slice(0, 2).join(".");
+        const keys = Object.keys(body.error?.fields ?? {});
+        const named = keys.some((k) => k.startsWith(want) || want.startsWith(k) || (k === "body" && c.field === "body"));
+        if (!named) problems.push(`${c.label}: fields ${JSON.stringify(keys)} do not name ${want}`);
+      }
+    }
+    expect(problems).toEqual([]);
+    expect(await snapshot()).toEqual(before);
+  });
+});

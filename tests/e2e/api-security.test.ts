@@ -1,0 +1,104 @@
+/**
+ * Security basics over HTTP: response headers, cookie flags, the sign-in rate
+ * limit, cross-site requests, and errors that never leak internals.
+ */
+import { describe, expect, it } from "vitest";
+import { coatInput, library } from "./fixtures";
+import { BASE, DEMO_PASSWORD, demo, nextClientIp, signIn } from "./http";
+
+describe("security headers", () => {
+  it("sends a content security policy that forbids framing, plus nosniff and a referrer policy", async () => {
+    for (const path of ["/api/health", "/sign-in"]) {
+      const res = await fetch(`${BASE}${path}`);
+      const csp = res.headers.get("content-security-policy") ?? "";
+      expect(csp, path).toMatch(/default-src 'self'/);
+      expect(csp, path).toMatch(/frame-ancestors 'none'/);
+      expect(res.headers.get("x-content-type-options"), path).toBe("nosniff");
+      expect(res.headers.get("referrer-policy"), path).toBe("strict-origin-when-cross-origin");
+      expect(res.headers.get("x-powered-by"), path).toBeNull();
+    }
+  });
+});
+
+describe("session cookie", () => {
+  it("is HttpOnly, SameSite=Lax and scoped to the whole site", async () => {
+    const ip = nextClientIp();
+    const res = await fetch(`${BASE}/api/auth/sign-in/email`, {
+      method: "POST",
+      headers: { "content-type": "application/json", origin: BASE, "x-forwarded-for": ip },
+      body: JSON.stringify({ email: demo.reviewer, password: DEMO_PASSWORD }),
+    });
+    expect(res.status).toBe(200);
+    const session = res.headers.getSetCookie().find((c) => c.startsWith("gelwright.session_token="));
+    expect(session).toBeDefined();
+    expect(session).toMatch(/HttpOnly/i);
+    expect(session).toMatch(/SameSite=Lax/i);
+    expect(session).toMatch(/Path=\//i);
+  });
+});
+
+describe("sign-in rate limit", () => {
+  it("refuses the sixth sign-in attempt within 10 s from one address with 429", async () => {
+    const ip = nextClientIp();
+    const statuses: number[] = [];
+    for (let i = 0; i < 6; i++) {
+      const res = await fetch(`${BASE}/api/auth/sign-in/email`, {
+        method: "POST",
+        headers: { "content-type": "application/json", origin: BASE, "x-forwarded-for": ip },
+        body: JSON.stringify({ email: demo.production, password: "wrong-password-123" }),
+      });
+      statuses.push(res.status);
+    }
+    expect(statuses).toEqual([401, 401, 401, 401, 401, 429]);
+  });
+});
+
+describe("cross-site requests", () => {
+  it("refuses a change sent from another origin, with a session cookie, and changes nothing", async () => {
+    const formulator = await signIn(demo.formulator);
+    const lib = await library(formulator);
+    const name = `Cross-site ${Date.now().toString(36)}`;
+    const res = await fetch(`${BASE}/api/formulations`, {
+      method: "POST",
+      headers: { cookie: formulator.cookie, origin: "https://evil.example", "content-type": "application/json", "x-forwarded-for": formulator.ip },
+      body: JSON.stringify({ name, input: coatInput(lib) }),
+    });
+    expect(res.status).toBe(403);
+    const list = (await (await formulator.fetch(`/api/formulations?q=${encodeURIComponent(name)}`)).json()) as { total: number };
+    expect(list.total).toBe(0);
+  });
+
+  it("refuses better-auth calls from another origin", async () => {
+    const res = await fetch(`${BASE}/api/auth/sign-in/email`, {
+      method: "POST",
+      headers: { "content-type": "application/json", origin: "https://evil.example", "x-forwarded-for": nextClientIp() },
+      body: JSON.stringify({ email: demo.formulator, password: DEMO_PASSWORD }),
+    });
+    expect(res.status).toBe(403);
+  });
+});
+
+describe("errors", () => {
+  it("answers malformed JSON with 400 and an oversized body with 413, without internals", async () => {
+    const formulator = await signIn(demo.formulator);
+    const bad = await formulator.fetch("/api/compute", { method: "POST", body: "{not json", headers: { "content-type": "application/json" } });
+    expect(bad.status).toBe(400);
+    const big = await formulator.fetch("/api/compute", { method: "POST", body: JSON.stringify({ pad: "x".repeat(1_100_000) }), headers: { "content-type": "application/json" } });
+    expect(big.status).toBe(413);
+    for (const res of [bad, big]) {
+      const text = JSON.stringify(await res.json());
+      expect(text).toMatch(/"error":\{"code"/);
+      expect(text).not.toMatch(/node_modules|at .*\(|stack/i);
+    }
+  });
+
+  it("answers an engine error with 422 naming the field", async () => {
+    const formulator = await signIn(demo.formulator);
+    const input = coatInput(await library(formulator), { teos: 0.4 });
+    input.components[1]!.weightFraction = 0.5; // 0.4 + 0.5 = 0.9, not 1
+    const res = await formulator.fetch("/api/compute", { method: "POST", json: input });
+    expect(res.status).toBe(422);
+    const body = (await res.json()) as { error: { fields: Record<string, string> } };
+    expect(Object.keys(body.error.fields).some((f) => f.startsWith("components"))).toBe(true);
+  });
+});
