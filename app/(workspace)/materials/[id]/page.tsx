@@ -1,0 +1,33 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { pageContext } from "@/components/layout/page-context";
+import { MaterialForm } from "@/components/materials/material-form";
+import type { LibraryMaterial } from "@/components/materials/types";
+import { PageHeader } from "@/components/ui/panel";
+import { getMaterial } from "@/db/queries/materials";
+import { can } from "@/lib/permissions";
+
+export const metadata: Metadata = { title: "Material" };
+
+export default async function MaterialPage({ params }: { params: Promise<{ id: string }> }) {
+  const ctx = await pageContext();
+  const { id } = await params;
+  if (!/^[0-9a-f-]{36}$/i.test(id)) notFound();
+  const m = await getMaterial(ctx.teamId, id);
+  if (!m) notFound();
+  const material = JSON.parse(JSON.stringify(m)) as LibraryMaterial;
+  return (
+    <>
+      <PageHeader
+        title={material.name}
+        subtitle={
+          <Link href="/materials" className="text-accent underline">
+            Back to the library
+          </Link>
+        }
+      />
+      <MaterialForm material={material} canSave={can(ctx.role, "material:update")} canDelete={can(ctx.role, "material:delete")} />
+    </>
+  );
+}

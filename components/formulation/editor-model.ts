@@ -1,0 +1,223 @@
+/**
+ * The editor's form values and their conversion to and from the engine's
+ * FormulationInput. Percentages in the form (wt%, solids content, linear
+ * shrinkage) are fractions in the engine; conversion is exact to 12 digits.
+ */
+import { z } from "zod";
+import type { FormulationInput, Material, MaterialKind } from "@/lib/formulation";
+
+export type BasisType = "solidMass" | "solidsContent" | "gelBody";
+export type SolventMode = "none" | "molPerNetworkAtom" | "fill";
+
+export interface EditorValues {
+  name: string;
+  project: string;
+  description: string;
+  basis: {
+    type: BasisType;
+    grams: number;
+    solMassGrams: number;
+    solidsPercent: number;
+    volumeMl: number;
+    bulkDensity: number;
+    linearShrinkagePercent: number;
+  };
+  components: { materialId: string; weightPercent: number }[];
+  water: { materialId: string; ratio: "R" | "h"; value: number };
+  solvent: { mode: SolventMode; materialId: string; value: number };
+  catalyst: { materialId: string; molPerNetworkAtom: number };
+  substrateId: string;
+  steps: { name: string; temperatureC: number; durationH: number }[];
+  marginC: number;
+  /** g/cm³; NaN when not measured. */
+  measuredBulkDensity: number;
+}
+
+const num = (what: string) => z.number({ error: `Enter a number for the ${what}` });
+
+/**
+ * Form-level checks (react-hook-form resolver): text that must be there and
+ * numbers that must be numbers. Chemistry checks come from the engine.
+ */
+export const editorSchema = z.object({
+  name: z.string().trim().min(1, "Name the formulation").max(200, "At most 200 characters"),
+  project: z.string().max(200, "At most 200 characters"),
+  description: z.string().max(5000, "At most 5000 characters"),
+  basis: z.object({
+    type: z.enum(["solidMass", "solidsContent", "gelBody"]),
+    grams: z.number(),
+    solMassGrams: z.number(),
+    solidsPercent: z.number(),
+    volumeMl: z.number(),
+    bulkDensity: z.number(),
+    linearShrinkagePercent: z.number(),
+  }),
+  components: z.array(
+    z.object({
+      materialId: z.string().min(1, "Pick a material"),
+      weightPercent: num("weight fraction"),
+    }),
+  ),
+  water: z.object({ materialId: z.string().min(1, "Pick the water"), ratio: z.enum(["R", "h"]), value: num("water ratio") }),
+  solvent: z.object({ mode: z.enum(["none", "molPerNetworkAtom", "fill"]), materialId: z.string(), value: z.number() }),
+  catalyst: z.object({ materialId: z.string(), molPerNetworkAtom: z.number() }),
+  substrateId: z.string(),
+  steps: z.array(
+    z.object({
+      name: z.string().trim().min(1, "Name the step"),
+      temperatureC: num("temperature"),
+      durationH: num("duration"),
+    }),
+  ),
+  marginC: num("margin"),
+  measuredBulkDensity: z.number().or(z.nan()),
+});
+
+const clean = (x: number) => (Number.isFinite(x) ? Number(x.toPrecision(12)) : x);
+const pct = (fraction: number | undefined, fallback: number) => (fraction === undefined ? fallback : clean(fraction * 100));
+
+/** A material record as the engine wants it: no library-only fields. */
+export function engineMaterial(record: Material & { updatedAt?: unknown; casNumber?: unknown }): Material {
+  const { updatedAt: _u, casNumber: _c, ...rest } = record;
+  void _u;
+  void _c;
+  return rest as Material;
+}
+
+/** Defaults for a new formulation, from the team's library. */
+export function blankValues(library: Material[]): EditorValues {
+  const first = (kind: MaterialKind, prefer?: RegExp) =>
+    library.find((m) => m.kind === kind && (!prefer || prefer.test(m.name)))?.id ?? library.find((m) => m.kind === kind)?.id ?? "";
+  return {
+    name: "",
+    project: "",
+    description: "",
+    basis: { type: "solidMass", grams: 10, solMassGrams: 100, solidsPercent: 20, volumeMl: 50, bulkDensity: 0.5, linearShrinkagePercent: 0 },
+    components: [{ materialId: "", weightPercent: 100 }],
+    water: { materialId: first("water"), ratio: "R", value: 4 },
+    solvent: { mode: "molPerNetworkAtom", materialId: first("solvent", /^ethanol/i), value: 4 },
+    catalyst: { materialId: first("catalyst", /hydrochloric/i), molPerNetworkAtom: 0.01 },
+    substrateId: "",
+    steps: [
+      { name: "Hydrolysis, stirred", temperatureC: 25, durationH: 2 },
+      { name: "Drying", temperatureC: 60, durationH: 24 },
+    ],
+    marginC: 20,
+    measuredBulkDensity: Number.NaN,
+  };
+}
+
+/** Form values from a saved input. */
+export function valuesFromInput(input: FormulationInput, meta: { name: string; project: string | null; description?: string | null }): EditorValues {
+  const b = input.basis;
+  return {
+    name: meta.name,
+    project: meta.project ?? "",
+    description: meta.description ?? "",
+    basis: {
+      type: b.type,
+      grams: b.type === "solidMass" ? b.grams : 10,
+      solMassGrams: b.type === "solidsContent" ? b.solMassGrams : 100,
+      solidsPercent: b.type === "solidsContent" ? pct(b.solidsFraction, 20) : 20,
+      volumeMl: b.type === "gelBody" ? b.volumeMl : 50,
+      bulkDensity: b.type === "gelBody" ? b.bulkDensity : 0.5,
+      linearShrinkagePercent: b.type === "gelBody" ? pct(b.linearShrinkage, 0) : 0,
+    },
+    components: input.components.map((c) => ({ materialId: c.materialId, weightPercent: pct(c.weightFraction, 0) })),
+    water: { ...input.water },
+    solvent: input.solvent
+      ? { mode: input.solvent.mode, materialId: input.solvent.materialId, value: input.solvent.mode === "molPerNetworkAtom" ? input.solvent.value : 4 }
+      : { mode: "none", materialId: "", value: 4 },
+    catalyst: input.catalyst ? { ...input.catalyst } : { materialId: "", molPerNetworkAtom: 0.01 },
+    substrateId: input.substrateId ?? "",
+    steps: input.steps.map((s) => ({ ...s })),
+    marginC: input.marginC ?? 20,
+    measuredBulkDensity: input.measuredBulkDensity ?? Number.NaN,
+  };
+}
+
+/** Material ids the values refer to, in a stable order. */
+export function referencedIds(v: EditorValues): string[] {
+  const ids = [
+    ...v.components.map((c) => c.materialId),
+    v.water.materialId,
+    v.solvent.mode !== "none" ? v.solvent.materialId : "",
+    v.catalyst.materialId,
+    v.substrateId,
+  ].filter(Boolean);
+  return [...new Set(ids)];
+}
+
+/**
+ * The engine input for the form values; `records` resolves ids to material
+ * records (the revision's own copies first, then the library).
+ */
+export function inputFromValues(v: EditorValues, records: (id: string) => Material | undefined): FormulationInput {
+  const materials = referencedIds(v)
+    .map((id) => records(id))
+    .filter((m): m is Material => m !== undefined);
+  const basis: FormulationInput["basis"] =
+    v.basis.type === "solidMass"
+      ? { type: "solidMass", grams: v.basis.grams }
+      : v.basis.type === "solidsContent"
+        ? { type: "solidsContent", solMassGrams: v.basis.solMassGrams, solidsFraction: clean(v.basis.solidsPercent / 100) }
+        : {
+            type: "gelBody",
+            volumeMl: v.basis.volumeMl,
+            bulkDensity: v.basis.bulkDensity,
+            linearShrinkage: clean(v.basis.linearShrinkagePercent / 100),
+          };
+  const input: FormulationInput = {
+    materials,
+    basis,
+    components: v.components.map((c) => ({ materialId: c.materialId, weightFraction: clean(c.weightPercent / 100) })),
+    water: { materialId: v.water.materialId, ratio: v.water.ratio, value: v.water.value },
+    steps: v.steps.map((s) => ({ name: s.name, temperatureC: s.temperatureC, durationH: s.durationH })),
+    marginC: v.marginC,
+  };
+  if (v.solvent.mode === "molPerNetworkAtom") input.solvent = { materialId: v.solvent.materialId, mode: "molPerNetworkAtom", value: v.solvent.value };
+  if (v.solvent.mode === "fill") input.solvent = { materialId: v.solvent.materialId, mode: "fill" };
+  if (v.catalyst.materialId) input.catalyst = { materialId: v.catalyst.materialId, molPerNetworkAtom: v.catalyst.molPerNetworkAtom };
+  if (v.substrateId) input.substrateId = v.substrateId;
+  if (Number.isFinite(v.measuredBulkDensity)) input.measuredBulkDensity = v.measuredBulkDensity;
+  return input;
+}
+
+/** Where an engine or server message about `path` (of FormulationInput) belongs in the form. */
+export function formFieldFor(path: string, v: EditorValues, input: FormulationInput): { field: string; prefix?: string } {
+  const parts = path.split(".");
+  const head = parts[0] ?? "";
+  if (head === "components" && parts.length >= 3 && parts[2] === "weightFraction") return { field: `components.${parts[1]}.weightPercent` };
+  if (head === "components" && parts.length >= 2) return { field: parts.length >= 3 ? `components.${parts[1]}.materialId` : "components" };
+  if (head === "components") return { field: "components" };
+  if (head === "basis") {
+    const key = parts[1];
+    if (key === "solidsFraction") return { field: "basis.solidsPercent" };
+    if (key === "linearShrinkage") return { field: "basis.linearShrinkagePercent" };
+    if (key && ["grams", "solMassGrams", "volumeMl", "bulkDensity"].includes(key)) return { field: `basis.${key}` };
+    return { field: "basis.type" };
+  }
+  if (head === "water" || head === "solvent" || head === "catalyst") {
+    const key = parts[1];
+    if (head === "catalyst" && key === "molPerNetworkAtom") return { field: "catalyst.molPerNetworkAtom" };
+    if (key && ["materialId", "ratio", "value", "mode"].includes(key)) return { field: `${head}.${key}` };
+    return { field: `${head}.materialId` };
+  }
+  if (head === "substrateId") return { field: "substrateId" };
+  if (head === "steps") return { field: parts.length >= 3 ? `steps.${parts[1]}.${parts[2]}` : "steps" };
+  if (head === "marginC" || head === "measuredBulkDensity") return { field: head };
+  if (head === "materials" && parts[1] !== undefined) {
+    const material = input.materials[Number(parts[1])];
+    if (material) {
+      const prefix = `${material.name} (library record${parts.length > 2 ? `, ${parts.slice(2).join(".")}` : ""}): `;
+      const ci = v.components.findIndex((c) => c.materialId === material.id);
+      if (ci >= 0) return { field: `components.${ci}.materialId`, prefix };
+      if (v.water.materialId === material.id) return { field: "water.materialId", prefix };
+      if (v.solvent.materialId === material.id) return { field: "solvent.materialId", prefix };
+      if (v.catalyst.materialId === material.id) return { field: "catalyst.materialId", prefix };
+      if (v.substrateId === material.id) return { field: "substrateId", prefix };
+      return { field: "general", prefix };
+    }
+  }
+  return { field: "general" };
+}

@@ -1,0 +1,148 @@
+"use client";
+
+import type { PaginationState, SortingState } from "@tanstack/react-table";
+import Link from "next/link";
+import { useMemo, useState } from "react";
+import useSWR from "swr";
+import { DataTable, type ServerColumn } from "@/components/ui/data-table";
+import { ErrorPanel } from "@/components/ui/error-panel";
+import { inputClass } from "@/components/ui/field";
+import { StateBadge } from "@/components/ui/status";
+import { useDebounced } from "@/components/ui/use-debounced";
+import { fetcher, query } from "@/lib/fetcher";
+import { fmtDateTime } from "@/lib/format";
+import { STATE_LABELS, type RevisionState } from "@/lib/workflow";
+import { REVISION_STATES } from "@/lib/workflow-states";
+
+export interface FormulationRow {
+  id: string;
+  name: string;
+  project: string | null;
+  latestState: RevisionState;
+  latestRevision: number;
+  updatedAt: string;
+}
+
+interface ListResponse {
+  rows: FormulationRow[];
+  total: number;
+  page: number;
+  pageSize: number;
+}
+
+const columns: ServerColumn<FormulationRow>[] = [
+  {
+    id: "name",
+    accessorKey: "name",
+    header: "Name",
+    enableHiding: false,
+    cell: ({ row }) => (
+      <Link href={`/formulations/${row.original.id}`} className="font-medium text-ink underline-offset-2 hover:text-accent hover:underline">
+        {row.original.name}
+      </Link>
+    ),
+  },
+  { id: "project", accessorKey: "project", header: "Project", cell: ({ row }) => row.original.project ?? <span className="text-muted">none</span> },
+  { id: "state", accessorKey: "latestState", header: "State", cell: ({ row }) => <StateBadge state={row.original.latestState} /> },
+  {
+    id: "revision",
+    accessorKey: "latestRevision",
+    header: "Revision",
+    enableSorting: false,
+    cell: ({ row }) => <span className="num">{row.original.latestRevision}</span>,
+  },
+  {
+    id: "updatedAt",
+    accessorKey: "updatedAt",
+    header: "Last change",
+    cell: ({ row }) => <span className="num whitespace-nowrap text-muted">{fmtDateTime(row.original.updatedAt)}</span>,
+  },
+];
+
+interface FormulationListProps {
+  /** Production sees released formulations only (the API filters). */
+  releasedOnly?: boolean;
+  /** Where a row's name links (production: the batch sheet list). */
+  caption?: string;
+}
+
+/** The team's formulations: search, filter by state, sort and page, all on the server. */
+export function FormulationList({ releasedOnly = false, caption = "Formulations" }: FormulationListProps) {
+  const [q, setQ] = useState("");
+  const [state, setState] = useState<RevisionState | "">("");
+  const [sorting, setSorting] = useState<SortingState>([{ id: "updatedAt", desc: true }]);
+  const [pagination, setPagination] = useState<PaginationState>({ pageIndex: 0, pageSize: 25 });
+  const search = useDebounced(q);
+
+  const key = useMemo(() => {
+    const sort = sorting[0];
+    return `/api/formulations${query({
+      q: search.trim() || undefined,
+      state: state || undefined,
+      sort: sort?.id,
+      dir: sort ? (sort.desc ? "desc" : "asc") : undefined,
+      page: pagination.pageIndex + 1,
+      pageSize: pagination.pageSize,
+    })}`;
+  }, [search, state, sorting, pagination]);
+
+  const { data, error, isLoading, mutate } = useSWR<ListResponse>(key, fetcher, { keepPreviousData: true });
+
+  return (
+    <div className="flex flex-col gap-3">
+      <div className="flex flex-wrap items-end gap-3">
+        <label className="flex min-w-[14rem] flex-1 flex-col gap-1 text-[13px] font-medium">
+          Search by name or project
+          <input
+            type="search"
+            className={inputClass()}
+            value={q}
+            onChange={(e) => {
+              setQ(e.target.value);
+              setPagination((p) => ({ ...p, pageIndex: 0 }));
+            }}
+          />
+        </label>
+        {!releasedOnly ? (
+          <label className="flex flex-col gap-1 text-[13px] font-medium">
+            State
+            <select
+              className={inputClass(false, "min-w-[12rem]")}
+              value={state}
+              onChange={(e) => {
+                setState(e.target.value as RevisionState | "");
+                setPagination((p) => ({ ...p, pageIndex: 0 }));
+              }}
+            >
+              <option value="">Any state</option>
+              {REVISION_STATES.map((s) => (
+                <option key={s} value={s}>
+                  {STATE_LABELS[s]}
+                </option>
+              ))}
+            </select>
+          </label>
+        ) : null}
+      </div>
+      {error ? <ErrorPanel message={error.message} onRetry={() => mutate()} /> : null}
+      <DataTable
+        caption={caption}
+        columns={columns}
+        rows={data?.rows ?? EMPTY}
+        total={data?.total ?? 0}
+        sorting={sorting}
+        onSortingChange={(s) => {
+          setSorting(s);
+          setPagination((p) => ({ ...p, pageIndex: 0 }));
+        }}
+        pagination={pagination}
+        onPaginationChange={setPagination}
+        loading={isLoading}
+        getRowId={(r) => r.id}
+        empty={q || state ? "No formulation matches." : "No formulations yet."}
+      />
+    </div>
+  );
+}
+
+const EMPTY: FormulationRow[] = [];

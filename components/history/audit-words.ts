@@ -1,0 +1,63 @@
+/** Plain-word descriptions of audit events, shared by the home page, activity and history. */
+
+export interface AuditEventView {
+  id?: string | number;
+  action: string;
+  entityType: string;
+  entityId: string;
+  summary: unknown;
+  createdAt: string | Date;
+  actorName: string | null;
+}
+
+const ACTION_WORDS: Record<string, string> = {
+  "formulation.created": "created the formulation",
+  "revision.saved": "saved a draft",
+  "revision.seeded": "recorded the revision (demo data)",
+  "revision.started": "started a new revision",
+  "revision.submitted": "submitted for review",
+  "revision.approved": "approved",
+  "revision.returned": "sent back with comments",
+  "revision.released": "released to production",
+  "revision.archived": "archived",
+  "material.created": "added a material",
+  "material.updated": "changed a material",
+  "material.deleted": "removed a material",
+  "member.role_changed": "changed a member's role",
+  "member.removed": "removed a member",
+  "member.invited": "invited someone",
+};
+
+/** "approved", "saved a draft" … (unknown actions: the code with dots as spaces). */
+export function actionWords(action: string): string {
+  return ACTION_WORDS[action] ?? action.replace(/[._]/g, " ");
+}
+
+type Summary = { before?: Record<string, unknown>; after?: Record<string, unknown>; note?: string } | null;
+
+/** A short detail line from an event's summary (name, revision, role, comment …). */
+export function summaryWords(summary: unknown): string {
+  const s = (summary ?? null) as Summary;
+  if (!s || typeof s !== "object") return "";
+  const parts: string[] = [];
+  const after = s.after ?? {};
+  const before = s.before ?? {};
+  if (typeof after.name === "string") parts.push(String(after.name));
+  else if (typeof before.name === "string") parts.push(String(before.name));
+  if (typeof after.revision === "number") parts.push(`revision ${after.revision}`);
+  if (typeof before.role === "string" && typeof after.role === "string") parts.push(`${before.role} → ${after.role}`);
+  else if (typeof after.role === "string") parts.push(`as ${after.role}`);
+  if (typeof after.email === "string") parts.push(String(after.email));
+  if (typeof after.version === "number") parts.push(`version ${after.version}`);
+  if (typeof after.computeError === "string" && after.computeError) parts.push(`cannot compute: ${after.computeError}`);
+  if (typeof s.note === "string" && s.note) parts.push(`“${s.note}”`);
+  return parts.join(" · ");
+}
+
+/** Where an event's record lives in the app, if it has a page. */
+export function eventHref(e: Pick<AuditEventView, "entityType" | "entityId">): string | null {
+  if (e.entityType === "revision") return `/revisions/${e.entityId}`;
+  if (e.entityType === "formulation") return `/formulations/${e.entityId}`;
+  if (e.entityType === "material") return `/materials/${e.entityId}`;
+  return null;
+}

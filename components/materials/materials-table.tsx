@@ -1,0 +1,159 @@
+"use client";
+
+import type { PaginationState, SortingState } from "@tanstack/react-table";
+import Link from "next/link";
+import { useMemo, useState } from "react";
+import useSWR from "swr";
+import { KIND_WORDS } from "@/components/results/words";
+import { DataTable, type ServerColumn } from "@/components/ui/data-table";
+import { ErrorPanel } from "@/components/ui/error-panel";
+import { HazardCodes, SAFETY_REMINDER } from "@/components/ui/hazards";
+import { inputClass } from "@/components/ui/field";
+import { useDebounced } from "@/components/ui/use-debounced";
+import { MATERIAL_KINDS, type MaterialKind } from "@/lib/formulation";
+import { fetcher, query } from "@/lib/fetcher";
+import { fmtDate, fmtDensity, fmtPercent, fmtQuantity, fmtTemp } from "@/lib/format";
+import type { LibraryMaterial } from "./types";
+
+interface ListResponse {
+  rows: LibraryMaterial[];
+  total: number;
+}
+
+function keyProperty(m: LibraryMaterial): string {
+  if (m.kind === "precursor" && m.precursor) {
+    const yieldFraction = m.molarMass ? (m.precursor.residuePerMolecule * m.precursor.residueMolarMass) / m.molarMass : undefined;
+    return `→ ${m.precursor.residueFormula}${yieldFraction ? `, yield ${fmtPercent(yieldFraction)}` : ""}`;
+  }
+  if ((m.kind === "organic" || m.kind === "substrate") && m.thermal) {
+    const t = m.thermal;
+    return [
+      t.glassTransitionC !== undefined ? `Tg ${fmtTemp(t.glassTransitionC)}` : "",
+      t.meltingC !== undefined ? `Tm ${fmtTemp(t.meltingC)}` : "",
+      t.degradationOnsetC !== undefined ? `Td ${fmtTemp(t.degradationOnsetC)}` : "",
+      t.maxServiceC !== undefined ? `max ${fmtTemp(t.maxServiceC)}` : "",
+    ]
+      .filter(Boolean)
+      .join(" · ");
+  }
+  if (m.assay !== undefined && m.assay < 1) return `assay ${fmtPercent(m.assay)}`;
+  return "";
+}
+
+const columns: ServerColumn<LibraryMaterial>[] = [
+  {
+    id: "name",
+    accessorKey: "name",
+    header: "Name",
+    enableHiding: false,
+    cell: ({ row }) => (
+      <Link href={`/materials/${row.original.id}`} className="font-medium text-ink underline-offset-2 hover:text-accent hover:underline">
+        {row.original.name}
+      </Link>
+    ),
+  },
+  { id: "kind", accessorKey: "kind", header: "Kind", cell: ({ row }) => KIND_WORDS[row.original.kind] },
+  { id: "formula", accessorKey: "formula", header: "Formula", enableSorting: false, cell: ({ row }) => <span className="font-mono text-xs">{row.original.formula ?? "–"}</span> },
+  {
+    id: "molarMass",
+    accessorKey: "molarMass",
+    header: "Molar mass",
+    enableSorting: false,
+    cell: ({ row }) => <span className="num whitespace-nowrap">{fmtQuantity(row.original.molarMass, "g/mol", 5)}</span>,
+  },
+  {
+    id: "density",
+    accessorKey: "density",
+    header: "Density",
+    enableSorting: false,
+    cell: ({ row }) => <span className="num whitespace-nowrap">{fmtDensity(row.original.density)}</span>,
+  },
+  { id: "key", header: "Key properties", enableSorting: false, cell: ({ row }) => <span className="num text-xs">{keyProperty(row.original)}</span> },
+  { id: "hazards", header: "GHS hazard statements", enableSorting: false, cell: ({ row }) => <HazardCodes codes={row.original.hazards} /> },
+  { id: "casNumber", accessorKey: "casNumber", header: "CAS", enableSorting: false, cell: ({ row }) => <span className="num">{row.original.casNumber ?? "–"}</span> },
+  {
+    id: "updatedAt",
+    accessorKey: "updatedAt",
+    header: "Last change",
+    cell: ({ row }) => <span className="num whitespace-nowrap text-muted">{fmtDate(row.original.updatedAt)}</span>,
+  },
+];
+
+const EMPTY: LibraryMaterial[] = [];
+
+/** The team's materials library: search, filter by kind, sort, page and choose columns (all done by the API). */
+export function MaterialsTable() {
+  const [q, setQ] = useState("");
+  const [kind, setKind] = useState<MaterialKind | "">("");
+  const [sorting, setSorting] = useState<SortingState>([{ id: "name", desc: false }]);
+  const [pagination, setPagination] = useState<PaginationState>({ pageIndex: 0, pageSize: 25 });
+  const search = useDebounced(q);
+  const key = useMemo(() => {
+    const sort = sorting[0];
+    return `/api/materials${query({
+      q: search.trim() || undefined,
+      kind: kind || undefined,
+      sort: sort?.id,
+      dir: sort ? (sort.desc ? "desc" : "asc") : undefined,
+      page: pagination.pageIndex + 1,
+      pageSize: pagination.pageSize,
+    })}`;
+  }, [search, kind, sorting, pagination]);
+  const { data, error, isLoading, mutate } = useSWR<ListResponse>(key, fetcher, { keepPreviousData: true });
+
+  return (
+    <div className="flex flex-col gap-3">
+      <div className="flex flex-wrap items-end gap-3">
+        <label className="flex min-w-[14rem] flex-1 flex-col gap-1 text-[13px] font-medium">
+          Search by name or CAS number
+          <input
+            type="search"
+            className={inputClass()}
+            value={q}
+            onChange={(e) => {
+              setQ(e.target.value);
+              setPagination((p) => ({ ...p, pageIndex: 0 }));
+            }}
+          />
+        </label>
+        <label className="flex flex-col gap-1 text-[13px] font-medium">
+          Kind
+          <select
+            className={inputClass(false, "min-w-[11rem]")}
+            value={kind}
+            onChange={(e) => {
+              setKind(e.target.value as MaterialKind | "");
+              setPagination((p) => ({ ...p, pageIndex: 0 }));
+            }}
+          >
+            <option value="">Any kind</option>
+            {MATERIAL_KINDS.map((k) => (
+              <option key={k} value={k}>
+                {KIND_WORDS[k]}
+              </option>
+            ))}
+          </select>
+        </label>
+      </div>
+      {error ? <ErrorPanel message={error.message} onRetry={() => mutate()} /> : null}
+      <DataTable
+        caption="Materials library"
+        columns={columns}
+        rows={data?.rows ?? EMPTY}
+        total={data?.total ?? 0}
+        sorting={sorting}
+        onSortingChange={(s) => {
+          setSorting(s);
+          setPagination((p) => ({ ...p, pageIndex: 0 }));
+        }}
+        pagination={pagination}
+        onPaginationChange={setPagination}
+        initialVisibility={{ casNumber: false, updatedAt: false }}
+        loading={isLoading}
+        getRowId={(r) => r.id}
+        empty={q || kind ? "No material matches." : "The library is empty."}
+      />
+      <p className="text-xs text-muted">⚠ GHS hazard statements as recorded in the library. {SAFETY_REMINDER}</p>
+    </div>
+  );
+}

@@ -1,0 +1,227 @@
+"use client";
+
+import { useBalanceResolution } from "@/components/results/balance";
+import { BalanceSelect } from "@/components/results/balance-select";
+import { materialsById, ROLE_WORDS } from "@/components/results/words";
+import { Button } from "@/components/ui/button";
+import { SAFETY_REMINDER } from "@/components/ui/hazards";
+import type { FormulationInput, FormulationResult } from "@/lib/formulation";
+import { fmtDateTime, fmtHours, fmtMass, fmtPercent, fmtTemp, fmtVolume } from "@/lib/format";
+
+interface BatchSheetProps {
+  formulationName: string;
+  project: string | null;
+  revisionNumber: number;
+  released: boolean;
+  releasedAt: string | null;
+  input: FormulationInput;
+  result: FormulationResult;
+}
+
+const PRINT_CSS = `
+@media print {
+  @page { size: A4 landscape; margin: 10mm; }
+  body { font-size: 10.5pt; }
+  main { padding: 0 !important; max-width: none !important; }
+  .batch-sheet { border: none !important; padding: 0 !important; }
+  .batch-sheet table { page-break-inside: auto; }
+  .batch-sheet tr { page-break-inside: avoid; }
+  .batch-sheet .write-in { height: 9mm; }
+}
+`;
+
+function basisWords(input: FormulationInput): string {
+  const b = input.basis;
+  if (b.type === "solidMass") return `${fmtMass(b.grams)} dry solid`;
+  if (b.type === "solidsContent") return `${fmtMass(b.solMassGrams)} of sol at ${fmtPercent(b.solidsFraction)} solids`;
+  return `gel body of ${fmtVolume(b.volumeMl)} at ${b.bulkDensity} g/cm³`;
+}
+
+/** A printable batch sheet: order of addition, targets, blank columns to fill in, safety cautions. */
+export function BatchSheet({ formulationName, project, revisionNumber, released, releasedAt, input, result }: BatchSheetProps) {
+  const [resolution, setResolution] = useBalanceResolution();
+  const byId = materialsById(input);
+  const dispensed = result.lines.map((l) => byId.get(l.materialId)).filter((m) => m !== undefined);
+  const hazardous = dispensed.filter((m, i, all) => (m.hazards?.length ?? 0) > 0 && all.indexOf(m) === i);
+  const cautions = result.notices.filter((n) => n.level !== "info");
+  const cell = "border border-ink/60 px-2 py-1";
+  const head = `${cell} bg-paper text-left text-xs font-semibold`;
+  return (
+    <article className="batch-sheet rounded border border-rule bg-panel p-4" data-testid="batch-sheet">
+      <style>{PRINT_CSS}</style>
+      <div className="no-print mb-3 flex flex-wrap items-center justify-between gap-2">
+        <BalanceSelect value={resolution} onChange={setResolution} />
+        <Button variant="primary" onClick={() => window.print()}>
+          Print batch sheet
+        </Button>
+      </div>
+      {!released ? (
+        <p role="note" className="mb-3 rounded border border-fail/50 bg-fail-soft px-3 py-2 text-sm font-semibold text-fail">
+          Preview only: this revision is not released to production. Do not use it to make a batch.
+        </p>
+      ) : null}
+      <header className="flex flex-wrap items-start justify-between gap-3 border-b border-ink/60 pb-2">
+        <div>
+          <p className="text-xs tracking-wide text-muted uppercase">Gelwright batch sheet</p>
+          <h1 className="text-xl font-semibold">{formulationName}</h1>
+          <p className="text-sm">
+            Revision {revisionNumber}
+            {releasedAt ? ` · released ${fmtDateTime(releasedAt)}` : ""} · {project ?? "No project"}
+          </p>
+          <p className="num text-sm">
+            Batch: {basisWords(input)} · sol {fmtMass(result.sol.massGrams, resolution)} (≈ {fmtVolume(result.sol.volumeMl)}) · solids{" "}
+            {fmtPercent(result.sol.solidsFraction, 2)} · masses to {resolution} g
+          </p>
+        </div>
+        <dl className="grid grid-cols-[auto_12rem] gap-x-2 gap-y-1 text-sm">
+          <dt>Batch lot number</dt>
+          <dd className="border-b border-ink/60" />
+          <dt>Date</dt>
+          <dd className="border-b border-ink/60" />
+          <dt>Made by</dt>
+          <dd className="border-b border-ink/60" />
+          <dt>Balance id</dt>
+          <dd className="border-b border-ink/60" />
+        </dl>
+      </header>
+
+      <section aria-label="Safety cautions" className="mt-3 rounded border-2 border-caution bg-caution-soft px-3 py-2 text-sm">
+        <h2 className="font-semibold text-caution">
+          <span aria-hidden="true">⚠ </span>Safety cautions
+        </h2>
+        <ul className="mt-1 list-disc pl-5">
+          {hazardous.map((m) => (
+            <li key={m.id}>
+              {m.name}: GHS <span className="num font-mono">{m.hazards!.join(", ")}</span>
+            </li>
+          ))}
+          {cautions.map((n, i) => (
+            <li key={`${n.code}-${i}`}>
+              <span className="font-medium">{n.level === "error" ? "Error" : "Caution"}:</span> {n.message}
+            </li>
+          ))}
+        </ul>
+        <p className="mt-1 font-medium">{SAFETY_REMINDER}</p>
+      </section>
+
+      <h2 className="mt-4 mb-1 text-sm font-semibold">Dispensing, in order of addition</h2>
+      <div className="overflow-x-auto">
+        <table className="w-full border-collapse text-sm">
+          <caption className="sr-only">Dispensing, in order of addition</caption>
+          <thead>
+            <tr>
+              <th scope="col" className={head}>
+                #
+              </th>
+              <th scope="col" className={head}>
+                Material
+              </th>
+              <th scope="col" className={head}>
+                Lot number
+              </th>
+              <th scope="col" className={`${head} text-right`}>
+                Target mass
+              </th>
+              <th scope="col" className={`${head} text-right`}>
+                Target volume
+              </th>
+              <th scope="col" className={head}>
+                Actual mass (g)
+              </th>
+              <th scope="col" className={head}>
+                Time
+              </th>
+              <th scope="col" className={head}>
+                Initials
+              </th>
+            </tr>
+          </thead>
+          <tbody>
+            {result.lines.map((l, i) => {
+              const m = byId.get(l.materialId);
+              return (
+                <tr key={`${l.materialId}-${l.role}`} className="write-in">
+                  <td className={`${cell} num`}>{i + 1}</td>
+                  <td className={cell}>
+                    <span className="font-medium">{m?.name ?? l.materialId}</span>
+                    <span className="block text-xs text-muted">
+                      {ROLE_WORDS[l.role]}
+                      {m?.hazards?.length ? ` · GHS ${m.hazards.join(", ")}` : ""}
+                    </span>
+                  </td>
+                  <td className={`${cell} min-w-[7rem]`} />
+                  <td className={`${cell} num text-right font-semibold whitespace-nowrap`}>{fmtMass(l.massGrams, resolution)}</td>
+                  <td className={`${cell} num text-right whitespace-nowrap`}>{fmtVolume(l.volumeMl)}</td>
+                  <td className={`${cell} min-w-[6rem]`} />
+                  <td className={`${cell} min-w-[4rem]`} />
+                  <td className={`${cell} min-w-[4rem]`} />
+                </tr>
+              );
+            })}
+          </tbody>
+        </table>
+      </div>
+
+      <h2 className="mt-4 mb-1 text-sm font-semibold">Process steps</h2>
+      <div className="overflow-x-auto">
+        <table className="w-full border-collapse text-sm">
+          <caption className="sr-only">Process steps</caption>
+          <thead>
+            <tr>
+              <th scope="col" className={head}>
+                #
+              </th>
+              <th scope="col" className={head}>
+                Step
+              </th>
+              <th scope="col" className={`${head} text-right`}>
+                Temperature
+              </th>
+              <th scope="col" className={`${head} text-right`}>
+                Duration
+              </th>
+              <th scope="col" className={head}>
+                Started
+              </th>
+              <th scope="col" className={head}>
+                Ended
+              </th>
+              <th scope="col" className={head}>
+                Initials
+              </th>
+            </tr>
+          </thead>
+          <tbody>
+            {input.steps.map((s, i) => (
+              <tr key={i} className="write-in">
+                <td className={`${cell} num`}>{i + 1}</td>
+                <td className={cell}>{s.name}</td>
+                <td className={`${cell} num text-right`}>{fmtTemp(s.temperatureC)}</td>
+                <td className={`${cell} num text-right`}>{fmtHours(s.durationH)}</td>
+                <td className={`${cell} min-w-[5rem]`} />
+                <td className={`${cell} min-w-[5rem]`} />
+                <td className={`${cell} min-w-[4rem]`} />
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
+      {result.thermal.maxAllowedC !== undefined ? (
+        <p className="mt-2 text-sm">
+          Thermal limit: never reach <strong className="num">{fmtTemp(result.thermal.maxAllowedC + (input.marginC ?? 20))}</strong> in any step;
+          the highest step temperature with the {fmtTemp(input.marginC ?? 20)} margin is{" "}
+          <strong className="num">{fmtTemp(result.thermal.maxAllowedC)}</strong>. Check the oven set point and its calibration.
+        </p>
+      ) : null}
+
+      <footer className="mt-6 grid gap-4 text-sm sm:grid-cols-2">
+        <p>
+          Made by (signature) <span className="ml-2 inline-block w-48 border-b border-ink/60" />
+        </p>
+        <p>
+          Checked by (signature) <span className="ml-2 inline-block w-48 border-b border-ink/60" />
+        </p>
+      </footer>
+    </article>
+  );
+}

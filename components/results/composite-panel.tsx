@@ -1,0 +1,75 @@
+import type { FormulationInput, FormulationResult } from "@/lib/formulation";
+import { fmtDensity, fmtMass, fmtPercent } from "@/lib/format";
+import { CompositionChart } from "./composition-chart";
+import { FigureRows, TD, TDN, TH, THN } from "./table";
+import { materialsById } from "./words";
+
+interface CompositePanelProps {
+  input: FormulationInput;
+  result: FormulationResult;
+  resolution: number;
+}
+
+/** The ideal dry composite: weight and volume fractions, density, porosity, shrinkage. */
+export function CompositePanel({ input, result, resolution }: CompositePanelProps) {
+  const c = result.composite;
+  const byId = materialsById(input);
+  const phases = c.phases.map((p) => ({
+    ...p,
+    label: p.residueFormula ? `${p.residueFormula} from ${byId.get(p.materialId)?.name ?? p.materialId}` : (byId.get(p.materialId)?.name ?? p.materialId),
+  }));
+  return (
+    <div className="@container flex flex-col gap-3">
+      <div className="overflow-x-auto">
+        <table className="w-full text-sm" data-testid="composite-table">
+          <caption className="sr-only">Dry composite phases</caption>
+          <thead>
+            <tr className="border-b border-rule">
+              <th scope="col" className={TH}>
+                Phase
+              </th>
+              <th scope="col" className={THN}>
+                Weight fraction
+              </th>
+              <th scope="col" className={THN}>
+                Volume fraction
+              </th>
+              <th scope="col" className={THN}>
+                Dry density
+              </th>
+            </tr>
+          </thead>
+          <tbody>
+            {phases.map((p) => (
+              <tr key={p.materialId} className="border-b border-rule/60">
+                <td className={TD}>{p.label}</td>
+                <td className={TDN}>{fmtPercent(p.weightFraction, 2)}</td>
+                <td className={TDN}>{fmtPercent(p.volumeFraction, 2)}</td>
+                <td className={TDN}>{fmtDensity(p.density)}</td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
+      <div className="grid gap-4 @2xl:grid-cols-2">
+        <FigureRows
+          caption="Dry composite figures"
+          rows={[
+            { label: "Dry composite mass", value: fmtMass(c.massGrams, resolution) },
+            { label: "Theoretical density", note: "rule of mixtures", value: <span data-testid="theoretical-density">{fmtDensity(c.theoreticalDensity)}</span> },
+            { label: "Porosity", note: "from the bulk density", value: c.porosity === undefined ? "no bulk density given" : fmtPercent(c.porosity) },
+            { label: "Shrinkage, sol → dense solid", value: `${fmtPercent(c.denseShrinkage.volumetric)} vol · ${fmtPercent(c.denseShrinkage.linear)} linear` },
+            ...(c.dryGelShrinkage
+              ? [{ label: "Shrinkage, sol → dry gel", value: `${fmtPercent(c.dryGelShrinkage.volumetric)} vol · ${fmtPercent(c.dryGelShrinkage.linear)} linear` }]
+              : []),
+          ]}
+        />
+        <CompositionChart phases={phases} />
+      </div>
+      <p className="text-xs text-muted">
+        Ideal figures: complete hydrolysis and condensation, all solvent, water, alcohol and catalyst removed. Real gels keep OH groups, water and
+        some alkoxy groups.
+      </p>
+    </div>
+  );
+}

@@ -1,0 +1,64 @@
+import type { FormulationInput, FormulationResult } from "@/lib/formulation";
+import { fmtMass, fmtMol, fmtRatio, fmtVolume } from "@/lib/format";
+import { FigureRows, TD, TDN, TH, THN } from "./table";
+
+interface WaterPanelProps {
+  input: FormulationInput;
+  result: FormulationResult;
+  resolution: number;
+}
+
+/** Water accounting (target, carried, to add, effective ratios) and alcohol released. */
+export function WaterPanel({ input, result, resolution }: WaterPanelProps) {
+  const w = result.water;
+  const ratioWord = input.water.ratio === "R" ? "R (mol H₂O per mol network-forming atom)" : "h (mol H₂O per mol hydrolysable group)";
+  return (
+    <div className="@container"><div className="grid gap-4 @2xl:grid-cols-2">
+      <FigureRows
+        caption="Water accounting"
+        rows={[
+          { label: `Target water at ${input.water.ratio} = ${fmtRatio(input.water.value)}`, note: ratioWord, value: fmtMol(w.targetMol) },
+          { label: "Carried by other materials", note: "aqueous stocks, solutions, hydrates", value: fmtMol(w.carriedMol) },
+          { label: "Water to add", value: <span className="font-semibold">{`${fmtMol(w.addMol)} · ${fmtMass(w.addGrams, resolution)} · ${fmtVolume(w.addMl)}`}</span> },
+          { label: "Full hydrolysis needs", value: fmtMol(w.hydrolysisMol) },
+          { label: "Net for complete condensation", value: fmtMol(w.condensationMol) },
+          { label: "Effective R", value: fmtRatio(w.effectiveR) },
+          { label: "Effective h", value: fmtRatio(w.effectiveH) },
+        ]}
+      />
+      <div>
+        <h3 className="mb-1 text-xs font-semibold text-muted">Alcohol released on full hydrolysis</h3>
+        {result.alcohol.length === 0 ? (
+          <p className="text-sm text-muted">None.</p>
+        ) : (
+          <table className="w-full text-sm">
+            <caption className="sr-only">Alcohol released on full hydrolysis</caption>
+            <thead>
+              <tr className="border-b border-rule">
+                <th scope="col" className={TH}>
+                  Alcohol
+                </th>
+                <th scope="col" className={THN}>
+                  Amount
+                </th>
+                <th scope="col" className={THN}>
+                  Mass
+                </th>
+              </tr>
+            </thead>
+            <tbody>
+              {result.alcohol.map((a) => (
+                <tr key={a.name} className="border-b border-rule/60">
+                  <td className={TD}>{a.name}</td>
+                  <td className={TDN}>{fmtMol(a.mol)}</td>
+                  <td className={TDN}>{fmtMass(a.grams, resolution)}</td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        )}
+      </div>
+    </div>
+    </div>
+  );
+}

@@ -1,0 +1,85 @@
+"use client";
+
+import Link from "next/link";
+import useSWR from "swr";
+import { ResultsView } from "@/components/results/results-view";
+import { ErrorPanel } from "@/components/ui/error-panel";
+import { Panel } from "@/components/ui/panel";
+import { StateBadge, ThermalBadge } from "@/components/ui/status";
+import { fetcher } from "@/lib/fetcher";
+import { fmtDateTime } from "@/lib/format";
+import { DiffPanel } from "./diff-panel";
+import { RevisionActions } from "./revision-actions";
+import { ReviewPanel } from "./review-panel";
+import type { Abilities, RevisionDto } from "./types";
+
+interface RevisionViewProps {
+  initial: RevisionDto;
+  can: Abilities;
+}
+
+/** One revision: state, actions, review, changes since the previous revision, and every result. */
+export function RevisionView({ initial, can }: RevisionViewProps) {
+  const key = `/api/revisions/${initial.id}`;
+  const { data, error, mutate } = useSWR<RevisionDto>(key, fetcher, { fallbackData: initial });
+  const rev = data ?? initial;
+  const fails = rev.result?.thermal.status === "fail";
+  const thermalNotice = rev.result?.notices.find((n) => n.code === "thermal_limit_exceeded");
+
+  return (
+    <div className="flex flex-col gap-4">
+      <div className="flex flex-wrap items-start justify-between gap-3">
+        <div className="min-w-0">
+          <p className="text-sm text-muted">
+            <Link href={`/formulations/${rev.formulationId}`} className="text-accent underline underline-offset-2 decoration-rule hover:decoration-accent">
+              {rev.formulationName}
+            </Link>{" "}
+            · {rev.project ?? "No project"}
+          </p>
+          <h1 className="flex flex-wrap items-center gap-2 text-xl font-semibold">
+            Revision {rev.number} <StateBadge state={rev.state} />
+            {rev.result ? <ThermalBadge status={rev.result.thermal.status} detail=" (thermal)" /> : null}
+          </h1>
+          <p className="num text-xs text-muted">
+            by {rev.authorName ?? "unknown"} · created {fmtDateTime(rev.createdAt)} · last change {fmtDateTime(rev.updatedAt)} · engine {rev.engineVersion}
+          </p>
+        </div>
+        <RevisionActions revision={rev} can={can} onChanged={() => mutate()} />
+      </div>
+      {error ? <ErrorPanel title="Could not refresh this revision" message={error.message} onRetry={() => mutate()} /> : null}
+      {fails ? (
+        <div role="alert" className="rounded border border-fail/50 bg-fail-soft px-3 py-2 text-sm" data-testid="thermal-block">
+          <p className="font-semibold text-fail">Thermal check fails: this revision cannot be approved.</p>
+          <p className="mt-0.5">{thermalNotice?.message ?? "A process step reaches a material's hard temperature limit."}</p>
+          {rev.result?.thermal.maxAllowedC !== undefined ? (
+            <p className="mt-0.5">Bring every step below {rev.result.thermal.maxAllowedC} °C, or choose materials that tolerate the schedule.</p>
+          ) : null}
+        </div>
+      ) : null}
+      <ReviewPanel revision={rev} can={can} onChanged={() => mutate()} />
+      {rev.reviews.length > 0 ? (
+        <Panel title="Review comments" id="reviews">
+          <ul className="flex flex-col gap-2">
+            {rev.reviews.map((r) => (
+              <li key={r.id} className="text-sm">
+                <span className="font-medium">{r.reviewerName ?? "A reviewer"}</span>{" "}
+                {r.decision === "approved" ? "approved" : "sent it back"} · <span className="num text-xs text-muted">{fmtDateTime(r.createdAt)}</span>
+                {r.comment ? <p className="mt-0.5 rounded bg-paper px-2 py-1">{r.comment}</p> : null}
+              </li>
+            ))}
+          </ul>
+        </Panel>
+      ) : null}
+      {rev.number > 1 && can.readUnreleased ? (
+        <Panel title={`Changes since revision ${rev.number - 1}`} id="diff">
+          <DiffPanel formulationId={rev.formulationId} from={rev.number - 1} to={rev.number} />
+        </Panel>
+      ) : null}
+      {rev.result ? (
+        <ResultsView input={rev.input} result={rev.result} thermalFirst={rev.state === "in_review"} />
+      ) : (
+        <ErrorPanel title="The recipe cannot be computed" message={rev.computeError ?? "No result stored."} />
+      )}
+    </div>
+  );
+}

@@ -1,0 +1,43 @@
+"use client";
+
+import useSWR from "swr";
+import { ErrorPanel } from "@/components/ui/error-panel";
+import { TableSkeleton } from "@/components/ui/skeleton";
+import { ApiRequestError, fetcher } from "@/lib/fetcher";
+import { fmtDateTime } from "@/lib/format";
+
+interface Mail {
+  id: string;
+  receivedAt: string;
+  to: string[];
+  subject: string;
+  text: string;
+}
+
+/** Mail captured by the local fake mail server, for this team's members and invitees. */
+export function MailboxList() {
+  const { data, error, isLoading, mutate } = useSWR<{ rows: Mail[] }>("/api/mailbox", fetcher, { refreshInterval: 10_000 });
+  if (error instanceof ApiRequestError && error.status === 404) {
+    return <p className="text-sm text-muted">{error.message}</p>;
+  }
+  if (error) return <ErrorPanel message={error.message} onRetry={() => mutate()} />;
+  if (isLoading || !data) return <TableSkeleton rows={4} label="Loading captured mail" />;
+  if (data.rows.length === 0) return <p className="text-sm text-muted">No mail captured yet.</p>;
+  return (
+    <ul className="flex flex-col gap-2" data-testid="mailbox">
+      {data.rows.map((m) => (
+        <li key={m.id} className="rounded border border-rule bg-panel">
+          <details>
+            <summary className="flex cursor-pointer flex-wrap justify-between gap-2 px-3 py-2 text-sm">
+              <span>
+                <span className="font-medium">{m.subject}</span> <span className="text-muted">to {m.to.join(", ")}</span>
+              </span>
+              <span className="num text-xs text-muted">{fmtDateTime(m.receivedAt)}</span>
+            </summary>
+            <pre className="overflow-x-auto border-t border-rule px-3 py-2 font-mono text-xs whitespace-pre-wrap">{m.text}</pre>
+          </details>
+        </li>
+      ))}
+    </ul>
+  );
+}
