@@ -17,6 +17,8 @@ export FAKE_SMTP_PORT="${GELWRIGHT_TEST_SMTP_PORT:-2526}"
 export SMTP_URL="smtp://127.0.0.1:$FAKE_SMTP_PORT"
 export MAILBOX_DIR="$ROOT/.data/mailbox-test"
 export TEST_APP_PORT="${GELWRIGHT_TEST_APP_PORT:-3100}"
+# A second instance of the same build on the same database, for the scale-out test.
+export TEST_APP_PORT2="$((TEST_APP_PORT + 1))"
 export BETTER_AUTH_URL="http://localhost:$TEST_APP_PORT"
 export BETTER_AUTH_SECRET="gelwright-test-secret-not-for-production-0001"
 export CHROMIUM_PATH="${CHROMIUM_PATH:-/usr/bin/chromium}"
@@ -51,6 +53,7 @@ vitest_run() {
 
 cleanup() {
   [ -n "${APP_PID:-}" ] && { kill -- "-$APP_PID" 2>/dev/null; wait "$APP_PID" 2>/dev/null; APP_PID=""; }
+  [ -n "${APP2_PID:-}" ] && { kill -- "-$APP2_PID" 2>/dev/null; wait "$APP2_PID" 2>/dev/null; APP2_PID=""; }
   stop_pidfile "$ROOT/.data/test-fake-smtp.pid"
   bash scripts/db.sh stop >/dev/null 2>&1
 }
@@ -74,13 +77,15 @@ log "── build"
 if npx next build >"$OUT/build.log" 2>&1; then
   passed=$((passed + 1))
   tail -25 "$OUT/build.log"
-  if (echo >"/dev/tcp/127.0.0.1/$TEST_APP_PORT") 2>/dev/null; then
-    log "Port $TEST_APP_PORT is already in use; stop what runs there (or set GELWRIGHT_TEST_APP_PORT)."
+  if (echo >"/dev/tcp/127.0.0.1/$TEST_APP_PORT") 2>/dev/null || (echo >"/dev/tcp/127.0.0.1/$TEST_APP_PORT2") 2>/dev/null; then
+    log "Port $TEST_APP_PORT or $TEST_APP_PORT2 is already in use; stop what runs there (or set GELWRIGHT_TEST_APP_PORT)."
     failed=$((failed + 1)); failures+=("port $TEST_APP_PORT busy")
   else
     GELWRIGHT_SIGNIN_RATE_LIMIT=5 setsid npx next start -H localhost -p "$TEST_APP_PORT" >"$OUT/app.log" 2>&1 &
     APP_PID=$!
-    if wait_http "http://localhost:$TEST_APP_PORT/api/health" 60; then
+    GELWRIGHT_SIGNIN_RATE_LIMIT=5 setsid npx next start -H localhost -p "$TEST_APP_PORT2" >"$OUT/app2.log" 2>&1 &
+    APP2_PID=$!
+    if wait_http "http://localhost:$TEST_APP_PORT/api/health" 60 && wait_http "http://localhost:$TEST_APP_PORT2/api/health" 60; then
       vitest_run "http-and-browser" vitest.e2e.config.ts
     else
       failed=$((failed + 1)); failures+=("app did not start (see .tmp/test/app.log)")
