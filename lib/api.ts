@@ -56,11 +56,26 @@ function isFieldError(err: unknown): err is FieldError {
   );
 }
 
-function isDbUnavailable(err: unknown): boolean {
-  const codes = new Set(["ECONNREFUSED", "PROTOCOL_CONNECTION_LOST", "ETIMEDOUT", "ECONNRESET", "ER_CON_COUNT_ERROR", "EPIPE"]);
-  for (let e: unknown = err, i = 0; e && i < 5; i++) {
-    const code = (e as { code?: unknown }).code;
-    if (typeof code === "string" && codes.has(code)) return true;
+const DB_DOWN_CODES = new Set([
+  "ECONNREFUSED",
+  "ECONNRESET",
+  "ETIMEDOUT",
+  "EPIPE",
+  "PROTOCOL_CONNECTION_LOST",
+  "PROTOCOL_ENQUEUE_AFTER_FATAL_ERROR",
+  "PROTOCOL_SEQUENCE_TIMEOUT",
+  "ER_CON_COUNT_ERROR",
+  "ER_SERVER_SHUTDOWN",
+  "ER_CONNECTION_KILLED",
+]);
+
+/** True when the error (or one of its causes) says MariaDB is unreachable or went away. */
+export function isDbUnavailable(err: unknown): boolean {
+  for (let e: unknown = err, i = 0; e && i < 6; i++) {
+    const { code, fatal, message } = e as { code?: unknown; fatal?: unknown; message?: unknown };
+    if (typeof code === "string" && DB_DOWN_CODES.has(code)) return true;
+    if (fatal === true) return true;
+    if (typeof message === "string" && /connection is in closed state|connection lost|server has gone away/i.test(message)) return true;
     e = (e as { cause?: unknown }).cause;
   }
   return false;

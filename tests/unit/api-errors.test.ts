@@ -1,0 +1,48 @@
+import { describe, expect, it } from "vitest";
+import { z } from "zod";
+import { ApiError, errorResponse, isDbUnavailable } from "@/lib/api";
+import { computeFormulation } from "@/lib/formulation";
+
+// The error shape and status codes are the product's own API contract (DEVELOPERS.md); no external source.
+describe("errorResponse", () => {
+  it("returns 422 with every field of a zod error, keyed by dotted path", async () => {
+    const schema = z.object({ a: z.object({ b: z.number() }), c: z.string() });
+    const res = errorResponse(schema.safeParse({ a: { b: "x" }, c: 1 }).error);
+    expect(res.status).toBe(422);
+    const body = (await res.json()) as { error: { fields: Record<string, string> } };
+    expect(Object.keys(body.error.fields).sort()).toEqual(["a.b", "c"]);
+  });
+
+  it("returns 422 naming the field of an engine error", async () => {
+    let thrown: unknown;
+    try {
+      computeFormulation({} as never);
+    } catch (err) {
+      thrown = err;
+    }
+    const res = errorResponse(thrown);
+    expect(res.status).toBe(422);
+    const body = (await res.json()) as { error: { code: string; fields: Record<string, string> } };
+    expect(Object.keys(body.error.fields).length).toBeGreaterThan(0);
+  });
+
+  it("keeps ApiError statuses and hides unknown errors behind a generic 500", async () => {
+    expect(errorResponse(new ApiError(409, "conflict", "stale")).status).toBe(409);
+    const hidden = errorResponse(new Error("secret detail at /srv/app.js:1"));
+    expect(hidden.status).toBe(500);
+    expect(JSON.stringify(await hidden.json())).not.toContain("secret detail");
+  });
+
+  describe("edge cases", () => {
+    it("answers 503 when MariaDB is unreachable or the connection closed mid-transaction", () => {
+      const refused = Object.assign(new Error("connect ECONNREFUSED 127.0.0.1:3307"), { code: "ECONNREFUSED" });
+      const closed = new Error("Failed query: rollback", { cause: new Error("Can't add new command when connection is in closed state") });
+      const fatal = Object.assign(new Error("Connection lost: The server closed the connection."), { fatal: true });
+      for (const err of [refused, closed, fatal]) {
+        expect(isDbUnavailable(err)).toBe(true);
+        expect(errorResponse(err).status).toBe(503);
+      }
+      expect(isDbUnavailable(new Error("Duplicate entry"))).toBe(false);
+    });
+  });
+});
