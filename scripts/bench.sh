@@ -13,11 +13,14 @@ ensure_node_modules
 cleanup() {
   [ -n "${APP_PID:-}" ] && kill -- "-$APP_PID" 2>/dev/null
   stop_pidfile "$ROOT/.data/bench-fake-smtp.pid"
+  stop_pidfile "$ROOT/.data/bench-fake-s3.pid"
   bash scripts/db.sh stop >/dev/null 2>&1
 }
 trap cleanup EXIT
 bash scripts/db.sh start
 start_fake_smtp "$FAKE_SMTP_PORT" "$MAILBOX_DIR" "$ROOT/.data/bench-fake-smtp.pid"
+export FAKE_S3_PORT=4580 S3_ENDPOINT="http://127.0.0.1:4580"
+start_fake_s3 "$FAKE_S3_PORT" "$ROOT/.data/s3-bench" "$ROOT/.data/bench-fake-s3.pid"
 npx tsx db/migrate.ts && npx tsx db/seed.ts && npx tsx scripts/bench-data.ts 10000
 echo; npx tsx scripts/bench-engine.ts
 npx next build >"$ROOT/.data/bench-build.log"

@@ -8,7 +8,8 @@ export MAILBOX_DIR="${MAILBOX_DIR:-$ROOT/.data/mailbox}"
 ensure_node_modules
 bash scripts/db.sh start
 start_fake_smtp "${FAKE_SMTP_PORT:-2525}" "$MAILBOX_DIR" .data/fake-smtp.pid
+start_fake_s3 "${FAKE_S3_PORT:-4569}" "$ROOT/.data/s3" .data/fake-s3.pid
 npx tsx db/migrate.ts
 npx tsx db/seed.ts
-trap 'stop_pidfile .data/fake-smtp.pid; bash scripts/db.sh stop' INT TERM EXIT
+trap 'stop_pidfile .data/fake-smtp.pid; stop_pidfile .data/fake-s3.pid; bash scripts/db.sh stop' INT TERM EXIT
 npx next dev -H localhost -p "${PORT:-3000}"

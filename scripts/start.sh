@@ -27,12 +27,17 @@ cleanup() {
   log "Stopping"
   [ -n "${APP_PID:-}" ] && { kill -- "-$APP_PID" 2>/dev/null; wait "$APP_PID" 2>/dev/null; }
   stop_pidfile .data/fake-smtp.pid
+  stop_pidfile .data/fake-s3.pid
   bash scripts/db.sh stop
 }
 trap cleanup INT TERM EXIT
 
 bash scripts/db.sh start
 [ -z "${SMTP_URL:-}" ] && start_fake_smtp "${FAKE_SMTP_PORT:-2525}" "$MAILBOX_DIR" .data/fake-smtp.pid
+if [ -z "${S3_ENDPOINT+x}" ]; then
+  start_fake_s3 "${FAKE_S3_PORT:-4569}" "$ROOT/.data/s3" .data/fake-s3.pid
+  export S3_ENDPOINT="http://127.0.0.1:${FAKE_S3_PORT:-4569}"
+fi
 
 npx tsx db/migrate.ts
 npx tsx db/seed.ts

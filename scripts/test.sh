@@ -9,13 +9,15 @@ cd "$ROOT"
 set +e
 
 # The tests' own instance, apart from the demo data (never DATABASE_URL).
-unset DATABASE_URL SMTP_URL
+unset DATABASE_URL SMTP_URL S3_ENDPOINT
 export GELWRIGHT_DB_DIR="$ROOT/.data/mariadb-test"
 export GELWRIGHT_DB_PORT="${GELWRIGHT_TEST_DB_PORT:-3317}"
 export GELWRIGHT_DB_NAME="gelwright_test"
 export FAKE_SMTP_PORT="${GELWRIGHT_TEST_SMTP_PORT:-2526}"
 export SMTP_URL="smtp://127.0.0.1:$FAKE_SMTP_PORT"
 export MAILBOX_DIR="$ROOT/.data/mailbox-test"
+export FAKE_S3_PORT="${GELWRIGHT_TEST_S3_PORT:-4570}"
+export S3_ENDPOINT="http://127.0.0.1:$FAKE_S3_PORT" S3_BUCKET=gelwright S3_ACCESS_KEY_ID=S3RVER S3_SECRET_ACCESS_KEY=S3RVER S3_REGION=us-east-1 S3_FORCE_PATH_STYLE=true
 export TEST_APP_PORT="${GELWRIGHT_TEST_APP_PORT:-3100}"
 # A second instance of the same build on the same database, for the scale-out test.
 export TEST_APP_PORT2="$((TEST_APP_PORT + 1))"
@@ -23,7 +25,7 @@ export BETTER_AUTH_URL="http://localhost:$TEST_APP_PORT"
 export BETTER_AUTH_SECRET="gelwright-test-secret-not-for-production-0001"
 export CHROMIUM_PATH="${CHROMIUM_PATH:-/usr/bin/chromium}"
 OUT="$ROOT/.tmp/test"
-rm -rf "$OUT" "$MAILBOX_DIR"
+rm -rf "$OUT" "$MAILBOX_DIR" "$ROOT/.data/s3-test"
 mkdir -p "$OUT" "$MAILBOX_DIR"
 
 passed=0
@@ -55,6 +57,7 @@ cleanup() {
   [ -n "${APP_PID:-}" ] && { kill -- "-$APP_PID" 2>/dev/null; wait "$APP_PID" 2>/dev/null; APP_PID=""; }
   [ -n "${APP2_PID:-}" ] && { kill -- "-$APP2_PID" 2>/dev/null; wait "$APP2_PID" 2>/dev/null; APP2_PID=""; }
   stop_pidfile "$ROOT/.data/test-fake-smtp.pid"
+  stop_pidfile "$ROOT/.data/test-fake-s3.pid"
   bash scripts/db.sh stop >/dev/null 2>&1
 }
 trap cleanup EXIT
@@ -65,6 +68,7 @@ ensure_node_modules
 bash scripts/db.sh start
 set +e
 start_fake_smtp "$FAKE_SMTP_PORT" "$MAILBOX_DIR" "$ROOT/.data/test-fake-smtp.pid"
+start_fake_s3 "$FAKE_S3_PORT" "$ROOT/.data/s3-test" "$ROOT/.data/test-fake-s3.pid"
 bash scripts/db.sh drop "$GELWRIGHT_DB_NAME" && bash scripts/db.sh create "$GELWRIGHT_DB_NAME"
 check "migrate the test database" npx tsx db/migrate.ts
 check "seed the test database" npx tsx db/seed.ts

@@ -1,4 +1,4 @@
-import { bigint, index, json, mysqlEnum, mysqlTable, text, timestamp, varchar } from "drizzle-orm/mysql-core";
+import { bigint, double, index, json, mysqlEnum, mysqlTable, text, timestamp, varchar } from "drizzle-orm/mysql-core";
 import { organization, user } from "./auth";
 import { createdAt, teamRef, updatedAt, userRef, uuidPk } from "./columns";
 import { revisions } from "./formulations";
@@ -24,6 +24,34 @@ export const auditEvents = mysqlTable(
 
 export const BATCH_STATES = ["open", "closed"] as const;
 
+/** One line of a batch record: target from the released revision, actual values from production. */
+export interface BatchLine {
+  materialId: string;
+  /** Material name at the time the batch started. */
+  name?: string;
+  role?: "precursor" | "organic" | "solvent" | "water" | "catalyst";
+  /** g as supplied, from the revision's recipe. */
+  targetGrams?: number;
+  /** mL as supplied, from the revision's recipe. */
+  targetMl?: number;
+  actualGrams: number | null;
+  lotNumber: string | null;
+  /** ISO time the line was entered. */
+  at?: string;
+  initials?: string;
+}
+
+/** A team's batch settings; when absent, the defaults in lib/spreadsheet/batch-record.ts apply. */
+export const batchSettings = mysqlTable("batch_settings", {
+  teamId: varchar("team_id", { length: 36 })
+    .primaryKey()
+    .references(() => organization.id, { onDelete: "cascade" }),
+  toleranceFraction: double("tolerance_fraction").notNull(),
+  balanceResolutionGrams: double("balance_resolution_grams").notNull(),
+  updatedBy: userRef("updated_by").references(() => user.id, { onDelete: "set null" }),
+  updatedAt: updatedAt(),
+});
+
 /** One batch made in production from a released revision. */
 export const batchRecords = mysqlTable(
   "batch_records",
@@ -34,12 +62,15 @@ export const batchRecords = mysqlTable(
       .notNull()
       .references(() => revisions.id, { onDelete: "restrict" }),
     state: mysqlEnum("state", BATCH_STATES).notNull().default("open"),
-    /** Per line: material id, actual mass (g), lot number, time, initials. */
-    lines: json("lines")
-      .$type<{ materialId: string; actualGrams: number | null; lotNumber: string | null; at?: string; initials?: string }[]>()
-      .notNull(),
+    /** Per line: the target copied from the revision at start, then actual mass (g), lot number, time, initials. */
+    lines: json("lines").$type<BatchLine[]>().notNull(),
     notes: text("notes"),
+    /** Relative tolerance on each line's mass (0.01 = ±1 %), fixed when the batch starts. */
+    toleranceFraction: double("tolerance_fraction").notNull().default(0.01),
+    /** Readability of the balance (g); a line's tolerance is never below it. */
+    balanceResolutionGrams: double("balance_resolution_grams").notNull().default(0.01),
     startedBy: userRef("started_by").references(() => user.id, { onDelete: "set null" }),
+    closedBy: userRef("closed_by").references(() => user.id, { onDelete: "set null" }),
     closedAt: timestamp("closed_at", { fsp: 3 }),
     createdAt: createdAt(),
     updatedAt: updatedAt(),
@@ -55,6 +86,8 @@ export const attachments = mysqlTable(
     teamId: teamRef().references(() => organization.id, { onDelete: "cascade" }),
     ownerType: varchar("owner_type", { length: 32 }).notNull(),
     ownerId: varchar("owner_id", { length: 36 }).notNull(),
+    /** "sds" (safety data sheet), "coa" (certificate of analysis) or "other". */
+    kind: varchar("kind", { length: 16 }).notNull().default("other"),
     fileName: varchar("file_name", { length: 255 }).notNull(),
     contentType: varchar("content_type", { length: 100 }).notNull(),
     sizeBytes: bigint("size_bytes", { mode: "number" }).notNull(),
@@ -65,7 +98,35 @@ export const attachments = mysqlTable(
   (t) => [index("attachments_owner_idx").on(t.teamId, t.ownerType, t.ownerId)],
 );
 
+export const IMPORT_KINDS = ["formulation", "materials"] as const;
+export const IMPORT_STATES = ["ready", "confirmed"] as const;
+
+/**
+ * An import between upload and confirmation: the parsed preview, kept on the
+ * server (so any app instance can confirm it) until it expires.
+ */
+export const importPreviews = mysqlTable(
+  "import_previews",
+  {
+    id: uuidPk(),
+    teamId: teamRef().references(() => organization.id, { onDelete: "cascade" }),
+    userId: userRef("user_id").references(() => user.id, { onDelete: "cascade" }),
+    kind: mysqlEnum("kind", IMPORT_KINDS).notNull(),
+    fileName: varchar("file_name", { length: 255 }).notNull(),
+    state: mysqlEnum("state", IMPORT_STATES).notNull().default("ready"),
+    preview: json("preview").$type<Record<string, unknown>>().notNull(),
+    /** What the confirmation saved (formulation and revision ids, material ids). */
+    outcome: json("outcome").$type<Record<string, unknown>>(),
+    expiresAt: timestamp("expires_at", { fsp: 3 }).notNull(),
+    confirmedAt: timestamp("confirmed_at", { fsp: 3 }),
+    createdAt: createdAt(),
+  },
+  (t) => [index("import_previews_team_idx").on(t.teamId, t.createdAt)],
+);
+
 export type AuditEventRow = typeof auditEvents.$inferSelect;
 export type NewAuditEventRow = typeof auditEvents.$inferInsert;
 export type BatchRecordRow = typeof batchRecords.$inferSelect;
 export type AttachmentRow = typeof attachments.$inferSelect;
+export type ImportPreviewRow = typeof importPreviews.$inferSelect;
+export type BatchSettingsRow = typeof batchSettings.$inferSelect;

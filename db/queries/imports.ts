@@ -1,0 +1,210 @@
+import { and, eq, lt } from "drizzle-orm";
+import { db } from "@/db";
+import { formulations, importPreviews, materials, revisions, type ImportPreviewRow } from "@/db/schema";
+import { ApiError, conflict, notFound } from "@/lib/api";
+import { ENGINE_VERSION, type Material } from "@/lib/formulation";
+import type { FormulationPreview } from "@/lib/spreadsheet/import-formulation";
+import type { LibraryEntry, MaterialsPreview } from "@/lib/spreadsheet/import-materials";
+import type { ImportKind } from "@/lib/spreadsheet/types";
+import { recordEvent } from "./audit";
+import { evaluate } from "./formulations";
+
+export interface Actor {
+  userId: string;
+  teamId: string;
+}
+
+/** How long a preview waits for confirmation. */
+export const PREVIEW_TTL_MS = 60 * 60 * 1000;
+
+export type ImportPreview = FormulationPreview | MaterialsPreview;
+
+/** The team's library as the import compares against it. */
+export async function loadLibrary(teamId: string): Promise<LibraryEntry[]> {
+  const rows = await db.select().from(materials).where(eq(materials.teamId, teamId));
+  return rows.map((row) => {
+    const material: Material = { ...row.data, id: row.id, name: row.name, kind: row.kind };
+    if (row.casNumber) material.casNumber = row.casNumber;
+    return { id: row.id, name: row.name, casNumber: row.casNumber, material };
+  });
+}
+
+/** Formulation names in use in the team, lower case. */
+export async function takenFormulationNames(teamId: string): Promise<Set<string>> {
+  const rows = await db.select({ name: formulations.name }).from(formulations).where(eq(formulations.teamId, teamId));
+  return new Set(rows.map((r) => r.name.toLowerCase()));
+}
+
+function view(row: ImportPreviewRow) {
+  return {
+    id: row.id,
+    fileName: row.fileName,
+    state: row.state,
+    expiresAt: row.expiresAt,
+    createdAt: row.createdAt,
+    outcome: row.outcome ?? null,
+    ...(row.preview as unknown as ImportPreview),
+  };
+}
+
+/** Keeps a preview on the server until it is confirmed or expires; old ones are removed on the way. */
+export async function createImportPreview(actor: Actor, kind: ImportKind, fileName: string, preview: ImportPreview) {
+  const id = crypto.randomUUID();
+  const now = Date.now();
+  await db.delete(importPreviews).where(lt(importPreviews.expiresAt, new Date(now - PREVIEW_TTL_MS)));
+  await db.insert(importPreviews).values({
+    id,
+    teamId: actor.teamId,
+    userId: actor.userId,
+    kind,
+    fileName: fileName.slice(0, 255),
+    preview: preview as unknown as Record<string, unknown>,
+    expiresAt: new Date(now + PREVIEW_TTL_MS),
+  });
+  return (await getImportPreview(actor, id))!;
+}
+
+/** A preview of this user in this team, or null. */
+export async function getImportPreview(actor: Actor, id: string) {
+  const [row] = await db
+    .select()
+    .from(importPreviews)
+    .where(and(eq(importPreviews.teamId, actor.teamId), eq(importPreviews.userId, actor.userId), eq(importPreviews.id, id)))
+    .limit(1);
+  return row ? view(row) : null;
+}
+
+export async function discardImportPreview(actor: Actor, id: string): Promise<boolean> {
+  const res = await db
+    .delete(importPreviews)
+    .where(and(eq(importPreviews.teamId, actor.teamId), eq(importPreviews.userId, actor.userId), eq(importPreviews.id, id), eq(importPreviews.state, "ready")));
+  return res[0].affectedRows === 1;
+}
+
+function problemFields(preview: ImportPreview, level: "error" | "warning"): Record<string, string> {
+  const fields: Record<string, string> = {};
+  for (const p of preview.problems.filter((x) => x.level === level)) {
+    const key = `${p.sheet}${p.row !== null ? ` row ${p.row}` : ""}${p.column ? `, ${p.column}` : ""}`;
+    fields[key] ??= p.message;
+  }
+  return fields;
+}
+
+/**
+ * Saves a confirmed import in one transaction: the materials to create, and
+ * for a formulation its first draft revision. Nothing is saved while any
+ * error remains (422), nor while warnings are not accepted (422).
+ */
+export async function confirmImport(actor: Actor, id: string, opts: { acceptWarnings: boolean }) {
+  return db.transaction(async (tx) => {
+    const [row] = await tx
+      .select()
+      .from(importPreviews)
+      .where(and(eq(importPreviews.teamId, actor.teamId), eq(importPreviews.userId, actor.userId), eq(importPreviews.id, id)))
+      .for("update")
+      .limit(1);
+    if (!row) throw notFound("import");
+    if (row.state === "confirmed") throw conflict("This import was already saved.");
+    if (row.expiresAt.getTime() < Date.now()) throw new ApiError(410, "expired", "This preview has expired; upload the file again.");
+    const preview = row.preview as unknown as ImportPreview;
+    const errors = preview.problems.filter((p) => p.level === "error");
+    if (errors.length > 0) {
+      throw new ApiError(
+        422,
+        "import_has_errors",
+        `Nothing was saved: the file still has ${errors.length} error${errors.length === 1 ? "" : "s"}. Fix ${errors.length === 1 ? "it" : "them"} and upload the file again.`,
+        problemFields(preview, "error"),
+      );
+    }
+    const warnings = preview.problems.filter((p) => p.level === "warning");
+    if (warnings.length > 0 && !opts.acceptWarnings) {
+      throw new ApiError(
+        422,
+        "warnings_not_accepted",
+        `The file has ${warnings.length} warning${warnings.length === 1 ? "" : "s"}; accept ${warnings.length === 1 ? "it" : "them"} to save.`,
+        problemFields(preview, "warning"),
+      );
+    }
+
+    const toCreate = preview.materials.filter((m) => m.action === "create");
+    if (toCreate.length > 0) {
+      const existing = await tx.select({ name: materials.name }).from(materials).where(eq(materials.teamId, actor.teamId));
+      const names = new Set(existing.map((e) => e.name.toLowerCase()));
+      const clash = toCreate.find((m) => names.has(m.name.toLowerCase()));
+      if (clash) throw conflict(`“${clash.name}” was added to the library after this preview was made. Upload the file again to link to it.`);
+      for (let i = 0; i < toCreate.length; i += 200) {
+        await tx.insert(materials).values(
+          toCreate.slice(i, i + 200).map((m) => ({
+            id: m.id,
+            teamId: actor.teamId,
+            name: m.material.name,
+            kind: m.material.kind,
+            casNumber: m.material.casNumber ?? null,
+            data: { ...m.material, id: m.id },
+            createdBy: actor.userId,
+          })),
+        );
+      }
+      for (const m of toCreate) {
+        await recordEvent(tx, {
+          teamId: actor.teamId,
+          actorId: actor.userId,
+          action: "material.created",
+          entityType: "material",
+          entityId: m.id,
+          summary: { after: { name: m.name, kind: m.kind }, note: `imported from ${row.fileName}` },
+        });
+      }
+    }
+
+    const outcome: Record<string, unknown> = {
+      createdMaterials: toCreate.map((m) => ({ id: m.id, name: m.name })),
+      linkedMaterials: preview.materials.filter((m) => m.action === "link").map((m) => ({ id: m.id, name: m.name })),
+    };
+
+    if (preview.kind === "formulation") {
+      const { input, formulation } = preview;
+      if (!input || !formulation.name) throw new ApiError(422, "import_has_errors", "Nothing was saved: the file has no complete formulation.");
+      const [dup] = await tx
+        .select({ id: formulations.id })
+        .from(formulations)
+        .where(and(eq(formulations.teamId, actor.teamId), eq(formulations.name, formulation.name)))
+        .limit(1);
+      if (dup) throw conflict(`A formulation named “${formulation.name}” was created after this preview was made. Rename it in the file and upload it again.`);
+      const { result, computeError } = evaluate(input);
+      const formulationId = crypto.randomUUID();
+      const revisionId = crypto.randomUUID();
+      await tx.insert(formulations).values({
+        id: formulationId,
+        teamId: actor.teamId,
+        name: formulation.name,
+        project: formulation.project,
+        description: formulation.description,
+        createdBy: actor.userId,
+      });
+      await tx.insert(revisions).values({
+        id: revisionId,
+        teamId: actor.teamId,
+        formulationId,
+        number: 1,
+        input,
+        result,
+        computeError,
+        engineVersion: ENGINE_VERSION,
+        authorId: actor.userId,
+      });
+      await recordEvent(tx, {
+        teamId: actor.teamId,
+        actorId: actor.userId,
+        action: "formulation.created",
+        entityType: "formulation",
+        entityId: formulationId,
+        summary: { after: { name: formulation.name, revision: 1, state: "draft" }, note: `imported from ${row.fileName}` },
+      });
+      outcome.formulationId = formulationId;
+      outcome.revisionId = revisionId;
+    }
+    await tx.update(importPreviews).set({ state: "confirmed", confirmedAt: new Date(), outcome }).where(eq(importPreviews.id, id));
+    return { id, kind: preview.kind, state: "confirmed" as const, outcome };
+  });
+}

@@ -1,0 +1,104 @@
+/**
+ * Writing workbooks and CSV files. Every text cell is neutralised against
+ * formula injection (see neutralise.ts); numbers stay numeric cells; header
+ * rows are frozen and columns get widths that fit their headers.
+ */
+import * as XLSX from "xlsx";
+import { neutraliseText } from "./neutralise";
+import type { Cell } from "./types";
+
+/** A sheet to write: `header` rows are frozen at the top; `widths` in characters. */
+export interface SheetSpec {
+  name: string;
+  header: Cell[][];
+  rows: Cell[][];
+  widths?: number[];
+}
+
+function safeCell(value: Cell | undefined): Cell {
+  if (typeof value === "string") return neutraliseText(value);
+  if (typeof value === "number" && !Number.isFinite(value)) return null;
+  return value ?? null;
+}
+
+/** Every cell of a table, neutralised. */
+export function safeRows(rows: readonly (readonly (Cell | undefined)[])[]): Cell[][] {
+  return rows.map((row) => row.map(safeCell));
+}
+
+function autoWidths(spec: SheetSpec): number[] {
+  const widths: number[] = [];
+  for (const row of [...spec.header, ...spec.rows.slice(0, 200)]) {
+    row.forEach((cell, index) => {
+      const length = cell === null || cell === undefined ? 0 : String(cell).length;
+      widths[index] = Math.min(Math.max(widths[index] ?? 8, length + 2), 60);
+    });
+  }
+  return widths;
+}
+
+/**
+ * Builds an .xlsx file from sheet specs. Header rows are frozen (the
+ * community build of `xlsx` cannot write panes, so the sheet XML gets a
+ * frozen pane added after writing).
+ *
+ * @example
+ * ```ts
+ * const bytes = buildWorkbook([{ name: "Batch sheet", header: [["Material", "Target mass (g)"]], rows: [["TEOS", 34.67]] }]);
+ * ```
+ */
+export function buildWorkbook(sheets: readonly SheetSpec[]): Buffer {
+  const wb = XLSX.utils.book_new();
+  for (const spec of sheets) {
+    const ws = XLSX.utils.aoa_to_sheet(safeRows([...spec.header, ...spec.rows]));
+    const widths = spec.widths ?? autoWidths(spec);
+    ws["!cols"] = widths.map((wch) => ({ wch }));
+    XLSX.utils.book_append_sheet(wb, ws, spec.name);
+  }
+  const plain = XLSX.write(wb, { type: "buffer", bookType: "xlsx", bookSST: true, compression: true }) as Buffer;
+  return freezeHeaders(plain, sheets.map((s) => s.header.length));
+}
+
+/** Adds a frozen pane below the header rows of each sheet (sheetN.xml in workbook order). */
+function freezeHeaders(file: Buffer, headerRows: number[]): Buffer {
+  const CFB = XLSX.CFB;
+  const zip = CFB.read(file, { type: "buffer" });
+  headerRows.forEach((rows, index) => {
+    if (rows < 1) return;
+    const entry = CFB.find(zip, `/xl/worksheets/sheet${index + 1}.xml`);
+    if (!entry?.content) return;
+    const xml = Buffer.from(entry.content as Uint8Array).toString("utf8");
+    const pane = `<sheetView workbookViewId="0"><pane ySplit="${rows}" topLeftCell="A${rows + 1}" activePane="bottomLeft" state="frozen"/><selection pane="bottomLeft" activeCell="A${rows + 1}" sqref="A${rows + 1}"/></sheetView>`;
+    const next = xml.replace(/<sheetView workbookViewId="0"\s*\/>/, pane);
+    const bytes = Buffer.from(next, "utf8");
+    entry.content = bytes;
+    entry.size = bytes.length;
+  });
+  return CFB.write(zip, { fileType: "zip", type: "buffer", compression: true }) as Buffer;
+}
+
+function csvField(value: Cell): string {
+  if (value === null) return "";
+  const text = typeof value === "string" ? value : String(value);
+  return /[",\r\n]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
+}
+
+/**
+ * A CSV file (RFC 4180, CRLF line ends, UTF-8 with a byte-order mark so
+ * spreadsheet programs read the units' symbols right). Every text cell is
+ * neutralised; numbers are written in full precision with a point.
+ * Further tables follow after a blank line and a "[Sheet name]" line.
+ *
+ * @example
+ * ```ts
+ * toCsv([{ name: "Batch sheet", rows: [["Material", "Target mass (g)"], ["TEOS", 34.67]] }]);
+ * ```
+ */
+export function toCsv(tables: readonly { name: string; rows: readonly (readonly (Cell | undefined)[])[] }[]): string {
+  const lines: string[] = [];
+  tables.forEach((table, index) => {
+    if (index > 0) lines.push("", csvField(`[${table.name}]`));
+    for (const row of safeRows(table.rows)) lines.push(row.map(csvField).join(","));
+  });
+  return `\uFEFF${lines.join("\r\n")}\r\n`;
+}
