@@ -10,8 +10,12 @@ import { demo, signIn } from "./http";
 async function revisionIds(): Promise<{ inReview: string; released: string; material: string }> {
   const api = await signIn(demo.formulator);
   const first = async (q: string) => {
-    const list = (await (await api.fetch(`/api/formulations?q=${encodeURIComponent(q)}`)).json()) as { rows: { id: string }[] };
-    return (await (await api.fetch(`/api/formulations/${list.rows[0]!.id}`)).json()) as { revisions: { id: string; state: string }[] };
+    const list = (await (await api.fetch(`/api/formulations?q=${encodeURIComponent(q)}&pageSize=100`)).json()) as {
+      rows: { id: string; name: string }[];
+    };
+    // The search matches copies too (imports keep the name in theirs): take the exact one.
+    const exact = list.rows.find((r) => r.name === q)!;
+    return (await (await api.fetch(`/api/formulations/${exact.id}`)).json()) as { revisions: { id: string; state: string }[] };
   };
   const hc4 = await first("Visor hard coat HC-4");
   const hc3 = await first("Visor hard coat HC-3");

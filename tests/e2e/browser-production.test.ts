@@ -16,12 +16,15 @@ interface Ids {
 async function demoIds(): Promise<Ids> {
   const api = await signIn(demo.formulator);
   const find = async (q: string) => {
-    const list = (await (await api.fetch(`/api/formulations?q=${encodeURIComponent(q)}`)).json()) as { rows: { id: string }[] };
-    const id = list.rows[0]!.id;
+    const list = (await (await api.fetch(`/api/formulations?q=${encodeURIComponent(q)}&pageSize=100`)).json()) as {
+      rows: { id: string; name: string }[];
+    };
+    // Exact name: the search also matches copies made by imports.
+    const id = list.rows.find((r) => r.name === q)!.id;
     const f = (await (await api.fetch(`/api/formulations/${id}`)).json()) as { revisions: { id: string; state: string }[] };
     return { id, revisions: f.revisions };
   };
-  const hc5 = await find("HC-5 fast cure");
+  const hc5 = await find("Visor hard coat HC-5 fast cure");
   const hc4 = await find("Visor hard coat HC-4");
   return {
     draftFormulation: hc5.id,
