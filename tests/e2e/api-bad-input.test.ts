@@ -16,7 +16,7 @@ interface BadCase {
   client: () => Client;
   method: string;
   path: () => string;
-  body: string;
+  body: string | (() => FormData);
   /** Dotted path the error should name (its first two segments are checked). */
   field?: string;
 }
@@ -64,7 +64,8 @@ function mutations(
   return out.filter((m) => !accepts(m.body));
 }
 
-let formulator: Client, admin: Client;
+let formulator: Client, admin: Client, production: Client;
+let batchId = "";
 let draftId = "";
 let materialId = "";
 let memberId = "";
@@ -78,12 +79,16 @@ async function snapshot() {
   const d = await (await admin.fetch(`/api/revisions/${draftId}`)).json();
   const mem = await (await admin.fetch("/api/members")).json();
   const a = (await (await admin.fetch("/api/audit?pageSize=1")).json()) as { total: number };
-  return { f, m, d, mem, audit: a.total };
+  const batches = await (await admin.fetch("/api/batches")).json();
+  const batch = await (await admin.fetch(`/api/batches/${batchId}`)).json();
+  const attachments = await (await admin.fetch(`/api/attachments?ownerType=material&ownerId=${materialId}`)).json();
+  return { f, m, d, mem, audit: a.total, batches, batch, attachments };
 }
 
 beforeAll(async () => {
   formulator = await signIn(demo.formulator);
   admin = await signIn(demo.admin);
+  production = await signIn(demo.production);
   const lib = await library(formulator);
   validInput = coatInput(lib) as unknown as Json;
   const list = (await (await formulator.fetch("/api/formulations?pageSize=100")).json()) as { rows: { id: string; name: string }[] };
@@ -170,6 +175,75 @@ beforeAll(async () => {
   for (const [label, client, method, path, body, field] of simple) {
     cases.push({ label: `${label} ${JSON.stringify(body).slice(0, 60)}`, client, method, path, body: JSON.stringify(body), field });
   }
+  // Batch records: production's write routes.
+  const hc3 = list.rows.find((r) => r.name === "Visor hard coat HC-3")!;
+  const hc3Revs = (await (await formulator.fetch(`/api/formulations/${hc3.id}`)).json()) as { revisions: { id: string; state: string }[] };
+  const released = hc3Revs.revisions.find((r) => r.state === "released")!.id;
+  const started = await production.fetch("/api/batches", { method: "POST", json: { revisionId: released, notes: "bad-input corpus" } });
+  batchId = ((await started.json()) as { id: string }).id;
+  const p = () => production;
+  const batchBad: [string, () => string, Json, string][] = [];
+  for (const v of NUMBER_BAD.concat([-1, 1e12])) batchBad.push(["PATCH", () => `/api/batches/${batchId}/lines/0`, { actualGrams: v }, "actualGrams"]);
+  for (const v of STRING_BAD.filter((x) => x !== null)) batchBad.push(["PATCH", () => `/api/batches/${batchId}/lines/0`, { lotNumber: v }, "lotNumber"]);
+  batchBad.push(["PATCH", () => `/api/batches/${batchId}/lines/0`, { lotNumber: "L".repeat(101) }, "lotNumber"]);
+  batchBad.push(["PATCH", () => `/api/batches/${batchId}/lines/0`, { initials: "ABCDEFGHIJKL" }, "initials"]);
+  batchBad.push(["PATCH", () => `/api/batches/${batchId}/lines/0`, { actualGrams: 1, extra: 1 }, "body"]);
+  for (const v of STRING_BAD.filter((x) => x !== null)) batchBad.push(["PATCH", () => `/api/batches/${batchId}`, { notes: v }, "notes"]);
+  for (const v of NUMBER_BAD.concat([-1, 0, 11])) batchBad.push(["POST", () => "/api/batches", { revisionId: released, balanceResolutionGrams: v }, "balanceResolutionGrams"]);
+  for (const v of STRING_BAD) batchBad.push(["POST", () => "/api/batches", { revisionId: v }, "revisionId"]);
+  for (const [method, path, body, field] of batchBad) {
+    cases.push({ label: `batch ${method} ${JSON.stringify(body).slice(0, 50)}`, client: p, method, path, body: JSON.stringify(body), field });
+  }
+  for (const v of NUMBER_BAD.concat([-1, 0, 0.9])) {
+    cases.push({
+      label: `batch settings toleranceFraction ${JSON.stringify(v)}`,
+      client: a,
+      method: "PUT",
+      path: () => "/api/batches/settings",
+      body: JSON.stringify({ toleranceFraction: v, balanceResolutionGrams: 0.01 }),
+      field: "toleranceFraction",
+    });
+  }
+
+  // Malformed and hostile files on the upload routes.
+  const file = (bytes: Uint8Array | string, name: string, extra: Record<string, string>) => () => {
+    const form = new FormData();
+    form.set("file", new Blob([bytes as BlobPart]), name);
+    for (const [k, v] of Object.entries(extra)) form.set(k, v);
+    return form;
+  };
+  const random = new Uint8Array(4096).map((_, i) => (i * 7919) % 256);
+  const zipNotXlsx = new Uint8Array([0x50, 0x4b, 0x03, 0x04, ...new Array(200).fill(0)]);
+  const exe = new Uint8Array([0x4d, 0x5a, 0x90, 0x00, ...new Array(500).fill(1)]);
+  const png = new Uint8Array([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, ...new Array(100).fill(2)]);
+  const big = new Uint8Array(6 * 1024 * 1024);
+  const pdfNoEnd = "%PDF-1.4\n1 0 obj << >> endobj\n";
+  const imports: [string, () => FormData][] = [
+    ["random bytes as .xlsx", file(random, "recipe.xlsx", { kind: "formulation" })],
+    ["a zip that is not a workbook", file(zipNotXlsx, "recipe.xlsx", { kind: "formulation" })],
+    ["a program named .xlsx", file(exe, "recipe.xlsx", { kind: "materials" })],
+    ["a PDF as a workbook", file("%PDF-1.4\n%%EOF", "recipe.xlsx", { kind: "materials" })],
+    ["an empty file", file("", "recipe.xlsx", { kind: "formulation" })],
+    ["6 MB of zeros", file(big, "recipe.xlsx", { kind: "formulation" })],
+    ["an unknown kind", file("name,kind\nx,precursor\n", "m.csv", { kind: "recipes" })],
+    ["no kind", file("name,kind\nx,precursor\n", "m.csv", {})],
+  ];
+  for (const [label, body] of imports) {
+    cases.push({ label: `import ${label}`, client: f2, method: "POST", path: () => "/api/imports", body });
+  }
+  const uploads: [string, () => FormData][] = [
+    ["a PNG named .pdf", file(png, "sds.pdf", { ownerType: "material", ownerId: materialId, kind: "sds" })],
+    ["a PDF without its end marker", file(pdfNoEnd, "sds.pdf", { ownerType: "material", ownerId: materialId, kind: "sds" })],
+    ["random bytes", file(random, "sds.pdf", { ownerType: "material", ownerId: materialId, kind: "coa" })],
+    ["an empty file", file("", "sds.pdf", { ownerType: "material", ownerId: materialId, kind: "sds" })],
+    ["an unknown owner type", file("%PDF-1.4\n%%EOF", "sds.pdf", { ownerType: "formulation", ownerId: materialId, kind: "sds" })],
+    ["an unknown kind", file("%PDF-1.4\n%%EOF", "sds.pdf", { ownerType: "material", ownerId: materialId, kind: "photo" })],
+    ["another team's or no owner", file("%PDF-1.4\n%%EOF", "sds.pdf", { ownerType: "material", ownerId: "00000000-0000-0000-0000-000000000000", kind: "sds" })],
+  ];
+  for (const [label, body] of uploads) {
+    cases.push({ label: `upload ${label}`, client: f2, method: "POST", path: () => "/api/attachments", body });
+  }
+
   for (const [method, path] of [
     ["POST", () => "/api/compute"],
     ["POST", () => "/api/formulations"],
@@ -200,7 +274,10 @@ describe("bad input on every write route", () => {
     const before = await snapshot();
     const problems: string[] = [];
     for (const c of cases) {
-      const res = await c.client().fetch(c.path(), { method: c.method, body: c.body, headers: { "content-type": "application/json" } });
+      const res =
+        typeof c.body === "string"
+          ? await c.client().fetch(c.path(), { method: c.method, body: c.body, headers: { "content-type": "application/json" } })
+          : await c.client().fetch(c.path(), { method: c.method, body: c.body() });
       const text = await res.text();
       let body: { error?: { code?: string; message?: string; fields?: Record<string, string> } } = {};
       try {
