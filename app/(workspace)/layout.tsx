@@ -14,6 +14,7 @@ export default async function WorkspaceLayout({ children }: { children: ReactNod
   const items: NavItem[] = [{ href: "/home", label: "Home" }];
   if (can(ctx.role, "formulation:readUnreleased")) items.push({ href: "/formulations", label: "Formulations" });
   items.push({ href: "/production", label: "Batch sheets" });
+  if (can(ctx.role, "batch:read")) items.push({ href: "/batches", label: "Batch records" });
   items.push({ href: "/materials", label: "Materials" });
   if (can(ctx.role, "audit:read")) items.push({ href: "/activity", label: "Activity" });
   items.push({ href: "/team", label: "Team" });

@@ -2,6 +2,7 @@
 
 import Link from "next/link";
 import useSWR from "swr";
+import { DownloadLinks, revisionDownloads } from "@/components/exports/download-links";
 import { ResultsView } from "@/components/results/results-view";
 import { ErrorPanel } from "@/components/ui/error-panel";
 import { Panel } from "@/components/ui/panel";
@@ -46,6 +47,7 @@ export function RevisionView({ initial, can }: RevisionViewProps) {
         </div>
         <RevisionActions revision={rev} can={can} onChanged={() => mutate()} />
       </div>
+      <DownloadLinks links={revisionDownloads(rev.id)} />
       {error ? <ErrorPanel title="Could not refresh this revision" message={error.message} onRetry={() => mutate()} /> : null}
       {fails ? (
         <div role="alert" className="rounded border border-fail/50 bg-fail-soft px-3 py-2 text-sm" data-testid="thermal-block">

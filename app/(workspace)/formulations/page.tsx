@@ -17,9 +17,12 @@ export default async function FormulationsPage() {
         subtitle={all ? "Every formulation of the team, with the state of its newest revision." : "Formulations released to production."}
         actions={
           can(ctx.role, "formulation:create") ? (
-            <ButtonLink href="/formulations/new" variant="primary">
-              New formulation
-            </ButtonLink>
+            <>
+              <ButtonLink href="/import?kind=formulation">Import from a spreadsheet</ButtonLink>
+              <ButtonLink href="/formulations/new" variant="primary">
+                New formulation
+              </ButtonLink>
+            </>
           ) : null
         }
       />

@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import { pageContext } from "@/components/layout/page-context";
+import { DownloadLinks } from "@/components/exports/download-links";
 import { MaterialsTable } from "@/components/materials/materials-table";
 import { ButtonLink } from "@/components/ui/button";
 import { PageHeader } from "@/components/ui/panel";
@@ -16,11 +17,22 @@ export default async function MaterialsPage() {
         subtitle="The team's library: precursors, organic phases, substrates, solvents, water and catalysts, with sources for every value."
         actions={
           can(ctx.role, "material:create") ? (
-            <ButtonLink href="/materials/new" variant="primary">
-              New material
-            </ButtonLink>
+            <>
+              <ButtonLink href="/import?kind=materials">Import from a spreadsheet</ButtonLink>
+              <ButtonLink href="/materials/new" variant="primary">
+                New material
+              </ButtonLink>
+            </>
           ) : null
         }
+      />
+      <DownloadLinks
+        className="mb-3"
+        title="Download the library"
+        links={[
+          { href: "/api/materials/export?format=xlsx", label: "Workbook (.xlsx)", description: "Download the whole materials library as a workbook" },
+          { href: "/api/materials/export?format=csv", label: "CSV", description: "Download the whole materials library as CSV" },
+        ]}
       />
       <MaterialsTable />
     </>

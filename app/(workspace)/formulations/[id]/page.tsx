@@ -32,6 +32,11 @@ export default async function FormulationPage({ params }: { params: Promise<{ id
                 Open revision {latest.number}
               </Link>
             ) : null}
+            {can(ctx.role, "batch:read") ? (
+              <Link href={`/batches?formulationId=${f.id}`} className="rounded border border-rule bg-panel px-3 py-1.5 text-sm font-medium">
+                Batch records
+              </Link>
+            ) : null}
             {can(ctx.role, "audit:read") ? (
               <Link href={`/formulations/${f.id}/history`} className="rounded border border-rule bg-panel px-3 py-1.5 text-sm font-medium">
                 History

@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { pageContext } from "@/components/layout/page-context";
+import { AttachmentsPanel } from "@/components/attachments/attachments-panel";
 import { MaterialForm } from "@/components/materials/material-form";
 import type { LibraryMaterial } from "@/components/materials/types";
 import { PageHeader } from "@/components/ui/panel";
@@ -28,6 +29,7 @@ export default async function MaterialPage({ params }: { params: Promise<{ id: s
         }
       />
       <MaterialForm material={material} canSave={can(ctx.role, "material:update")} canDelete={can(ctx.role, "material:delete")} />
+      <AttachmentsPanel ownerType="material" ownerId={material.id} canChange={can(ctx.role, "material:update")} className="mt-4" />
     </>
   );
 }

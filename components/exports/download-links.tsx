@@ -1,0 +1,38 @@
+import { buttonClass } from "@/components/ui/button";
+
+export interface DownloadLink {
+  href: string;
+  label: string;
+  /** Longer accessible name, e.g. "Download the revision as an Excel workbook (.xlsx)". */
+  description?: string;
+}
+
+interface DownloadLinksProps {
+  links: DownloadLink[];
+  /** Words before the links, e.g. "Download". */
+  title?: string;
+  className?: string;
+}
+
+/** File downloads from our API as plain links (the browser keeps the session cookie). */
+export function DownloadLinks({ links, title = "Download", className = "" }: DownloadLinksProps) {
+  return (
+    <div className={`no-print flex flex-wrap items-center gap-2 text-sm ${className}`} role="group" aria-label={title}>
+      <span className="text-muted">{title}:</span>
+      {links.map((l) => (
+        <a key={l.href} href={l.href} download className={buttonClass("secondary", "py-1")} title={l.description}>
+          <span aria-hidden="true">↓</span>
+          {l.label}
+        </a>
+      ))}
+    </div>
+  );
+}
+
+/** The revision's workbook and its batch sheet as CSV. */
+export function revisionDownloads(revisionId: string): DownloadLink[] {
+  return [
+    { href: `/api/revisions/${revisionId}/export?format=xlsx`, label: "Workbook (.xlsx)", description: "Download the revision as a workbook (.xlsx)" },
+    { href: `/api/revisions/${revisionId}/export?format=csv`, label: "Batch sheet (CSV)", description: "Download the batch sheet as CSV" },
+  ];
+}
