@@ -1,0 +1,64 @@
+/**
+ * Import benchmark: a 5,000-row materials workbook (header + 4,999 materials,
+ * the row limit) through the full import preview (worker-thread parse with
+ * limits, validation, matching against the library) vs a bare parse of the
+ * same file with `xlsx` in this thread. Prints medians and their ratio.
+ * Target: ≤ 1.5×.
+ */
+import { performance } from "node:perf_hooks";
+import * as XLSX from "xlsx";
+import { referenceMaterials } from "../data/materials";
+import { materialsWorkbook } from "../lib/spreadsheet/export-materials";
+import { previewMaterialsImport } from "../lib/spreadsheet/import-materials";
+import { MATERIALS_INPUT_SHEETS } from "../lib/spreadsheet/template";
+import { readWorkbookInWorker } from "../lib/spreadsheet/worker";
+
+const ROWS = 4_999;
+const RUNS = 5;
+const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)]!;
+
+async function main() {
+  const dispensed = referenceMaterials.filter((m) => m.kind !== "substrate");
+  const materials = Array.from({ length: ROWS }, (_, i) => {
+    const base = dispensed[i % dispensed.length]!;
+    const { sources: _s, casNumber: _c, ...rest } = base;
+    void _s; void _c;
+    return { ...rest, id: `m${i}`, name: `${base.name} lot ${i}` };
+  });
+  const bytes = materialsWorkbook(materials);
+  const library = referenceMaterials.map((m) => ({ id: m.id, name: m.name, casNumber: m.casNumber ?? null, material: m }));
+
+  const bare: number[] = [];
+  const full: number[] = [];
+  const parseOnly: number[] = [];
+  let problems = 0;
+  for (let i = 0; i < RUNS + 1; i++) {
+    let t = performance.now();
+    const wb = XLSX.read(bytes, { type: "buffer" });
+    for (const name of wb.SheetNames) XLSX.utils.sheet_to_json(wb.Sheets[name]!, { header: 1 });
+    const bareMs = performance.now() - t;
+
+    t = performance.now();
+    const read = await readWorkbookInWorker(new Uint8Array(bytes), MATERIALS_INPUT_SHEETS, { firstSheetFallback: true });
+    const parsedMs = performance.now() - t;
+    let n = 0;
+    const preview = previewMaterialsImport(read.sheets, library, () => `new-${n++}`);
+    const fullMs = performance.now() - t;
+    problems = preview.problems.length;
+    if (i > 0) {
+      bare.push(bareMs);
+      full.push(fullMs);
+      parseOnly.push(parsedMs);
+    }
+  }
+  console.log(`\nImport benchmark: ${ROWS} materials, ${(bytes.length / 1024).toFixed(0)} kB workbook, ${RUNS} runs (medians)`);
+  console.log(`bare parse (xlsx, this thread)          ${median(bare).toFixed(0).padStart(6)} ms`);
+  console.log(`import preview (worker, limits, checks) ${median(full).toFixed(0).padStart(6)} ms  (${problems} problems listed)`);
+  console.log(`  of which the worker-thread parse      ${median(parseOnly).toFixed(0).padStart(6)} ms`);
+  console.log(`ratio                                   ${(median(full) / median(bare)).toFixed(2).padStart(6)}×   target ≤ 1.5×`);
+}
+
+main().catch((err: unknown) => {
+  console.error(err instanceof Error ? err.stack : err);
+  process.exit(1);
+});
