@@ -10,7 +10,7 @@ import { ErrorPanel } from "@/components/ui/error-panel";
 import { HazardCodes, SAFETY_REMINDER } from "@/components/ui/hazards";
 import { inputClass } from "@/components/ui/field";
 import { useDebounced } from "@/components/ui/use-debounced";
-import { MATERIAL_KINDS, type MaterialKind } from "@/lib/formulation";
+import { MATERIAL_KINDS, type MaterialKind } from "@/lib/formulation/kinds";
 import { fetcher, query } from "@/lib/fetcher";
 import { fmtDate, fmtDensity, fmtPercent, fmtQuantity, fmtTemp } from "@/lib/format";
 import type { LibraryMaterial } from "./types";

@@ -9,8 +9,9 @@ import {
 } from "./limits";
 import { fraction, nonEmptyString, rangedNumber, required, zeroOrRangedNumber } from "./zod-helpers";
 
-/** The kinds of material a formulation can reference. */
-export const MATERIAL_KINDS = ["precursor", "organic", "substrate", "solvent", "water", "catalyst"] as const;
+import { MATERIAL_KINDS, type MaterialKind } from "./kinds";
+
+export { MATERIAL_KINDS, type MaterialKind };
 
 /** Tolerance on assay + waterFraction + solventFraction ≤ 1 (dimensionless). Common practice, no source. */
 const COMPOSITION_SUM_TOLERANCE = 1e-9;
@@ -181,8 +182,6 @@ export const materialSchema = z
 
 /** A material as supplied, see `materialSchema`. */
 export type Material = z.infer<typeof materialSchema>;
-/** A material's kind. */
-export type MaterialKind = (typeof MATERIAL_KINDS)[number];
 /** Precursor data of a material, see `precursorDataSchema`. */
 export type PrecursorData = z.infer<typeof precursorDataSchema>;
 /** Thermal limits of a material, see `thermalDataSchema`. */
