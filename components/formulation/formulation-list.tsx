@@ -1,15 +1,12 @@
 "use client";
 
-import type { PaginationState, SortingState } from "@tanstack/react-table";
 import Link from "next/link";
-import { useMemo, useState } from "react";
-import useSWR from "swr";
+import { useState } from "react";
 import { DataTable, type ServerColumn } from "@/components/ui/data-table";
 import { ErrorPanel } from "@/components/ui/error-panel";
 import { inputClass } from "@/components/ui/field";
 import { StateBadge } from "@/components/ui/status";
-import { useDebounced } from "@/components/ui/use-debounced";
-import { fetcher, query } from "@/lib/fetcher";
+import { useServerList } from "@/components/ui/use-server-list";
 import { fmtDateTime } from "@/lib/format";
 import { STATE_LABELS, type RevisionState } from "@/lib/workflow";
 import { REVISION_STATES } from "@/lib/workflow-states";
@@ -21,13 +18,6 @@ export interface FormulationRow {
   latestState: RevisionState;
   latestRevision: number;
   updatedAt: string;
-}
-
-interface ListResponse {
-  rows: FormulationRow[];
-  total: number;
-  page: number;
-  pageSize: number;
 }
 
 const columns: ServerColumn<FormulationRow>[] = [
@@ -68,25 +58,9 @@ interface FormulationListProps {
 
 /** The team's formulations: search, filter by state, sort and page, all on the server. */
 export function FormulationList({ releasedOnly = false, caption = "Formulations" }: FormulationListProps) {
-  const [q, setQ] = useState("");
   const [state, setState] = useState<RevisionState | "">("");
-  const [sorting, setSorting] = useState<SortingState>([{ id: "updatedAt", desc: true }]);
-  const [pagination, setPagination] = useState<PaginationState>({ pageIndex: 0, pageSize: 25 });
-  const search = useDebounced(q);
-
-  const key = useMemo(() => {
-    const sort = sorting[0];
-    return `/api/formulations${query({
-      q: search.trim() || undefined,
-      state: state || undefined,
-      sort: sort?.id,
-      dir: sort ? (sort.desc ? "desc" : "asc") : undefined,
-      page: pagination.pageIndex + 1,
-      pageSize: pagination.pageSize,
-    })}`;
-  }, [search, state, sorting, pagination]);
-
-  const { data, error, isLoading, mutate } = useSWR<ListResponse>(key, fetcher, { keepPreviousData: true });
+  const { q, setQ, sorting, setSorting, pagination, setPagination, toFirstPage, data, error, isLoading, mutate } =
+    useServerList<FormulationRow>("/api/formulations", { state: state || undefined }, [{ id: "updatedAt", desc: true }]);
 
   return (
     <div className="flex flex-col gap-3">
@@ -97,10 +71,7 @@ export function FormulationList({ releasedOnly = false, caption = "Formulations"
             type="search"
             className={inputClass()}
             value={q}
-            onChange={(e) => {
-              setQ(e.target.value);
-              setPagination((p) => ({ ...p, pageIndex: 0 }));
-            }}
+            onChange={(e) => setQ(e.target.value)}
           />
         </label>
         {!releasedOnly ? (
@@ -111,7 +82,7 @@ export function FormulationList({ releasedOnly = false, caption = "Formulations"
               value={state}
               onChange={(e) => {
                 setState(e.target.value as RevisionState | "");
-                setPagination((p) => ({ ...p, pageIndex: 0 }));
+                toFirstPage();
               }}
             >
               <option value="">Any state</option>
@@ -131,10 +102,7 @@ export function FormulationList({ releasedOnly = false, caption = "Formulations"
         rows={data?.rows ?? EMPTY}
         total={data?.total ?? 0}
         sorting={sorting}
-        onSortingChange={(s) => {
-          setSorting(s);
-          setPagination((p) => ({ ...p, pageIndex: 0 }));
-        }}
+        onSortingChange={setSorting}
         pagination={pagination}
         onPaginationChange={setPagination}
         loading={isLoading}

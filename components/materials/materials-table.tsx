@@ -1,24 +1,16 @@
 "use client";
 
-import type { PaginationState, SortingState } from "@tanstack/react-table";
 import Link from "next/link";
-import { useMemo, useState } from "react";
-import useSWR from "swr";
+import { useState } from "react";
 import { KIND_WORDS } from "@/components/results/words";
 import { DataTable, type ServerColumn } from "@/components/ui/data-table";
 import { ErrorPanel } from "@/components/ui/error-panel";
 import { HazardCodes, SAFETY_REMINDER } from "@/components/ui/hazards";
 import { inputClass } from "@/components/ui/field";
-import { useDebounced } from "@/components/ui/use-debounced";
+import { useServerList } from "@/components/ui/use-server-list";
 import { MATERIAL_KINDS, type MaterialKind } from "@/lib/formulation/kinds";
-import { fetcher, query } from "@/lib/fetcher";
 import { fmtDate, fmtDensity, fmtPercent, fmtQuantity, fmtTemp } from "@/lib/format";
 import type { LibraryMaterial } from "./types";
-
-interface ListResponse {
-  rows: LibraryMaterial[];
-  total: number;
-}
 
 function keyProperty(m: LibraryMaterial): string {
   if (m.kind === "precursor" && m.precursor) {
@@ -83,24 +75,9 @@ const EMPTY: LibraryMaterial[] = [];
 
 /** The team's materials library: search, filter by kind, sort, page and choose columns (all done by the API). */
 export function MaterialsTable() {
-  const [q, setQ] = useState("");
   const [kind, setKind] = useState<MaterialKind | "">("");
-  const [sorting, setSorting] = useState<SortingState>([{ id: "name", desc: false }]);
-  const [pagination, setPagination] = useState<PaginationState>({ pageIndex: 0, pageSize: 25 });
-  const search = useDebounced(q);
-  const key = useMemo(() => {
-    const sort = sorting[0];
-    return `/api/materials${query({
-      q: search.trim() || undefined,
-      kind: kind || undefined,
-      sort: sort?.id,
-      dir: sort ? (sort.desc ? "desc" : "asc") : undefined,
-      page: pagination.pageIndex + 1,
-      pageSize: pagination.pageSize,
-    })}`;
-  }, [search, kind, sorting, pagination]);
-  const { data, error, isLoading, mutate } = useSWR<ListResponse>(key, fetcher, { keepPreviousData: true });
-
+  const { q, setQ, sorting, setSorting, pagination, setPagination, toFirstPage, data, error, isLoading, mutate } =
+    useServerList<LibraryMaterial>("/api/materials", { kind: kind || undefined }, [{ id: "name", desc: false }]);
   return (
     <div className="flex flex-col gap-3">
       <div className="flex flex-wrap items-end gap-3">
@@ -110,10 +87,7 @@ export function MaterialsTable() {
             type="search"
             className={inputClass()}
             value={q}
-            onChange={(e) => {
-              setQ(e.target.value);
-              setPagination((p) => ({ ...p, pageIndex: 0 }));
-            }}
+            onChange={(e) => setQ(e.target.value)}
           />
         </label>
         <label className="flex flex-col gap-1 text-[13px] font-medium">
@@ -123,7 +97,7 @@ export function MaterialsTable() {
             value={kind}
             onChange={(e) => {
               setKind(e.target.value as MaterialKind | "");
-              setPagination((p) => ({ ...p, pageIndex: 0 }));
+              toFirstPage();
             }}
           >
             <option value="">Any kind</option>
@@ -142,10 +116,7 @@ export function MaterialsTable() {
         rows={data?.rows ?? EMPTY}
         total={data?.total ?? 0}
         sorting={sorting}
-        onSortingChange={(s) => {
-          setSorting(s);
-          setPagination((p) => ({ ...p, pageIndex: 0 }));
-        }}
+        onSortingChange={setSorting}
         pagination={pagination}
         onPaginationChange={setPagination}
         initialVisibility={{ casNumber: false, updatedAt: false }}

@@ -137,49 +137,60 @@ export async function getRevision(teamId: string, revisionId: string, opts: { re
   return { ...row.revision, formulationName: row.formulationName, project: row.project, authorName: row.authorName, reviews: revReviews };
 }
 
+/**
+ * Inserts a formulation with its first draft revision and an audit event,
+ * inside the caller's transaction. 409 when the team already has the name.
+ */
+export async function insertFormulation(
+  tx: DbOrTx,
+  actor: Actor,
+  data: { name: string; project?: string | null; description?: string | null; input: FormulationInput },
+  opts: { duplicateMessage?: string; note?: string } = {},
+): Promise<{ formulationId: string; revisionId: string }> {
+  const { result, computeError } = evaluate(data.input);
+  const formulationId = crypto.randomUUID();
+  const revisionId = crypto.randomUUID();
+  const [dup] = await tx
+    .select({ id: formulations.id })
+    .from(formulations)
+    .where(and(eq(formulations.teamId, actor.teamId), eq(formulations.name, data.name)))
+    .limit(1);
+  if (dup) throw conflict(opts.duplicateMessage ?? `A formulation named "${data.name}" already exists in this team.`);
+  await tx.insert(formulations).values({
+    id: formulationId,
+    teamId: actor.teamId,
+    name: data.name,
+    project: data.project ?? null,
+    description: data.description ?? null,
+    createdBy: actor.userId,
+  });
+  await tx.insert(revisions).values({
+    id: revisionId,
+    teamId: actor.teamId,
+    formulationId,
+    number: 1,
+    input: data.input,
+    result,
+    computeError,
+    engineVersion: ENGINE_VERSION,
+    authorId: actor.userId,
+  });
+  await recordEvent(tx, {
+    teamId: actor.teamId,
+    actorId: actor.userId,
+    action: "formulation.created",
+    entityType: "formulation",
+    entityId: formulationId,
+    summary: { after: { name: data.name, revision: 1, state: "draft" }, note: opts.note },
+  });
+  return { formulationId, revisionId };
+}
+
 export async function createFormulation(
   actor: Actor,
   data: { name: string; project?: string | null; description?: string | null; input: FormulationInput },
 ) {
-  const { result, computeError } = evaluate(data.input);
-  const formulationId = crypto.randomUUID();
-  const revisionId = crypto.randomUUID();
-  await db.transaction(async (tx) => {
-    const [dup] = await tx
-      .select({ id: formulations.id })
-      .from(formulations)
-      .where(and(eq(formulations.teamId, actor.teamId), eq(formulations.name, data.name)))
-      .limit(1);
-    if (dup) throw conflict(`A formulation named "${data.name}" already exists in this team.`);
-    await tx.insert(formulations).values({
-      id: formulationId,
-      teamId: actor.teamId,
-      name: data.name,
-      project: data.project ?? null,
-      description: data.description ?? null,
-      createdBy: actor.userId,
-    });
-    await tx.insert(revisions).values({
-      id: revisionId,
-      teamId: actor.teamId,
-      formulationId,
-      number: 1,
-      input: data.input,
-      result,
-      computeError,
-      engineVersion: ENGINE_VERSION,
-      authorId: actor.userId,
-    });
-    await recordEvent(tx, {
-      teamId: actor.teamId,
-      actorId: actor.userId,
-      action: "formulation.created",
-      entityType: "formulation",
-      entityId: formulationId,
-      summary: { after: { name: data.name, revision: 1, state: "draft" } },
-    });
-  });
-  return { formulationId, revisionId };
+  return db.transaction((tx) => insertFormulation(tx, actor, data));
 }
 
 async function lockRevision(tx: DbOrTx, teamId: string, revisionId: string): Promise<RevisionRow> {

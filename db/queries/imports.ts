@@ -1,13 +1,13 @@
 import { and, eq, lt } from "drizzle-orm";
 import { db } from "@/db";
-import { formulations, importPreviews, materials, revisions, type ImportPreviewRow } from "@/db/schema";
+import { formulations, importPreviews, materials, type ImportPreviewRow } from "@/db/schema";
 import { ApiError, conflict, notFound } from "@/lib/api";
-import { ENGINE_VERSION, type Material } from "@/lib/formulation";
+import type { Material } from "@/lib/formulation";
 import type { FormulationPreview } from "@/lib/spreadsheet/import-formulation";
 import type { LibraryEntry, MaterialsPreview } from "@/lib/spreadsheet/import-materials";
 import type { ImportKind } from "@/lib/spreadsheet/types";
 import { recordEvent } from "./audit";
-import { evaluate } from "./formulations";
+import { insertFormulation } from "./formulations";
 
 export interface Actor {
   userId: string;
@@ -165,42 +165,15 @@ export async function confirmImport(actor: Actor, id: string, opts: { acceptWarn
     if (preview.kind === "formulation") {
       const { input, formulation } = preview;
       if (!input || !formulation.name) throw new ApiError(422, "import_has_errors", "Nothing was saved: the file has no complete formulation.");
-      const [dup] = await tx
-        .select({ id: formulations.id })
-        .from(formulations)
-        .where(and(eq(formulations.teamId, actor.teamId), eq(formulations.name, formulation.name)))
-        .limit(1);
-      if (dup) throw conflict(`A formulation named “${formulation.name}” was created after this preview was made. Rename it in the file and upload it again.`);
-      const { result, computeError } = evaluate(input);
-      const formulationId = crypto.randomUUID();
-      const revisionId = crypto.randomUUID();
-      await tx.insert(formulations).values({
-        id: formulationId,
-        teamId: actor.teamId,
-        name: formulation.name,
-        project: formulation.project,
-        description: formulation.description,
-        createdBy: actor.userId,
-      });
-      await tx.insert(revisions).values({
-        id: revisionId,
-        teamId: actor.teamId,
-        formulationId,
-        number: 1,
-        input,
-        result,
-        computeError,
-        engineVersion: ENGINE_VERSION,
-        authorId: actor.userId,
-      });
-      await recordEvent(tx, {
-        teamId: actor.teamId,
-        actorId: actor.userId,
-        action: "formulation.created",
-        entityType: "formulation",
-        entityId: formulationId,
-        summary: { after: { name: formulation.name, revision: 1, state: "draft" }, note: `imported from ${row.fileName}` },
-      });
+      const { formulationId, revisionId } = await insertFormulation(
+        tx,
+        actor,
+        { name: formulation.name, project: formulation.project, description: formulation.description, input },
+        {
+          duplicateMessage: `A formulation named “${formulation.name}” was created after this preview was made. Rename it in the file and upload it again.`,
+          note: `imported from ${row.fileName}`,
+        },
+      );
       outcome.formulationId = formulationId;
       outcome.revisionId = revisionId;
     }
