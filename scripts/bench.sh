@@ -11,6 +11,7 @@ export BETTER_AUTH_URL="http://localhost:3120" BENCH_BASE="http://localhost:3120
 apt_install curl mariadb-server mariadb-client chromium
 ensure_node_modules
 cleanup() {
+  set +e
   [ -n "${APP_PID:-}" ] && kill -- "-$APP_PID" 2>/dev/null
   stop_pidfile "$ROOT/.data/bench-fake-smtp.pid"
   stop_pidfile "$ROOT/.data/bench-fake-s3.pid"

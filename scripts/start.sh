@@ -24,6 +24,7 @@ ensure_node_modules
 
 cleanup() {
   trap - INT TERM EXIT
+  set +e
   log "Stopping"
   [ -n "${APP_PID:-}" ] && { kill -- "-$APP_PID" 2>/dev/null; wait "$APP_PID" 2>/dev/null; }
   stop_pidfile .data/fake-smtp.pid
@@ -59,7 +60,7 @@ cat <<MSG
     formulator@larkspur.example   formulator: designs and submits formulations
     reviewer@larkspur.example     reviewer: approves or returns revisions
     production@larkspur.example   production: released work, batch sheets, batch records
-  Captured mail (fake SMTP server) is readable by the admin at /mailbox.
+  Captured mail (local mail catcher) is readable by the admin at http://localhost:$PORT/team/mail.
   Press Ctrl-C to stop the app and MariaDB.
 
 MSG
