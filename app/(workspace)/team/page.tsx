@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import { pageContext } from "@/components/layout/page-context";
+import { BatchTolerancePanel } from "@/components/team/batch-tolerance-panel";
 import { InvitePanel } from "@/components/team/invite-panel";
 import { MembersPanel } from "@/components/team/members-panel";
 import { ButtonLink } from "@/components/ui/button";
@@ -26,6 +27,9 @@ export default async function TeamPage() {
             <InvitePanel />
           </Panel>
         ) : null}
+        <Panel title="Weighing tolerance for batch records" id="tolerance">
+          <BatchTolerancePanel canEdit={can(ctx.role, "organization:update")} />
+        </Panel>
       </div>
     </>
   );
