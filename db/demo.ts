@@ -19,6 +19,19 @@ export const DEMO_USERS: { email: string; name: string; role: RoleName }[] = [
 /** A demo input before material ids are mapped (materials are filled in by the seed). */
 export type DemoInput = Omit<FormulationInput, "materials">;
 
+/** Reference ids of every material a demo input uses, each once, in order of first use. */
+export function demoMaterialRefs(input: DemoInput): string[] {
+  return [
+    ...new Set<string>([
+      ...input.components.map((c) => c.materialId),
+      input.water.materialId,
+      ...(input.solvent ? [input.solvent.materialId] : []),
+      ...(input.catalyst ? [input.catalyst.materialId] : []),
+      ...(input.substrateId ? [input.substrateId] : []),
+    ]),
+  ];
+}
+
 export interface DemoFormulation {
   name: string;
   project: string;

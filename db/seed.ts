@@ -6,7 +6,7 @@ import { hashPassword } from "better-auth/crypto";
 import { and, eq } from "drizzle-orm";
 import { computeFormulation, ENGINE_VERSION, type FormulationInput, type Material } from "@/lib/formulation";
 import { createDb, type Db } from "./client";
-import { DEMO_FORMULATIONS, DEMO_PASSWORD, DEMO_TEAM, DEMO_USERS, type DemoInput } from "./demo";
+import { DEMO_FORMULATIONS, DEMO_PASSWORD, DEMO_TEAM, DEMO_USERS, demoMaterialRefs, type DemoInput } from "./demo";
 import { copyReferenceMaterials } from "./queries/library";
 import { account, auditEvents, formulations, materials, member, organization, reviews, revisions, user } from "./schema";
 
@@ -43,13 +43,7 @@ async function ensureTeam(db: Db): Promise<string> {
 
 /** Maps a demo input's reference ids to the team's materials and inlines them. */
 function materialise(input: DemoInput, library: Map<string, Material>): FormulationInput {
-  const refs = new Set<string>([
-    ...input.components.map((c) => c.materialId),
-    input.water.materialId,
-    ...(input.solvent ? [input.solvent.materialId] : []),
-    ...(input.catalyst ? [input.catalyst.materialId] : []),
-    ...(input.substrateId ? [input.substrateId] : []),
-  ]);
+  const refs = demoMaterialRefs(input);
   const id = (ref: string) => {
     const m = library.get(ref);
     if (!m) throw new Error(`Demo data refers to "${ref}", which is not in data/materials.ts`);
@@ -57,7 +51,7 @@ function materialise(input: DemoInput, library: Map<string, Material>): Formulat
   };
   return {
     ...input,
-    materials: [...refs].map((r) => library.get(r)!).filter(Boolean),
+    materials: refs.map((r) => library.get(r)!).filter(Boolean),
     components: input.components.map((c) => ({ ...c, materialId: id(c.materialId) })),
     water: { ...input.water, materialId: id(input.water.materialId) },
     solvent: input.solvent ? { ...input.solvent, materialId: id(input.solvent.materialId) } : undefined,

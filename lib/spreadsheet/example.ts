@@ -3,7 +3,7 @@
  * download beside the import, and the demo inputs with reference materials
  * inlined (also used by the round-trip tests).
  */
-import { DEMO_FORMULATIONS, type DemoInput } from "@/db/demo";
+import { DEMO_FORMULATIONS, demoMaterialRefs, type DemoInput } from "@/db/demo";
 import { referenceMaterials } from "@/data/materials";
 import type { FormulationInput, Material } from "@/lib/formulation";
 import { inputSheets, materialSheets } from "./input-sheets";
@@ -13,14 +13,7 @@ import { buildWorkbook, toCsv } from "./write";
 /** A demo input with its reference materials inlined (material ids are reference ids). */
 export function demoInput(input: DemoInput): FormulationInput {
   const byId = new Map(referenceMaterials.map((m) => [m.id, m]));
-  const refs = new Set<string>([
-    ...input.components.map((c) => c.materialId),
-    input.water.materialId,
-    ...(input.solvent ? [input.solvent.materialId] : []),
-    ...(input.catalyst ? [input.catalyst.materialId] : []),
-    ...(input.substrateId ? [input.substrateId] : []),
-  ]);
-  const materials: Material[] = [...refs].map((id) => {
+  const materials: Material[] = demoMaterialRefs(input).map((id) => {
     const material = byId.get(id);
     if (!material) throw new Error(`demo data refers to unknown reference material ${id}`);
     return material;

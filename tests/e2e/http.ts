@@ -37,10 +37,11 @@ export function anonymous(): Client {
   return { cookie: "", ip: clientIp, fetch: makeFetch("", clientIp) };
 }
 
-export async function signIn(email: string, password = DEMO_PASSWORD): Promise<Client> {
+/** Calls a better-auth sign-in or sign-up endpoint from a fresh client address; returns the signed-in client. */
+async function authenticate(path: string, body: Record<string, string>, what: string): Promise<Client> {
   const clientIp = nextClientIp();
-  const res = await makeFetch("", clientIp)("/api/auth/sign-in/email", { method: "POST", json: { email, password } });
-  if (res.status !== 200) throw new Error(`sign-in of ${email} failed: ${res.status} ${await res.text()}`);
+  const res = await makeFetch("", clientIp)(path, { method: "POST", json: body });
+  if (res.status !== 200) throw new Error(`${what} failed: ${res.status} ${await res.text()}`);
   const cookie = res.headers
     .getSetCookie()
     .map((c) => c.split(";")[0])
@@ -48,15 +49,12 @@ export async function signIn(email: string, password = DEMO_PASSWORD): Promise<C
   return { cookie, ip: clientIp, fetch: makeFetch(cookie, clientIp) };
 }
 
-export async function signUp(email: string, name: string, password = "a-test-password-1"): Promise<Client> {
-  const clientIp = nextClientIp();
-  const res = await makeFetch("", clientIp)("/api/auth/sign-up/email", { method: "POST", json: { email, password, name } });
-  if (res.status !== 200) throw new Error(`sign-up of ${email} failed: ${res.status} ${await res.text()}`);
-  const cookie = res.headers
-    .getSetCookie()
-    .map((c) => c.split(";")[0])
-    .join("; ");
-  return { cookie, ip: clientIp, fetch: makeFetch(cookie, clientIp) };
+export function signIn(email: string, password = DEMO_PASSWORD): Promise<Client> {
+  return authenticate("/api/auth/sign-in/email", { email, password }, `sign-in of ${email}`);
+}
+
+export function signUp(email: string, name: string, password = "a-test-password-1"): Promise<Client> {
+  return authenticate("/api/auth/sign-up/email", { email, password, name }, `sign-up of ${email}`);
 }
 
 export const demo = {
