@@ -4,7 +4,8 @@
  * The npm build of `xlsx` (0.18.5) has published advisories for crafted
  * files (prototype pollution, regular-expression denial of service). So an
  * uploaded workbook is parsed only here: in a separate thread (its own heap,
- * so a polluted prototype never reaches the app), capped in memory, stopped
+ * so a polluted prototype never reaches the app; one worker per upload, never
+ * reused), capped in memory, stopped
  * after IMPORT_LIMITS.parseMs, reading only the sheets we need, only up to
  * the row and column limits, and only plain values (no formulas, styles,
  * HTML, macros). What comes back is copied into fresh arrays of strings,
@@ -36,74 +37,173 @@ interface WorkerRequest {
 }
 
 type WorkerReply =
-  | { ok: true; sheetNames: string[]; sheets: { name: string; rows: Cell[][]; truncatedRows: boolean; truncatedColumns: boolean }[] }
+  | {
+      ok: true;
+      sheetNames: string[];
+      sheets: { name: string; rows: Cell[][]; truncatedRows: boolean; truncatedColumns: boolean }[];
+      threadId: number;
+      warmed: boolean;
+    }
   | { ok: false; code: string; message: string };
 
-/** The worker's source (CommonJS, run with `eval`), so no bundler has to find a separate file. */
+/**
+ * The worker's source (CommonJS, run with `eval`), so no bundler has to find a
+ * separate file. A worker reads exactly one upload and is then terminated.
+ * A spare worker (workerData.warm) loads `xlsx` and reads a small workbook of
+ * our own making before it says it is ready, so the upload that takes it does
+ * not wait for module loading and a cold compiler; it has never seen anyone's
+ * file before that upload.
+ */
 const WORKER_SOURCE = String.raw`
 "use strict";
-const { parentPort, workerData } = require("node:worker_threads");
+const { parentPort, workerData, threadId } = require("node:worker_threads");
 const { createRequire } = require("node:module");
-const req = workerData;
-function reply(value) { parentPort.postMessage(value); }
-(function main() {
-try {
-  const XLSX = createRequire(req.moduleRoot)("xlsx");
-  const base = { type: "buffer", cellFormula: false, cellHTML: false, cellText: false, cellStyles: false, cellDates: false,
-    cellNF: false, bookVBA: false, bookDeps: false, bookFiles: false, bookProps: false, WTF: false, password: "" };
+const XLSX = createRequire(workerData.moduleRoot)("xlsx");
+const base = { type: "buffer", cellFormula: false, cellHTML: false, cellText: false, cellStyles: false, cellDates: false,
+  cellNF: false, bookVBA: false, bookDeps: false, bookFiles: false, bookProps: false, WTF: false, password: "" };
+function readSheet(ws, limits) {
+  const rows = [];
+  let truncatedRows = false, truncatedColumns = false;
+  if (ws && typeof ws["!ref"] === "string") {
+    const range = XLSX.utils.decode_range(ws["!ref"]);
+    const full = typeof ws["!fullref"] === "string" ? XLSX.utils.decode_range(ws["!fullref"]) : range;
+    if (full.e.r + 1 > limits.maxRows) truncatedRows = true;
+    if (range.e.c + 1 > limits.maxColumns) truncatedColumns = true;
+    const lastRow = Math.min(range.e.r, limits.maxRows - 1);
+    const lastCol = Math.min(range.e.c, limits.maxColumns - 1);
+    for (let r = 0; r <= lastRow; r++) {
+      const row = [];
+      const cells = Array.isArray(ws[r]) ? ws[r] : [];
+      for (let c = 0; c <= lastCol; c++) {
+        const cell = cells[c];
+        let v = null;
+        if (cell && (cell.t === "n" || cell.t === "b")) v = cell.v;
+        else if (cell && (cell.t === "s" || cell.t === "str") && typeof cell.v === "string") v = cell.v.slice(0, limits.maxCellChars + 1);
+        row.push(typeof v === "number" || typeof v === "boolean" || typeof v === "string" ? v : null);
+      }
+      while (row.length > 0 && row[row.length - 1] === null) row.pop();
+      rows.push(row);
+    }
+  }
+  return { rows, truncatedRows, truncatedColumns };
+}
+function read(req) {
   const buffer = Buffer.from(req.bytes.buffer, req.bytes.byteOffset, req.bytes.byteLength);
   let names;
   try {
     names = XLSX.read(buffer, Object.assign({}, base, { bookSheets: true })).SheetNames.map(String);
   } catch (err) {
     const text = String(err && err.message || err);
-    if (/password/i.test(text)) reply({ ok: false, code: "password_protected", message: text });
-    else reply({ ok: false, code: "corrupt", message: text });
-    return;
+    if (/password/i.test(text)) return { ok: false, code: "password_protected", message: text };
+    return { ok: false, code: "corrupt", message: text };
   }
-  if (names.length > req.limits.maxSheets) { reply({ ok: false, code: "too_many_sheets", message: String(names.length) }); return; }
+  if (names.length > req.limits.maxSheets) return { ok: false, code: "too_many_sheets", message: String(names.length) };
   const lower = new Map(names.map((n) => [n.trim().toLowerCase(), n]));
   const selected = [];
   for (const w of req.wanted) { const hit = lower.get(w.toLowerCase()); if (hit !== undefined && !selected.includes(hit)) selected.push(hit); }
   if (selected.length === 0 && req.firstSheetFallback && names.length > 0) selected.push(names[0]);
-  const wb = XLSX.read(buffer, Object.assign({}, base, { sheets: selected, sheetRows: req.limits.maxRows + 1 }));
+  // dense: each sheet is an array of rows of cells, faster to read and to walk.
+  const wb = XLSX.read(buffer, Object.assign({}, base, { sheets: selected, sheetRows: req.limits.maxRows + 1, dense: true }));
   const sheets = [];
-  for (const name of selected) {
-    const ws = wb.Sheets[name];
-    const rows = [];
-    let truncatedRows = false, truncatedColumns = false;
-    if (ws && typeof ws["!ref"] === "string") {
-      const range = XLSX.utils.decode_range(ws["!ref"]);
-      const full = typeof ws["!fullref"] === "string" ? XLSX.utils.decode_range(ws["!fullref"]) : range;
-      if (full.e.r + 1 > req.limits.maxRows) truncatedRows = true;
-      if (range.e.c + 1 > req.limits.maxColumns) truncatedColumns = true;
-      const lastRow = Math.min(range.e.r, req.limits.maxRows - 1);
-      const lastCol = Math.min(range.e.c, req.limits.maxColumns - 1);
-      for (let r = 0; r <= lastRow; r++) {
-        const row = [];
-        for (let c = 0; c <= lastCol; c++) {
-          const cell = ws[XLSX.utils.encode_cell({ r, c })];
-          let v = null;
-          if (cell && (cell.t === "n" || cell.t === "b")) v = cell.v;
-          else if (cell && (cell.t === "s" || cell.t === "str") && typeof cell.v === "string") v = cell.v.slice(0, req.limits.maxCellChars + 1);
-          row.push(typeof v === "number" || typeof v === "boolean" || typeof v === "string" ? v : null);
-        }
-        while (row.length > 0 && row[row.length - 1] === null) row.pop();
-        rows.push(row);
-      }
-    }
-    sheets.push({ name: String(name), rows, truncatedRows, truncatedColumns });
-  }
-  reply({ ok: true, sheetNames: names, sheets });
-} catch (err) {
-  reply({ ok: false, code: "corrupt", message: String(err && err.message || err) });
+  for (const name of selected) sheets.push(Object.assign({ name: String(name) }, readSheet(wb.Sheets[name], req.limits)));
+  return { ok: true, sheetNames: names, sheets, threadId, warmed: workerData.warm === true };
 }
-})();
+function handle(req) {
+  let reply;
+  try { reply = read(req); } catch (err) { reply = { ok: false, code: "corrupt", message: String(err && err.message || err) }; }
+  parentPort.postMessage(reply);
+}
+if (workerData.warm) {
+  // Warm-up on a workbook of our own: a few hundred rows of text and numbers.
+  const aoa = [["Name", "Kind", "Molar mass", "Density", "Note"]];
+  for (let i = 0; i < 600; i++) aoa.push(["warm-up " + i, i % 2 ? "precursor" : "organic", 100 + i / 7, 0.9 + i / 1000, i % 3 ? "" : "x"]);
+  const book = XLSX.utils.book_new();
+  XLSX.utils.book_append_sheet(book, XLSX.utils.aoa_to_sheet(aoa), "Warm-up");
+  const bytes = XLSX.write(book, { type: "buffer", bookType: "xlsx" });
+  const limits = { maxRows: 5000, maxColumns: 60, maxSheets: 20, maxCellChars: 2000 };
+  for (let i = 0; i < 3; i++) read({ bytes, wanted: ["Warm-up"], firstSheetFallback: true, limits });
+  parentPort.once("message", handle);
+  parentPort.postMessage({ ready: true });
+} else {
+  handle(workerData.request);
+}
 `;
+
+interface WorkerData {
+  moduleRoot: string;
+  warm: boolean;
+  request?: WorkerRequest;
+}
+
+const RESOURCE_LIMITS = { maxOldGenerationSizeMb: 256, maxYoungGenerationSizeMb: 32, stackSizeMb: 4 };
+const defaultModuleRoot = () => join(process.cwd(), "package.json");
+
+/** How many warmed workers wait for the next upload (GELWRIGHT_IMPORT_SPARE_WORKERS, default 1; 0 turns it off). */
+function spareTarget(): number {
+  const n = Number(process.env.GELWRIGHT_IMPORT_SPARE_WORKERS ?? 1);
+  return Number.isInteger(n) && n >= 0 && n <= 4 ? n : 1;
+}
+
+interface Spare {
+  worker: Worker;
+  ready: boolean;
+  /** Settles when the spare is warm, or gone. */
+  settled: Promise<void>;
+}
+const spares: Spare[] = [];
+
+/** Starts warming spare workers until there are spareTarget() of them. They never keep the process alive. */
+function refillSpares(): void {
+  while (spares.length < spareTarget()) {
+    const data: WorkerData = { moduleRoot: defaultModuleRoot(), warm: true };
+    const worker = new Worker(WORKER_SOURCE, { eval: true, workerData: data, resourceLimits: RESOURCE_LIMITS });
+    worker.unref();
+    let settle = () => {};
+    const spare: Spare = { worker, ready: false, settled: new Promise<void>((resolve) => (settle = resolve)) };
+    const drop = () => {
+      const i = spares.indexOf(spare);
+      if (i >= 0) spares.splice(i, 1);
+      settle();
+    };
+    worker.once("message", (m: { ready?: boolean }) => {
+      if (m && m.ready === true) spare.ready = true;
+      settle();
+    });
+    worker.once("error", drop);
+    worker.once("exit", drop);
+    spares.push(spare);
+  }
+}
+
+/**
+ * Starts the spare workers if they are not running, and resolves once they
+ * are warm (for benchmarks and for warming up at start; uploads never wait for it).
+ */
+export async function spareWorkersReady(): Promise<number> {
+  refillSpares();
+  await Promise.all(spares.map((s) => s.settled));
+  return spares.filter((s) => s.ready).length;
+}
+
+/** A worker that will read `request`: a warmed spare if one is ready, else a new one. */
+function workerFor(request: WorkerRequest): Worker {
+  const i = spareTarget() > 0 && request.moduleRoot === defaultModuleRoot() ? spares.findIndex((s) => s.ready) : -1;
+  if (i >= 0) {
+    const [spare] = spares.splice(i, 1);
+    spare!.worker.removeAllListeners();
+    spare!.worker.ref();
+    spare!.worker.postMessage(request);
+    return spare!.worker;
+  }
+  const data: WorkerData = { moduleRoot: request.moduleRoot, warm: false, request };
+  return new Worker(WORKER_SOURCE, { eval: true, workerData: data, resourceLimits: RESOURCE_LIMITS });
+}
 
 /** Result of reading a workbook: sheet names and the sheets asked for. */
 export interface WorkbookRead {
   sheetNames: string[];
+  /** The worker that read it (each upload has its own) and whether it was a warmed spare. */
+  worker: { threadId: number; warmed: boolean };
   sheets: (SheetGrid & { truncatedRows: boolean; truncatedColumns: boolean })[];
 }
 
@@ -128,14 +228,10 @@ export function readWorkbookInWorker(
     wanted: [...wanted],
     firstSheetFallback: opts.firstSheetFallback ?? false,
     limits: { maxRows: limits.maxRows, maxColumns: limits.maxColumns, maxSheets: limits.maxSheets, maxCellChars: limits.maxCellChars },
-    moduleRoot: opts.moduleRoot ?? join(process.cwd(), "package.json"),
+    moduleRoot: opts.moduleRoot ?? defaultModuleRoot(),
   };
   return new Promise<WorkbookRead>((resolve, reject) => {
-    const worker = new Worker(WORKER_SOURCE, {
-      eval: true,
-      workerData: request,
-      resourceLimits: { maxOldGenerationSizeMb: 256, maxYoungGenerationSizeMb: 32, stackSizeMb: 4 },
-    });
+    const worker = workerFor(request);
     let settled = false;
     const finish = (fn: () => void) => {
       if (settled) return;
@@ -143,6 +239,8 @@ export function readWorkbookInWorker(
       clearTimeout(timer);
       void worker.terminate();
       fn();
+      // The next upload's worker warms up after this one is done, not while it parses.
+      refillSpares();
     };
     const timer = setTimeout(() => {
       finish(() =>
@@ -160,6 +258,7 @@ export function readWorkbookInWorker(
         if (message.ok) {
           resolve({
             sheetNames: message.sheetNames.map(String),
+            worker: { threadId: Number(message.threadId), warmed: message.warmed === true },
             sheets: message.sheets.map((s) => ({
               name: String(s.name),
               rows: s.rows.map((row) => row.map((cell) => (typeof cell === "string" || typeof cell === "number" || typeof cell === "boolean" ? cell : null))),

@@ -4,6 +4,7 @@
  * expected rows and columns are read off the template layout built in each
  * test (row 1 is the header), no arithmetic beyond the sums shown.
  */
+import { threadId } from "node:worker_threads";
 import * as XLSX from "xlsx";
 import { describe, expect, it } from "vitest";
 import { referenceMaterials } from "@/data/materials";
@@ -13,6 +14,7 @@ import { inputSheets, materialSheets } from "@/lib/spreadsheet/input-sheets";
 import { previewFormulationImport } from "@/lib/spreadsheet/import-formulation";
 import { previewMaterialsImport, type LibraryEntry } from "@/lib/spreadsheet/import-materials";
 import { readUpload, UploadError } from "@/lib/spreadsheet/read";
+import { readWorkbookInWorker, spareWorkersReady } from "@/lib/spreadsheet/worker";
 import { FORMULATION_INPUT_SHEETS, IMPORT_LIMITS, MATERIALS_INPUT_SHEETS, SHEET } from "@/lib/spreadsheet/template";
 import type { Cell, ImportProblem } from "@/lib/spreadsheet/types";
 import { buildWorkbook, toCsv, type SheetSpec } from "@/lib/spreadsheet/write";
@@ -240,8 +242,32 @@ describe("upload checks", () => {
 
   it("stops a parse that takes longer than the time limit", async () => {
     const rows: Cell[][] = [["Name", "Kind"], ["A", "solvent"]];
-    const err = await refused(read(buildWorkbook([{ name: "Materials", header: [], rows }]), "m.xlsx", { ...small, parseMs: 1 }));
-    expect([err.status, err.code]).toEqual([422, "parse_timeout"]);
+    // A cold worker (no warmed spare) cannot answer within 1 ms.
+    process.env.GELWRIGHT_IMPORT_SPARE_WORKERS = "0";
+    try {
+      const err = await refused(read(buildWorkbook([{ name: "Materials", header: [], rows }]), "m.xlsx", { ...small, parseMs: 1 }));
+      expect([err.status, err.code]).toEqual([422, "parse_timeout"]);
+    } finally {
+      delete process.env.GELWRIGHT_IMPORT_SPARE_WORKERS;
+    }
+  });
+
+  it("reads each workbook in a worker of its own, warmed beforehand but never reused", async () => {
+    const book = buildWorkbook([{ name: "Materials", header: [], rows: [["Name", "Kind"], ["A", "solvent"]] }]);
+    expect(await spareWorkersReady()).toBe(1);
+    const first = await readWorkbookInWorker(book, ["Materials"]);
+    // Taken straight after, before a new spare can have warmed up: a fresh worker.
+    const second = await readWorkbookInWorker(book, ["Materials"]);
+    expect(first.worker.warmed).toBe(true);
+    expect(second.worker.warmed).toBe(false);
+    expect(new Set([first.worker.threadId, second.worker.threadId, threadId]).size).toBe(3);
+    expect(first.sheets).toEqual(second.sheets);
+    expect(second.sheets[0]!.rows).toEqual([["Name", "Kind"], ["A", "solvent"]]);
+    // The spare started after the first read is again a different thread.
+    await spareWorkersReady();
+    const third = await readWorkbookInWorker(book, ["Materials"]);
+    expect(third.worker.warmed).toBe(true);
+    expect([first.worker.threadId, second.worker.threadId]).not.toContain(third.worker.threadId);
   });
 
   describe("edge cases", () => {
