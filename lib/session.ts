@@ -1,5 +1,6 @@
 import "server-only";
 import { and, asc, eq } from "drizzle-orm";
+import { LRUCache } from "lru-cache";
 import { headers as nextHeaders } from "next/headers";
 import { db } from "@/db";
 import { member, organization } from "@/db/schema";
@@ -65,6 +66,31 @@ export async function requireContext(reqHeaders: Headers | undefined, permission
   if (permission && !can(ctx.role, permission)) {
     throw forbidden(describe(permission));
   }
+  return ctx;
+}
+
+/** How long requireContextBriefly trusts an answer: less than the session cookie cache (60 s). */
+export const BRIEF_CONTEXT_TTL_MS = 30_000;
+const briefContexts = new LRUCache<string, TeamContext>({ max: 10_000, ttl: BRIEF_CONTEXT_TTL_MS });
+const SESSION_TOKEN = /(?:^|;\s*)(?:__Secure-)?gelwright\.session_token=([^;]+)/;
+
+/**
+ * requireContext for routes that read and change nothing stored (the
+ * calculator): who a session cookie belongs to is remembered in this
+ * process for BRIEF_CONTEXT_TTL_MS, so a run of requests pays for one
+ * session check and one membership query. Only answers that passed the
+ * full check are remembered, keyed by the signed session cookie; a sign-out,
+ * a removal from the team or a role change reaches these routes within that
+ * time. Routes that touch team data use requireContext.
+ */
+export async function requireContextBriefly(reqHeaders: Headers, permission?: Permission): Promise<TeamContext> {
+  const token = SESSION_TOKEN.exec(reqHeaders.get("cookie") ?? "")?.[1];
+  let ctx = token ? briefContexts.get(token) : undefined;
+  if (!ctx) {
+    ctx = await requireContext(reqHeaders);
+    if (token) briefContexts.set(token, ctx);
+  }
+  if (permission && !can(ctx.role, permission)) throw forbidden(describe(permission));
   return ctx;
 }
 

@@ -4,7 +4,7 @@
  */
 import { describe, expect, it } from "vitest";
 import { coatInput, library } from "./fixtures";
-import { BASE, DEMO_PASSWORD, demo, nextClientIp, signIn } from "./http";
+import { BASE, DEMO_PASSWORD, demo, nextClientIp, signIn, signUp } from "./http";
 
 describe("security headers", () => {
   it("sends a content security policy that forbids framing, plus nosniff and a referrer policy", async () => {
@@ -100,5 +100,36 @@ describe("errors", () => {
     expect(res.status).toBe(422);
     const body = (await res.json()) as { error: { fields: Record<string, string> } };
     expect(Object.keys(body.error.fields).some((f) => f.startsWith("components"))).toBe(true);
+  });
+});
+
+describe("the calculator's brief session memo", () => {
+  it("answers a signed-in member, and still refuses no cookie, an altered cookie and a user without a team", async () => {
+    const formulator = await signIn(demo.formulator);
+    const lib = await library(formulator);
+    const input = coatInput(lib);
+    const post = (cookie: string) =>
+      fetch(`${BASE}/api/compute`, {
+        method: "POST",
+        headers: { cookie, origin: BASE, "content-type": "application/json", "x-forwarded-for": formulator.ip },
+        body: JSON.stringify(input),
+      });
+    // Twice: the second answer comes from the memo and must be the same.
+    const first = await post(formulator.cookie);
+    const second = await post(formulator.cookie);
+    expect([first.status, second.status]).toEqual([200, 200]);
+    expect(await second.json()).toEqual(await first.json());
+
+    expect((await post("")).status).toBe(401);
+    // The token with one character of its signature changed: never taken from the memo.
+    const altered = formulator.cookie.replace(/(gelwright\.session_token=[^;]*)(.)(;|$)/, (_m, head: string, last: string, tail: string) => `${head}${last === "A" ? "B" : "A"}${tail}`);
+    expect(altered).not.toBe(formulator.cookie);
+    const onlyToken = altered.split("; ").filter((c) => c.startsWith("gelwright.session_token=")).join("; ");
+    expect((await post(onlyToken)).status).toBe(401);
+    expect((await post(onlyToken)).status).toBe(401);
+
+    const loner = await signUp(`memo-${Date.now().toString(36)}@elsewhere.example`, "Lone Calculator");
+    expect((await post(loner.cookie)).status).toBe(403);
+    expect((await post(loner.cookie)).status).toBe(403);
   });
 });
