@@ -3,6 +3,7 @@
 import { useId, useRef, useState, type FormEvent } from "react";
 import useSWR from "swr";
 import { Button } from "@/components/ui/button";
+import { useConfirm } from "@/components/ui/confirm-dialog";
 import { ErrorPanel } from "@/components/ui/error-panel";
 import { Field, inputClass } from "@/components/ui/field";
 import { Panel } from "@/components/ui/panel";
@@ -50,6 +51,7 @@ export function AttachmentsPanel({ ownerType, ownerId, canChange, readOnlyReason
   const [kind, setKind] = useState<AttachmentKind>(defaultKind);
   const [file, setFile] = useState<File | null>(null);
   const [fileError, setFileError] = useState<string | null>(null);
+  const [confirmDialog, ask] = useConfirm();
   const [progress, setProgress] = useState<UploadProgress | null>(null);
   const [message, setMessage] = useState<{ tone: "error" | "info"; text: string } | null>(null);
   const fileRef = useRef<HTMLInputElement | null>(null);
@@ -94,7 +96,8 @@ export function AttachmentsPanel({ ownerType, ownerId, canChange, readOnlyReason
   }
 
   async function remove(row: AttachmentRow) {
-    if (!window.confirm(`Remove “${row.fileName}”?`)) return;
+    const confirmed = await ask({ title: `Remove “${row.fileName}”?`, message: "The file is deleted from storage; the history keeps a note that it was removed.", confirmLabel: "Remove the file" });
+    if (!confirmed) return;
     try {
       await apiSend("DELETE", `/api/attachments/${row.id}`);
       await mutate();
@@ -108,6 +111,7 @@ export function AttachmentsPanel({ ownerType, ownerId, canChange, readOnlyReason
   return (
     <Panel title="Documents" id={`${ownerType}-documents`} className={className} aside={<span className="text-xs text-muted">Safety data sheets, certificates of analysis · PDF, up to 10 MB</span>}>
       <div className="flex flex-col gap-3">
+        {confirmDialog}
         {error ? <ErrorPanel title="Documents could not be loaded" message={error.message} onRetry={() => mutate()} /> : null}
         {isLoading && !data ? <TableSkeleton rows={2} label="Loading documents" /> : null}
         {data && rows.length === 0 ? <p className="text-sm text-muted">No documents yet.</p> : null}

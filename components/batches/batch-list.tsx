@@ -20,12 +20,13 @@ interface BatchListProps {
   empty?: string;
 }
 
-/** Batch records, newest first, with how far each has come. */
+/** Batch records, newest first, with how far each has come. Listed for one revision, the formulation column is left out. */
 export function BatchList({ formulationId, revisionId, state, canRecord, empty = "No batch records yet." }: BatchListProps) {
   const { data, error, isLoading, mutate } = useSWR<{ rows: BatchListRow[] }>(`/api/batches${query({ formulationId, revisionId, state })}`, fetcher);
   if (error) return <ErrorPanel title="Batch records could not be loaded" message={error.message} onRetry={() => mutate()} />;
   if (isLoading || !data) return <TableSkeleton rows={3} label="Loading batch records" />;
   if (data.rows.length === 0) return <p className="text-sm text-muted">{empty}</p>;
+  const showFormulation = !revisionId;
   return (
     <div className="overflow-x-auto rounded border border-rule bg-panel">
       <table className="w-full text-sm" data-testid="batch-list">
@@ -35,9 +36,11 @@ export function BatchList({ formulationId, revisionId, state, canRecord, empty =
             <th scope="col" className={TH}>
               Started
             </th>
-            <th scope="col" className={TH}>
-              Formulation
-            </th>
+            {showFormulation ? (
+              <th scope="col" className={TH}>
+                Formulation
+              </th>
+            ) : null}
             <th scope="col" className={TH}>
               State
             </th>
@@ -59,9 +62,11 @@ export function BatchList({ formulationId, revisionId, state, canRecord, empty =
           {data.rows.map((r) => (
             <tr key={r.id} className="border-b border-rule/60 last:border-0 hover:bg-paper/60">
               <td className={`${TD} num whitespace-nowrap`}>{fmtDateTime(r.createdAt)}</td>
-              <td className={TD}>
-                {r.formulationName} <span className="text-muted">· revision {r.revisionNumber}</span>
-              </td>
+              {showFormulation ? (
+                <td className={TD}>
+                  {r.formulationName} <span className="text-muted">· revision {r.revisionNumber}</span>
+                </td>
+              ) : null}
               <td className={TD}>
                 <BatchStateBadge state={r.state} />
               </td>

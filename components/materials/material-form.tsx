@@ -6,6 +6,7 @@ import { useForm, useWatch, type FieldErrors, type Resolver } from "react-hook-f
 import { useSWRConfig } from "swr";
 import { KIND_WORDS } from "@/components/results/words";
 import { Button } from "@/components/ui/button";
+import { useConfirm } from "@/components/ui/confirm-dialog";
 import { Field, inputClass } from "@/components/ui/field";
 import { HazardCodes, SafetyNote } from "@/components/ui/hazards";
 import { MATERIAL_KINDS, materialSchema, type Material, type MaterialKind } from "@/lib/formulation";
@@ -107,6 +108,7 @@ export function MaterialForm({ material, canSave, canDelete }: MaterialFormProps
   const router = useRouter();
   const { mutate } = useSWRConfig();
   const [message, setMessage] = useState<{ tone: "error" | "info"; text: string } | null>(null);
+  const [confirmDialog, ask] = useConfirm();
   const form = useForm<FormValues>({ resolver, defaultValues: toForm(material ?? {}), mode: "onTouched" });
   const { register, handleSubmit, formState, control, setError } = form;
   const kind = useWatch({ control, name: "kind" }) as MaterialKind;
@@ -140,7 +142,13 @@ export function MaterialForm({ material, canSave, canDelete }: MaterialFormProps
   );
 
   async function remove() {
-    if (!material || !window.confirm(`Remove ${material.name} from the library? Formulations keep their own copy.`)) return;
+    if (!material) return;
+    const confirmed = await ask({
+      title: `Remove ${material.name}?`,
+      message: "It leaves the team's library. Formulations that use it keep their own copy of its data.",
+      confirmLabel: "Remove from the library",
+    });
+    if (!confirmed) return;
     try {
       await apiSend("DELETE", `/api/materials/${material.id}`);
       await mutate((key) => typeof key === "string" && key.startsWith("/api/materials"));
@@ -163,6 +171,7 @@ export function MaterialForm({ material, canSave, canDelete }: MaterialFormProps
   const hazardList = hazardsText.split(/[\s,;]+/).filter(Boolean).map((h) => h.toUpperCase());
   return (
     <form onSubmit={onSubmit} noValidate className="flex flex-col gap-4" aria-label="Material">
+      {confirmDialog}
       <SafetyNote items={[{ name: nameText || "This material", hazards: hazardList }]} />
       <fieldset className="grid gap-3 rounded border border-rule bg-panel p-3 sm:grid-cols-3">
         <legend className="px-1 text-sm font-semibold">Identity</legend>

@@ -4,6 +4,7 @@ import { useState } from "react";
 import useSWR from "swr";
 import { ROLE_DESCRIPTIONS, ROLE_LABELS } from "@/components/layout/role-words";
 import { Button } from "@/components/ui/button";
+import { useConfirm } from "@/components/ui/confirm-dialog";
 import { ErrorPanel } from "@/components/ui/error-panel";
 import { TableSkeleton } from "@/components/ui/skeleton";
 import { apiSend, errorMessage, fetcher } from "@/lib/fetcher";
@@ -27,6 +28,7 @@ interface MembersPanelProps {
 export function MembersPanel({ userId, canManage, canRemove }: MembersPanelProps) {
   const { data, error, isLoading, mutate } = useSWR<{ rows: Member[] }>("/api/members", fetcher);
   const [message, setMessage] = useState<{ tone: "error" | "info"; text: string } | null>(null);
+  const [confirmDialog, ask] = useConfirm();
 
   async function changeRole(m: Member, role: RoleName) {
     setMessage(null);
@@ -40,7 +42,12 @@ export function MembersPanel({ userId, canManage, canRemove }: MembersPanelProps
   }
 
   async function remove(m: Member) {
-    if (!window.confirm(`Remove ${m.name} (${m.email}) from the team?`)) return;
+    const confirmed = await ask({
+      title: `Remove ${m.name}?`,
+      message: `${m.name} (${m.email}) loses access to the team's formulations, library and batch records at once. Their past work and its history stay.`,
+      confirmLabel: "Remove from the team",
+    });
+    if (!confirmed) return;
     setMessage(null);
     try {
       await apiSend("DELETE", `/api/members/${m.id}`);
@@ -55,6 +62,7 @@ export function MembersPanel({ userId, canManage, canRemove }: MembersPanelProps
   if (isLoading || !data) return <TableSkeleton rows={4} label="Loading members" />;
   return (
     <div className="flex flex-col gap-2">
+      {confirmDialog}
       <div className="overflow-x-auto">
         <table className="w-full text-sm">
           <caption className="sr-only">Team members</caption>

@@ -136,7 +136,16 @@ describe("batch records in the browser", () => {
     expect(await page.getByRole("heading", { level: 1 }).textContent()).toBe("Batch records of Visor hard coat HC-3");
     const row = list.locator("tbody tr").filter({ has: page.locator(`a[href="/batches/${batchId}"]`) });
     expect(await row.textContent()).toMatch(/Closed[\s\S]*1 outside tolerance/);
+    expect(await list.locator("thead th").allTextContents()).toContain("Formulation");
     await screenshot(page, "batch-list");
+
+    // On one revision's batch sheet every record is of that revision: no formulation column.
+    await page.goto(`/revisions/${releasedId}/batch-sheet`);
+    const own = page.getByTestId("batch-list");
+    await poll(() => own.locator(`a[href="/batches/${batchId}"]`).count()).toBe(1);
+    const headers = (await own.locator("thead th").allTextContents()).map((t) => t.trim());
+    expect(headers).toContain("State");
+    expect(headers).not.toContain("Formulation");
     const violations = await seriousViolations(page);
     expect(violations, JSON.stringify(violations, null, 2)).toEqual([]);
   });

@@ -1,9 +1,10 @@
 /**
  * The team page's weighing tolerance: an admin changes it and a bad value is
- * refused beside its field; other roles see it read-only.
+ * refused beside its field; other roles see it read-only. Removing a
+ * material asks first, in the page, and keeps it unless confirmed.
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { openSession, poll, screenshot, seriousViolations, setNumber, signInAs, type Session } from "./browser";
+import { openSession, poll, screenshot, seriousViolations, setNumber, signInAs, unique, type Session } from "./browser";
 import { demo, signIn } from "./http";
 
 let admin: Session;
@@ -48,5 +49,43 @@ describe("weighing tolerance on the team page", () => {
     await poll(() => page.locator("#tolerance-percent").count()).toBe(1);
     expect(await page.locator("#tolerance-percent").isDisabled()).toBe(true);
     expect(await page.getByRole("button", { name: "Save tolerance" }).count()).toBe(0);
+  });
+});
+
+describe("removing a material", () => {
+  it("asks in the page first: Escape and Keep leave it, the named button removes it", async () => {
+    const api = await signIn(demo.admin);
+    const name = `Spare glycol ${unique()}`;
+    const created = await api.fetch("/api/materials", {
+      method: "POST",
+      json: { material: { id: "spare", name, kind: "solvent", formula: "C2H6O2", molarMass: 62.068, density: 1.113 } },
+    });
+    expect(created.status).toBe(201);
+    const { id } = (await created.json()) as { id: string };
+
+    const page = admin.page;
+    await page.goto(`/materials/${id}`);
+    const removeButton = page.getByRole("button", { name: "Remove from the library" });
+    const dialog = page.getByTestId("confirm-dialog");
+
+    await removeButton.click();
+    await poll(() => dialog.isVisible()).toBe(true);
+    expect(await dialog.textContent()).toContain(`Remove ${name}?`);
+    // Focus starts on Keep, so Enter does not remove.
+    expect(await page.evaluate(() => document.activeElement?.textContent)).toBe("Keep");
+    expect(await seriousViolations(page)).toEqual([]);
+    await screenshot(page, "confirm-remove-material");
+    await page.keyboard.press("Escape");
+    await poll(() => dialog.count()).toBe(0);
+
+    await removeButton.click();
+    await dialog.getByRole("button", { name: "Keep" }).click();
+    await poll(() => dialog.count()).toBe(0);
+    expect((await api.fetch(`/api/materials/${id}`)).status).toBe(200);
+
+    await removeButton.click();
+    await dialog.getByRole("button", { name: "Remove from the library" }).click();
+    await page.waitForURL(/\/materials$/);
+    await poll(async () => (await api.fetch(`/api/materials/${id}`)).status).toBe(404);
   });
 });
