@@ -4,7 +4,7 @@ import Link from "next/link";
 import { useState } from "react";
 import { DataTable, type ServerColumn } from "@/components/ui/data-table";
 import { ErrorPanel } from "@/components/ui/error-panel";
-import { inputClass } from "@/components/ui/field";
+import { FilterSelect, SearchBox } from "@/components/ui/list-filters";
 import { StateBadge } from "@/components/ui/status";
 import { useServerList } from "@/components/ui/use-server-list";
 import { fmtDateTime } from "@/lib/format";
@@ -65,34 +65,20 @@ export function FormulationList({ releasedOnly = false, caption = "Formulations"
   return (
     <div className="flex flex-col gap-3">
       <div className="flex flex-wrap items-end gap-3">
-        <label className="flex min-w-[14rem] flex-1 flex-col gap-1 text-[13px] font-medium">
-          Search by name or project
-          <input
-            type="search"
-            className={inputClass()}
-            value={q}
-            onChange={(e) => setQ(e.target.value)}
-          />
-        </label>
+        <SearchBox label="Search by name or project" value={q} onChange={setQ} />
         {!releasedOnly ? (
-          <label className="flex flex-col gap-1 text-[13px] font-medium">
-            State
-            <select
-              className={inputClass(false, "min-w-[12rem]")}
-              value={state}
-              onChange={(e) => {
-                setState(e.target.value as RevisionState | "");
-                toFirstPage();
-              }}
-            >
-              <option value="">Any state</option>
-              {REVISION_STATES.map((s) => (
-                <option key={s} value={s}>
-                  {STATE_LABELS[s]}
-                </option>
-              ))}
-            </select>
-          </label>
+          <FilterSelect
+            label="State"
+            value={state}
+            onChange={(v) => {
+              setState(v);
+              toFirstPage();
+            }}
+            anyLabel="Any state"
+            options={REVISION_STATES}
+            words={STATE_LABELS}
+            width="min-w-[12rem]"
+          />
         ) : null}
       </div>
       {error ? <ErrorPanel message={error.message} onRetry={() => mutate()} /> : null}

@@ -6,7 +6,7 @@ import { KIND_WORDS } from "@/components/results/words";
 import { DataTable, type ServerColumn } from "@/components/ui/data-table";
 import { ErrorPanel } from "@/components/ui/error-panel";
 import { HazardCodes, SAFETY_REMINDER } from "@/components/ui/hazards";
-import { inputClass } from "@/components/ui/field";
+import { FilterSelect, SearchBox } from "@/components/ui/list-filters";
 import { useServerList } from "@/components/ui/use-server-list";
 import { MATERIAL_KINDS, type MaterialKind } from "@/lib/formulation/kinds";
 import { fmtDate, fmtDensity, fmtPercent, fmtQuantity, fmtTemp } from "@/lib/format";
@@ -81,33 +81,18 @@ export function MaterialsTable() {
   return (
     <div className="flex flex-col gap-3">
       <div className="flex flex-wrap items-end gap-3">
-        <label className="flex min-w-[14rem] flex-1 flex-col gap-1 text-[13px] font-medium">
-          Search by name or CAS number
-          <input
-            type="search"
-            className={inputClass()}
-            value={q}
-            onChange={(e) => setQ(e.target.value)}
-          />
-        </label>
-        <label className="flex flex-col gap-1 text-[13px] font-medium">
-          Kind
-          <select
-            className={inputClass(false, "min-w-[11rem]")}
-            value={kind}
-            onChange={(e) => {
-              setKind(e.target.value as MaterialKind | "");
-              toFirstPage();
-            }}
-          >
-            <option value="">Any kind</option>
-            {MATERIAL_KINDS.map((k) => (
-              <option key={k} value={k}>
-                {KIND_WORDS[k]}
-              </option>
-            ))}
-          </select>
-        </label>
+        <SearchBox label="Search by name or CAS number" value={q} onChange={setQ} />
+        <FilterSelect
+          label="Kind"
+          value={kind}
+          onChange={(v) => {
+            setKind(v);
+            toFirstPage();
+          }}
+          anyLabel="Any kind"
+          options={MATERIAL_KINDS}
+          words={KIND_WORDS}
+        />
       </div>
       {error ? <ErrorPanel message={error.message} onRetry={() => mutate()} /> : null}
       <DataTable
