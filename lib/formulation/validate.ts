@@ -1,3 +1,4 @@
+import { z } from "zod";
 import { FormulationError, type FieldIssue, type FormulationErrorCode } from "./errors";
 import { formulationInputSchema, type FormulationInput } from "./input-schema";
 import { fieldPath } from "./zod-helpers";
@@ -10,6 +11,22 @@ const CUSTOM_CODES: ReadonlySet<string> = new Set<FormulationErrorCode>([
   "wrong_kind",
   "nothing_to_fill",
 ]);
+
+/** `formulationInputSchema` with zod's compiled fast path, built on first use (see `inputSchema`). */
+let compiledInputSchema: typeof formulationInputSchema | undefined;
+
+/**
+ * `formulationInputSchema` compiled by zod (`z.compile`): a generated
+ * validator of the same schema for the common, valid case, about 3× faster
+ * than zod's interpreter. Input the fast path does not accept is parsed again
+ * by the schema itself, so every issue (path, message, params) is the one of
+ * `formulationInputSchema`. Where code generation is not allowed (a strict
+ * Content-Security-Policy, zod's `jitless` setting), the schema as it is.
+ */
+function inputSchema(): typeof formulationInputSchema {
+  compiledInputSchema ??= z.util.allowsEval.value ? z.compile(formulationInputSchema) : formulationInputSchema;
+  return compiledInputSchema;
+}
 
 function codeOf(issue: { code: string; params?: unknown }): FormulationErrorCode {
   if (issue.code === "custom" && issue.params && typeof issue.params === "object") {
@@ -33,7 +50,7 @@ function codeOf(issue: { code: string; params?: unknown }): FormulationErrorCode
  * ```
  */
 export function parseFormulationInput(raw: unknown): FormulationInput {
-  const parsed = formulationInputSchema.safeParse(raw);
+  const parsed = inputSchema().safeParse(raw);
   if (parsed.success) return parsed.data;
   const issues: FieldIssue[] = parsed.error.issues.map((issue) => ({
     field: fieldPath(issue.path),

@@ -1,0 +1,127 @@
+/**
+ * End to end, in Chromium: the account pages besides sign-in. A newcomer
+ * creates an account and a team of their own; an invited colleague opens the
+ * mailed invitation, creates an account from it and joins with the role
+ * given; a user who forgot the password asks for a link, follows the mailed
+ * link, sets a new password and signs in with it.
+ */
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { openSession, poll, screenshot, seriousViolations, unique, type Session } from "./browser";
+import { BASE, demo, signIn, signUp, type Client } from "./http";
+import { waitForMail } from "./mailbox";
+
+let session: Session;
+let admin: Client;
+
+beforeAll(async () => {
+  admin = await signIn(demo.admin);
+});
+
+afterAll(async () => {
+  await session?.close();
+});
+
+async function freshSession(): Promise<Session> {
+  await session?.close();
+  session = await openSession();
+  return session;
+}
+
+/** The link of a mail that points into the app, or fails the test. */
+function linkIn(text: string): string {
+  const link = text.match(new RegExp(`${BASE.replace(/[.*+?^${}()|[\]\\]/g, "\\$&")}/\\S+`))?.[0];
+  expect(link, text).toBeDefined();
+  return link!;
+}
+
+describe("creating an account", () => {
+  it("refuses two different passwords beside the field, then creates the account and a team of its own", async () => {
+    const { page } = await freshSession();
+    const email = `newcomer-${unique()}@elsewhere.example`;
+    await page.goto("/sign-up");
+    await page.getByLabel("Your name").fill("Nell Newcomer");
+    await page.getByLabel("E-mail address").fill(email);
+    await page.locator("#signup-password").fill("a-long-password-1");
+    await page.locator("#signup-confirm").fill("a-long-password-2");
+    await page.getByRole("button", { name: "Create account" }).click();
+    await poll(() => page.locator("#signup-confirm-error").textContent()).toMatch(/The two passwords differ/);
+    expect(await seriousViolations(page)).toEqual([]);
+
+    await page.locator("#signup-confirm").fill("a-long-password-1");
+    await page.getByRole("button", { name: "Create account" }).click();
+    await page.waitForURL(/\/create-team$/);
+    const team = `Nell's lab ${unique()}`;
+    await page.locator("#team-name").fill(team);
+    await page.getByRole("button", { name: /Create/ }).click();
+    await page.waitForURL(/\/home$/);
+    await poll(() => page.getByText(team).count()).toBeGreaterThan(0);
+    await screenshot(page, "account-new-team");
+
+    // The new team is the account's own: its admin, with a library of its own.
+    const api = await signIn(email, "a-long-password-1");
+    const me = (await (await api.fetch("/api/members")).json()) as { rows: { email: string; role: string }[] };
+    expect(me.rows).toEqual([expect.objectContaining({ email, role: "admin" })]);
+  });
+});
+
+describe("accepting an invitation", () => {
+  it("takes an invited colleague from the mailed link through a new account into the team with the given role", async () => {
+    const email = `invited-${unique()}@larkspur.example`;
+    const invite = await admin.fetch("/api/invitations", { method: "POST", json: { email, role: "production" } });
+    expect(invite.status).toBe(201);
+    const mail = await waitForMail(email, /invited/i);
+    const link = linkIn(mail.text);
+    expect(link).toMatch(/\/invitations\/[^/\s]+$/);
+
+    const { page } = await freshSession();
+    await page.goto(link);
+    await page.getByRole("link", { name: "Create an account" }).click();
+    await page.waitForURL(/\/sign-up\?next=/);
+    await page.getByLabel("Your name").fill("Ivo Invited");
+    await page.getByLabel("E-mail address").fill(email);
+    await page.locator("#signup-password").fill("an-invited-password");
+    await page.locator("#signup-confirm").fill("an-invited-password");
+    await page.getByRole("button", { name: "Create account" }).click();
+    await page.waitForURL(/\/invitations\//);
+    await page.getByRole("button", { name: "Accept and join" }).click();
+    await page.waitForURL(/\/home$/);
+    await poll(() => page.getByText("Larkspur Coatings Lab").count()).toBeGreaterThan(0);
+
+    const members = (await (await admin.fetch("/api/members")).json()) as { rows: { email: string; role: string }[] };
+    expect(members.rows).toContainEqual(expect.objectContaining({ email, role: "production" }));
+  });
+});
+
+describe("a forgotten password", () => {
+  it("mails a link, sets the new password from it, and signs in with the new one only", async () => {
+    const email = `forgetful-${unique()}@elsewhere.example`;
+    await signUp(email, "Fay Forgetful", "the-old-password-1");
+
+    const { page } = await freshSession();
+    await page.goto("/forgot-password");
+    await page.getByLabel("E-mail address").fill(email);
+    await page.getByRole("button", { name: "Send the link" }).click();
+    await poll(() => page.getByText(/a link is on its way/).count()).toBe(1);
+    const mail = await waitForMail(email, /reset/i);
+
+    await page.goto(linkIn(mail.text));
+    await page.waitForURL(/\/reset-password\?token=/);
+    await page.locator("#new-password").fill("the-new-password-2");
+    await page.locator("#new-password-again").fill("the-new-password-2");
+    await page.getByRole("button", { name: "Set the new password" }).click();
+    await page.waitForURL(/\/sign-in\?reset=done$/);
+    expect(await seriousViolations(page)).toEqual([]);
+
+    await poll(() => page.getByText("Your password has been changed. Sign in with the new one.").count()).toBe(1);
+    await page.getByLabel("E-mail address").fill(email);
+    await page.getByLabel("Password", { exact: true }).fill("the-new-password-2");
+    await page.getByRole("button", { name: "Sign in" }).click();
+    // Without a team yet, signing in leads on to creating one.
+    await page.waitForURL(/\/create-team$/);
+    await expect(signIn(email, "the-old-password-1")).rejects.toThrow(/401/);
+
+    // The link works once.
+    await page.goto(linkIn(mail.text));
+    await poll(() => page.getByText("This link does not work").count()).toBe(1);
+  });
+});
