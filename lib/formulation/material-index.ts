@@ -43,6 +43,23 @@ export function materialById(byId: Map<string, IndexedMaterial>, id: string, fie
 }
 
 /**
+ * Density as supplied, g/cm³, as a plain number (e.g. for `divideBy`);
+ * throws "missing_density" on materials.N.density.
+ *
+ * @example
+ * ```ts
+ * requireDensityValue(teos); // 0.933
+ * ```
+ */
+export function requireDensityValue(entry: IndexedMaterial): number {
+  const { density, name } = entry.material;
+  if (density === undefined) {
+    throw new FormulationError("missing_density", `${entry.path}.density`, `${name} has no density; it is needed to give a volume`);
+  }
+  return density;
+}
+
+/**
  * Density as supplied, g/cm³; throws "missing_density" on materials.N.density.
  *
  * @example
@@ -51,11 +68,7 @@ export function materialById(byId: Map<string, IndexedMaterial>, id: string, fie
  * ```
  */
 export function requireDensity(entry: IndexedMaterial): Dec {
-  const { density, name } = entry.material;
-  if (density === undefined) {
-    throw new FormulationError("missing_density", `${entry.path}.density`, `${name} has no density; it is needed to give a volume`);
-  }
-  return dec(density);
+  return dec(requireDensityValue(entry));
 }
 
 /**

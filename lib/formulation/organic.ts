@@ -1,6 +1,7 @@
-import { Dec, dec, divideUnlessOne, timesFactor, WATER_MOLAR_MASS, ZERO } from "./decimal";
+import { WATER_MOLAR_MASS_G_PER_MOL } from "./constants";
+import { Dec, dec, divideBy, divideUnlessOne, timesFactor, ZERO } from "./decimal";
 import { FormulationError } from "./errors";
-import { requireDensity, type IndexedMaterial } from "./material-index";
+import { requireDensity, requireDensityValue, type IndexedMaterial } from "./material-index";
 
 /** Amounts for one organic phase in the batch (decimal; units in field names). */
 export interface OrganicAmounts {
@@ -61,13 +62,15 @@ export function organicAmounts(entry: IndexedMaterial, weightFraction: Dec, soli
   const material = entry.material;
   const residueGrams = weightFraction.times(solidMass);
   const massGrams = divideUnlessOne(residueGrams, material.assay);
-  const density = requireDensity(entry);
+  const density = requireDensityValue(entry);
   return {
     residueGrams,
-    moles: material.molarMass === undefined ? undefined : residueGrams.div(dec(material.molarMass)),
+    moles: material.molarMass === undefined ? undefined : divideBy(residueGrams, material.molarMass),
     massGrams,
-    volumeMl: massGrams.div(density),
-    carriedWaterMol: material.waterFraction ? massGrams.times(dec(material.waterFraction)).div(WATER_MOLAR_MASS) : ZERO,
+    volumeMl: divideBy(massGrams, density),
+    carriedWaterMol: material.waterFraction
+      ? divideBy(massGrams.times(dec(material.waterFraction)), WATER_MOLAR_MASS_G_PER_MOL)
+      : ZERO,
     carriedSolventGrams: timesFactor(massGrams, material.solventFraction),
     phaseDensity: organicPhaseDensity(entry),
   };
