@@ -2,12 +2,12 @@ import { DEFAULT_THERMAL_MARGIN_C, ENGINE_VERSION, ML_PER_L, WATER_MOLAR_MASS_G_
 import { basisNotices } from "./basis-notices";
 import { solidMassFromBasis } from "./basis";
 import { compositeFigures, type BulkDensity, type PhaseInput } from "./composite";
-import { type Dec, dec, divideBy, toNumber, ZERO } from "./decimal";
+import { type Dec, dec, toNumber, WATER_MOLAR_MASS, ZERO } from "./decimal";
 import { dosePerNetworkAtom } from "./dosing";
 import { FormulationError } from "./errors";
 import type { FormulationInput } from "./input-schema";
 import { orderLines } from "./line-order";
-import { indexMaterials, materialById, requireDensityValue, waterFractionOf, type IndexedMaterial } from "./material-index";
+import { indexMaterials, materialById, requireDensity, waterFractionOf, type IndexedMaterial } from "./material-index";
 import type { Material } from "./material-schema";
 import { organicAmounts } from "./organic";
 import { precursorAmounts, requirePrecursorData } from "./precursor";
@@ -239,7 +239,7 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
       water: waterEntry,
     });
     const solventMaterial = solventEntry.material;
-    const solventCarried = divideBy(fill.solventGrams.times(waterFractionOf(solventMaterial)), WATER_MOLAR_MASS_G_PER_MOL);
+    const solventCarried = fill.solventGrams.times(waterFractionOf(solventMaterial)).div(WATER_MOLAR_MASS);
     if (fill.solventGrams.greaterThan(0)) {
       addLine({
         materialId: solventMaterial.id,
@@ -247,9 +247,9 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
         moles:
           solventMaterial.molarMass === undefined
             ? undefined
-            : divideBy(fill.solventGrams.times(dec(solventMaterial.assay ?? 1)), solventMaterial.molarMass),
+            : fill.solventGrams.times(dec(solventMaterial.assay ?? 1)).div(dec(solventMaterial.molarMass)),
         massGrams: fill.solventGrams,
-        volumeMl: divideBy(fill.solventGrams, requireDensityValue(solventEntry)),
+        volumeMl: fill.solventGrams.div(requireDensity(solventEntry)),
         carriedWaterMol: solventCarried,
         carriedSolventGrams: ZERO,
       });
@@ -264,7 +264,7 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
   let addMl = ZERO;
   if (addMol.greaterThan(0)) {
     addGrams = addMol.times(waterMolarMass);
-    addMl = divideBy(addGrams, requireDensityValue(waterEntry));
+    addMl = addGrams.div(requireDensity(waterEntry));
     addLine({ materialId: waterEntry.material.id, role: "water", moles: addMol, massGrams: addGrams, volumeMl: addMl });
   }
   const totalWaterMol = carriedWaterMol.plus(addMol);

@@ -1,4 +1,5 @@
 import Decimal from "decimal.js";
+import { WATER_MOLAR_MASS_G_PER_MOL } from "./constants";
 
 /**
  * The decimal constructor used by every engine computation: 20 significant
@@ -40,62 +41,16 @@ export function dec(value: number): Dec {
   return cached;
 }
 
-/** A divisor as used by `divideBy`: the divisor itself, or a one-word multiple of it and the power of ten between them. */
-interface Divisor {
-  /** The divisor × 10^k, an integer below 1e7 when `power` is set. */
-  readonly scaled: Dec;
-  /** 10^k, when the divisor was scaled. */
-  readonly power?: Dec;
-}
-
-/** Largest number of divisors kept by `divideBy` before the cache is emptied. */
-const DIVISOR_CACHE_LIMIT = 10_000;
-const divisorCache = new Map<number, Divisor>();
-
-/** A divisor of at most 7 significant digits that spans two digit words (e.g. 2.2 or 60.083), scaled to one word. */
-function makeDivisor(divisor: number): Divisor {
-  const exact = dec(divisor);
-  const words = exact.d as readonly number[] | null;
-  if (!words || words.length < 2) return { scaled: exact };
-  const digits = exact.sd();
-  if (digits > 7) return { scaled: exact };
-  // exact × 10^k is an integer of `digits` digits, below 1e7: one digit word
-  const power = new Dec(`1e${digits - 1 - exact.e}`);
-  const scaled = exact.times(power);
-  return (scaled.d as readonly number[]).length === 1 ? { scaled, power } : { scaled: exact };
-}
-
-/**
- * value ÷ divisor (divisor as a plain number, e.g. a density or molar mass),
- * with exactly the result of `value.div(dec(divisor))`, but faster when the
- * divisor has both integer and fraction digits (2.2, 60.083, 18.015):
- * decimal.js stores such a number in two digit words (base 1e7) and divides
- * by it with long division, while a divisor of one word takes a short loop.
- * So the value is divided by divisor × 10^k (e.g. 22, 60083, 18015; one
- * word) and the quotient multiplied by 10^k. Both steps are exact up to the
- * final rounding to 20 significant digits, which is the same in both
- * (rounding to significant digits does not depend on a power-of-ten scale,
- * and the multiplication by 10^k only moves the decimal point).
- *
- * @example
- * ```ts
- * divideBy(new Dec(1), 2.2).toString(); // "0.45454545454545454545", as new Dec(1).div(2.2)
- * ```
- */
-export function divideBy(value: Dec, divisor: number): Dec {
-  let entry = divisorCache.get(divisor);
-  if (entry === undefined) {
-    if (divisorCache.size >= DIVISOR_CACHE_LIMIT) divisorCache.clear();
-    entry = makeDivisor(divisor);
-    divisorCache.set(divisor, entry);
-  }
-  return entry.power === undefined ? value.div(entry.scaled) : value.div(entry.scaled).times(entry.power);
-}
-
 /** Decimal zero (dimensionless). */
 export const ZERO: Dec = new Dec(0);
 /** Decimal one (dimensionless). */
 export const ONE: Dec = new Dec(1);
+
+/**
+ * Molar mass of water as a decimal, g/mol (see WATER_MOLAR_MASS_G_PER_MOL in
+ * constants.ts: IUPAC/CIAAW 2021 abridged atomic weights, 2 × 1.008 + 15.999).
+ */
+export const WATER_MOLAR_MASS: Dec = new Dec(WATER_MOLAR_MASS_G_PER_MOL);
 
 /**
  * value × factor, skipping the multiplication when the factor is 1 and
@@ -122,7 +77,7 @@ export function timesFactor(value: Dec, factor: number | undefined): Dec {
  * ```
  */
 export function divideUnlessOne(value: Dec, divisor: number | undefined): Dec {
-  return divisor === undefined || divisor === 1 ? value : divideBy(value, divisor);
+  return divisor === undefined || divisor === 1 ? value : value.div(dec(divisor));
 }
 
 /**

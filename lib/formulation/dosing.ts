@@ -1,6 +1,5 @@
-import { WATER_MOLAR_MASS_G_PER_MOL } from "./constants";
-import { Dec, dec, divideBy, divideUnlessOne, timesFactor, ZERO } from "./decimal";
-import { requireDensityValue, requireMolarMass, type IndexedMaterial } from "./material-index";
+import { Dec, dec, divideUnlessOne, timesFactor, WATER_MOLAR_MASS, ZERO } from "./decimal";
+import { requireDensity, requireMolarMass, type IndexedMaterial } from "./material-index";
 
 /** A reagent dosed per mol of network-forming atoms (decimal; units in field names). */
 export interface DosedAmounts {
@@ -39,10 +38,8 @@ export function dosePerNetworkAtom(entry: IndexedMaterial, ratio: Dec, networkAt
   return {
     moles,
     massGrams,
-    volumeMl: divideBy(massGrams, requireDensityValue(entry)),
-    carriedWaterMol: material.waterFraction
-      ? divideBy(massGrams.times(dec(material.waterFraction)), WATER_MOLAR_MASS_G_PER_MOL)
-      : ZERO,
+    volumeMl: massGrams.div(requireDensity(entry)),
+    carriedWaterMol: material.waterFraction ? massGrams.times(dec(material.waterFraction)).div(WATER_MOLAR_MASS) : ZERO,
     carriedSolventGrams: timesFactor(massGrams, material.solventFraction),
   };
 }

@@ -43,23 +43,6 @@ export function materialById(byId: Map<string, IndexedMaterial>, id: string, fie
 }
 
 /**
- * Density as supplied, g/cm³, as a plain number (e.g. for `divideBy`);
- * throws "missing_density" on materials.N.density.
- *
- * @example
- * ```ts
- * requireDensityValue(teos); // 0.933
- * ```
- */
-export function requireDensityValue(entry: IndexedMaterial): number {
-  const { density, name } = entry.material;
-  if (density === undefined) {
-    throw new FormulationError("missing_density", `${entry.path}.density`, `${name} has no density; it is needed to give a volume`);
-  }
-  return density;
-}
-
-/**
  * Density as supplied, g/cm³; throws "missing_density" on materials.N.density.
  *
  * @example
@@ -68,7 +51,11 @@ export function requireDensityValue(entry: IndexedMaterial): number {
  * ```
  */
 export function requireDensity(entry: IndexedMaterial): Dec {
-  return dec(requireDensityValue(entry));
+  const { density, name } = entry.material;
+  if (density === undefined) {
+    throw new FormulationError("missing_density", `${entry.path}.density`, `${name} has no density; it is needed to give a volume`);
+  }
+  return dec(density);
 }
 
 /**

@@ -30,23 +30,6 @@ const CAS_NUMBER = /^\d{2,7}-\d{2}-\d$/;
  * ```
  */
 export function casCheckDigitValid(cas: string): boolean {
-  // Common case, digits and hyphens only: one pass from the right, no strings built.
-  let check = -1;
-  let position = 0;
-  let weighted = 0;
-  for (let i = cas.length - 1; i >= 0; i -= 1) {
-    const code = cas.charCodeAt(i);
-    if (code === 45) continue; // "-"
-    const digit = code - 48;
-    if (digit < 0 || digit > 9) return casCheckDigitValidSlow(cas);
-    if (check < 0) check = digit;
-    else weighted += digit * ++position;
-  }
-  return check < 0 ? casCheckDigitValidSlow(cas) : weighted % 10 === check;
-}
-
-/** casCheckDigitValid for any other text (each character read as `Number` reads it). */
-function casCheckDigitValidSlow(cas: string): boolean {
   const digits = cas.replace(/-/g, "");
   const check = Number(digits.slice(-1));
   const body = digits.slice(0, -1);

@@ -1,7 +1,6 @@
-import { WATER_MOLAR_MASS_G_PER_MOL } from "./constants";
-import { Dec, dec, divideBy, divideUnlessOne, timesFactor, ZERO } from "./decimal";
+import { Dec, dec, divideUnlessOne, timesFactor, WATER_MOLAR_MASS, ZERO } from "./decimal";
 import { FormulationError } from "./errors";
-import { requireDensity, requireDensityValue, type IndexedMaterial } from "./material-index";
+import { requireDensity, type IndexedMaterial } from "./material-index";
 
 /** Amounts for one organic phase in the batch (decimal; units in field names). */
 export interface OrganicAmounts {
@@ -62,15 +61,13 @@ export function organicAmounts(entry: IndexedMaterial, weightFraction: Dec, soli
   const material = entry.material;
   const residueGrams = weightFraction.times(solidMass);
   const massGrams = divideUnlessOne(residueGrams, material.assay);
-  const density = requireDensityValue(entry);
+  const density = requireDensity(entry);
   return {
     residueGrams,
-    moles: material.molarMass === undefined ? undefined : divideBy(residueGrams, material.molarMass),
+    moles: material.molarMass === undefined ? undefined : residueGrams.div(dec(material.molarMass)),
     massGrams,
-    volumeMl: divideBy(massGrams, density),
-    carriedWaterMol: material.waterFraction
-      ? divideBy(massGrams.times(dec(material.waterFraction)), WATER_MOLAR_MASS_G_PER_MOL)
-      : ZERO,
+    volumeMl: massGrams.div(density),
+    carriedWaterMol: material.waterFraction ? massGrams.times(dec(material.waterFraction)).div(WATER_MOLAR_MASS) : ZERO,
     carriedSolventGrams: timesFactor(massGrams, material.solventFraction),
     phaseDensity: organicPhaseDensity(entry),
   };

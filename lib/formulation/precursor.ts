@@ -1,7 +1,6 @@
-import { WATER_MOLAR_MASS_G_PER_MOL } from "./constants";
-import { Dec, dec, divideBy, divideUnlessOne, timesFactor, ZERO } from "./decimal";
+import { Dec, dec, divideUnlessOne, timesFactor, WATER_MOLAR_MASS, ZERO } from "./decimal";
 import { FormulationError } from "./errors";
-import { requireDensityValue, requireMolarMass, type IndexedMaterial } from "./material-index";
+import { requireDensity, requireMolarMass, type IndexedMaterial } from "./material-index";
 import type { Material, PrecursorData } from "./material-schema";
 
 /** Amounts for one precursor in the batch (decimal; units in field names). */
@@ -65,23 +64,22 @@ export function precursorAmounts(entry: IndexedMaterial, weightFraction: Dec, so
   const data = requirePrecursorData(entry);
   const material = entry.material;
   const molarMass = requireMolarMass(entry);
-  const density = requireDensityValue(entry);
+  const density = requireDensity(entry);
   const residueGrams = weightFraction.times(solidMass);
-  const moles =
-    data.residuePerMolecule === 1
-      ? divideBy(residueGrams, data.residueMolarMass)
-      : residueGrams.div(dec(data.residuePerMolecule).times(dec(data.residueMolarMass)));
+  const residuePerMoleculeMass =
+    data.residuePerMolecule === 1 ? dec(data.residueMolarMass) : dec(data.residuePerMolecule).times(dec(data.residueMolarMass));
+  const moles = residueGrams.div(residuePerMoleculeMass);
   const massGrams = divideUnlessOne(moles.times(molarMass), material.assay);
   const hydrolysableGroupMol = timesFactor(moles, data.hydrolysableGroupsPerMolecule);
   const solutionWaterMol = material.waterFraction
-    ? divideBy(massGrams.times(dec(material.waterFraction)), WATER_MOLAR_MASS_G_PER_MOL)
+    ? massGrams.times(dec(material.waterFraction)).div(WATER_MOLAR_MASS)
     : ZERO;
   const crystalWaterMol = timesFactor(moles, material.crystalWaterPerFormula);
   return {
     residueGrams,
     moles,
     massGrams,
-    volumeMl: divideBy(massGrams, density),
+    volumeMl: massGrams.div(density),
     networkAtomMol: timesFactor(moles, data.networkAtomsPerMolecule),
     hydrolysableGroupMol,
     carriedWaterMol: crystalWaterMol.isZero() ? solutionWaterMol : solutionWaterMol.plus(crystalWaterMol),

@@ -1,7 +1,7 @@
 import { WATER_MOLAR_MASS_G_PER_MOL } from "./constants";
-import { type Dec, dec, divideBy, ONE, ZERO } from "./decimal";
+import { type Dec, dec, ONE, WATER_MOLAR_MASS, ZERO } from "./decimal";
 import { FormulationError } from "./errors";
-import { requireDensityValue, waterFractionOf, type IndexedMaterial } from "./material-index";
+import { requireDensity, waterFractionOf, type IndexedMaterial } from "./material-index";
 
 /** What a fill makes the sol up to. */
 export interface FillTarget {
@@ -49,13 +49,13 @@ export function solveFill(p: {
   const isVolume = p.target.kind === "volume";
   const needMol = p.waterNeededMol.greaterThan(0) ? p.waterNeededMol : ZERO;
   const waterMolarMass = dec(p.water.material.molarMass ?? WATER_MOLAR_MASS_G_PER_MOL);
-  const solventCost = isVolume ? divideBy(ONE, requireDensityValue(p.solvent)) : ONE;
+  const solventCost = isVolume ? ONE.div(requireDensity(p.solvent)) : ONE;
   const waterCost = needMol.isZero()
     ? ZERO
     : isVolume
-      ? divideBy(waterMolarMass, requireDensityValue(p.water))
+      ? waterMolarMass.div(requireDensity(p.water))
       : waterMolarMass;
-  const carriedPerGram = divideBy(waterFractionOf(p.solvent.material), WATER_MOLAR_MASS_G_PER_MOL);
+  const carriedPerGram = waterFractionOf(p.solvent.material).div(WATER_MOLAR_MASS);
   const available = p.target.amount.minus(isVolume ? p.otherMl : p.otherGrams);
   const reagentsAlone = p.target.amount.minus(available).plus(needMol.times(waterCost));
 
