@@ -120,7 +120,7 @@ if (workerData.warm) {
   const book = XLSX.utils.book_new();
   XLSX.utils.book_append_sheet(book, XLSX.utils.aoa_to_sheet(aoa), "Warm-up");
   const bytes = XLSX.write(book, { type: "buffer", bookType: "xlsx" });
-  const limits = { maxRows: 5000, maxColumns: 60, maxSheets: 20, maxCellChars: 2000 };
+  const limits = workerData.limits;
   for (let i = 0; i < 3; i++) read({ bytes, wanted: ["Warm-up"], firstSheetFallback: true, limits });
   parentPort.once("message", handle);
   parentPort.postMessage({ ready: true });
@@ -132,11 +132,18 @@ if (workerData.warm) {
 interface WorkerData {
   moduleRoot: string;
   warm: boolean;
+  /** The limits a spare reads its warm-up workbook with. */
+  limits?: WorkerRequest["limits"];
   request?: WorkerRequest;
 }
 
 const RESOURCE_LIMITS = { maxOldGenerationSizeMb: 256, maxYoungGenerationSizeMb: 32, stackSizeMb: 4 };
 const defaultModuleRoot = () => join(process.cwd(), "package.json");
+
+/** The limits the worker applies (the time limit is the parent's). */
+function workerLimits(limits: ImportLimits): WorkerRequest["limits"] {
+  return { maxRows: limits.maxRows, maxColumns: limits.maxColumns, maxSheets: limits.maxSheets, maxCellChars: limits.maxCellChars };
+}
 
 /** How many warmed workers wait for the next upload (GELWRIGHT_IMPORT_SPARE_WORKERS, default 1; 0 turns it off). */
 function spareTarget(): number {
@@ -155,7 +162,7 @@ const spares: Spare[] = [];
 /** Starts warming spare workers until there are spareTarget() of them. They never keep the process alive. */
 function refillSpares(): void {
   while (spares.length < spareTarget()) {
-    const data: WorkerData = { moduleRoot: defaultModuleRoot(), warm: true };
+    const data: WorkerData = { moduleRoot: defaultModuleRoot(), warm: true, limits: workerLimits(IMPORT_LIMITS) };
     const worker = new Worker(WORKER_SOURCE, { eval: true, workerData: data, resourceLimits: RESOURCE_LIMITS });
     worker.unref();
     let settle = () => {};
@@ -227,7 +234,7 @@ export function readWorkbookInWorker(
     bytes,
     wanted: [...wanted],
     firstSheetFallback: opts.firstSheetFallback ?? false,
-    limits: { maxRows: limits.maxRows, maxColumns: limits.maxColumns, maxSheets: limits.maxSheets, maxCellChars: limits.maxCellChars },
+    limits: workerLimits(limits),
     moduleRoot: opts.moduleRoot ?? defaultModuleRoot(),
   };
   return new Promise<WorkbookRead>((resolve, reject) => {
