@@ -17,6 +17,25 @@ export class ApiRequestError extends Error {
   }
 }
 
+/**
+ * The ApiRequestError for a failed answer: the server's { error } body when
+ * there is one, otherwise a plain message for the status.
+ */
+export function apiErrorFrom(status: number, body: unknown): ApiRequestError {
+  const err = (body as { error?: { code?: string; message?: string; fields?: Record<string, string> } } | null)?.error;
+  const fallback =
+    status === 401
+      ? "Your session has ended. Sign in again."
+      : status === 403
+        ? "Your role in this team does not allow this."
+        : status === 404
+          ? "Not found."
+          : status === 413
+            ? "The file is too large."
+            : `The server answered ${status}.`;
+  return new ApiRequestError(status, err?.code ?? `http_${status}`, err?.message ?? fallback, err?.fields ?? {});
+}
+
 async function toError(res: Response): Promise<ApiRequestError> {
   let body: unknown = null;
   try {
@@ -24,16 +43,7 @@ async function toError(res: Response): Promise<ApiRequestError> {
   } catch {
     // Not JSON (a proxy error page, say): fall through to a generic message.
   }
-  const err = (body as { error?: { code?: string; message?: string; fields?: Record<string, string> } } | null)?.error;
-  const fallback =
-    res.status === 401
-      ? "Your session has ended. Sign in again."
-      : res.status === 403
-        ? "Your role in this team does not allow this."
-        : res.status === 404
-          ? "Not found."
-          : `The server answered ${res.status}.`;
-  return new ApiRequestError(res.status, err?.code ?? `http_${res.status}`, err?.message ?? fallback, err?.fields ?? {});
+  return apiErrorFrom(res.status, body);
 }
 
 /** SWR fetcher: GET a JSON resource, throwing ApiRequestError on failure. */

@@ -1,8 +1,7 @@
 "use client";
 
-import Link from "next/link";
 import { useState } from "react";
-import { DataTable, type ServerColumn } from "@/components/ui/data-table";
+import { DataTable, nameLinkColumn, type ServerColumn } from "@/components/ui/data-table";
 import { ErrorPanel } from "@/components/ui/error-panel";
 import { FilterSelect, SearchBox } from "@/components/ui/list-filters";
 import { StateBadge } from "@/components/ui/status";
@@ -21,17 +20,7 @@ export interface FormulationRow {
 }
 
 const columns: ServerColumn<FormulationRow>[] = [
-  {
-    id: "name",
-    accessorKey: "name",
-    header: "Name",
-    enableHiding: false,
-    cell: ({ row }) => (
-      <Link href={`/formulations/${row.original.id}`} className="font-medium text-ink underline-offset-2 hover:text-accent hover:underline">
-        {row.original.name}
-      </Link>
-    ),
-  },
+  nameLinkColumn((row) => `/formulations/${row.id}`),
   { id: "project", accessorKey: "project", header: "Project", cell: ({ row }) => row.original.project ?? <span className="text-muted">none</span> },
   { id: "state", accessorKey: "latestState", header: "State", cell: ({ row }) => <StateBadge state={row.original.latestState} /> },
   {

@@ -1,9 +1,8 @@
 "use client";
 
-import Link from "next/link";
 import { useState } from "react";
 import { KIND_WORDS } from "@/components/results/words";
-import { DataTable, type ServerColumn } from "@/components/ui/data-table";
+import { DataTable, nameLinkColumn, type ServerColumn } from "@/components/ui/data-table";
 import { ErrorPanel } from "@/components/ui/error-panel";
 import { HazardCodes, SAFETY_REMINDER } from "@/components/ui/hazards";
 import { FilterSelect, SearchBox } from "@/components/ui/list-filters";
@@ -33,17 +32,7 @@ function keyProperty(m: LibraryMaterial): string {
 }
 
 const columns: ServerColumn<LibraryMaterial>[] = [
-  {
-    id: "name",
-    accessorKey: "name",
-    header: "Name",
-    enableHiding: false,
-    cell: ({ row }) => (
-      <Link href={`/materials/${row.original.id}`} className="font-medium text-ink underline-offset-2 hover:text-accent hover:underline">
-        {row.original.name}
-      </Link>
-    ),
-  },
+  nameLinkColumn((row) => `/materials/${row.id}`),
   { id: "kind", accessorKey: "kind", header: "Kind", cell: ({ row }) => KIND_WORDS[row.original.kind] },
   { id: "formula", accessorKey: "formula", header: "Formula", enableSorting: false, cell: ({ row }) => <span className="font-mono text-xs">{row.original.formula ?? "–"}</span> },
   {

@@ -12,6 +12,7 @@ import {
   type RowData,
   type SortingState,
 } from "@tanstack/react-table";
+import Link from "next/link";
 import { useId, useState, type ReactNode } from "react";
 import { Button } from "./button";
 import { TableSkeleton } from "./skeleton";
@@ -20,6 +21,21 @@ import { TableSkeleton } from "./skeleton";
 export const serverTableFeatures = tableFeatures({ rowSortingFeature, rowPaginationFeature, columnVisibilityFeature });
 export type ServerTableFeatures = typeof serverTableFeatures;
 export type ServerColumn<T extends RowData> = ColumnDef<ServerTableFeatures, T>;
+
+/** The always-shown "Name" column of a list, linking each row to its own page. */
+export function nameLinkColumn<T extends { id: string; name: string }>(hrefOf: (row: T) => string): ServerColumn<T> {
+  return {
+    id: "name",
+    accessorKey: "name",
+    header: "Name",
+    enableHiding: false,
+    cell: ({ row }) => (
+      <Link href={hrefOf(row.original)} className="font-medium text-ink underline-offset-2 hover:text-accent hover:underline">
+        {row.original.name}
+      </Link>
+    ),
+  };
+}
 
 interface DataTableProps<T extends RowData> {
   caption: string;

@@ -1,6 +1,6 @@
 "use client";
 
-import { ApiRequestError } from "@/lib/fetcher";
+import { ApiRequestError, apiErrorFrom } from "@/lib/fetcher";
 
 /** Progress of an upload: bytes sent so far of the total (total 0 when unknown). */
 export interface UploadProgress {
@@ -34,16 +34,7 @@ export function uploadWithProgress<T>(url: string, form: FormData, onProgress: (
         resolve(body as T);
         return;
       }
-      const err = (body as { error?: { code?: string; message?: string; fields?: Record<string, string> } } | null)?.error;
-      const fallback =
-        xhr.status === 413
-          ? "The file is too large."
-          : xhr.status === 401
-            ? "Your session has ended. Sign in again."
-            : xhr.status === 403
-              ? "Your role in this team does not allow this."
-              : `The server answered ${xhr.status}.`;
-      reject(new ApiRequestError(xhr.status, err?.code ?? `http_${xhr.status}`, err?.message ?? fallback, err?.fields ?? {}));
+      reject(apiErrorFrom(xhr.status, body));
     };
     xhr.send(form);
   });

@@ -2,6 +2,7 @@ import { describe, expect, it } from "vitest";
 import { z } from "zod";
 import { ApiError, errorResponse, isDbUnavailable } from "@/lib/api";
 import { computeFormulation } from "@/lib/formulation";
+import { ApiRequestError, apiErrorFrom } from "@/lib/fetcher";
 
 // The error shape and status codes are the product's own API contract (DEVELOPERS.md); no external source.
 describe("errorResponse", () => {
@@ -44,5 +45,21 @@ describe("errorResponse", () => {
       }
       expect(isDbUnavailable(new Error("Duplicate entry"))).toBe(false);
     });
+  });
+});
+
+// The client side of the same contract: what the pages show for a failed answer.
+describe("apiErrorFrom", () => {
+  it("keeps the server's code, message and fields", () => {
+    const err = apiErrorFrom(422, { error: { code: "invalid_input", message: "name: required", fields: { name: "required" } } });
+    expect(err).toBeInstanceOf(ApiRequestError);
+    expect([err.status, err.code, err.message, err.fields]).toEqual([422, "invalid_input", "name: required", { name: "required" }]);
+  });
+
+  it("says something plain when the answer has no error body (a proxy page, say)", () => {
+    expect(apiErrorFrom(401, null).message).toBe("Your session has ended. Sign in again.");
+    expect(apiErrorFrom(413, "<html>").message).toBe("The file is too large.");
+    const other = apiErrorFrom(502, null);
+    expect([other.code, other.message, other.fields]).toEqual(["http_502", "The server answered 502.", {}]);
   });
 });
