@@ -1,10 +1,10 @@
 "use client";
 
 import { useState } from "react";
-import { DataTable, nameLinkColumn, type ServerColumn } from "@/components/ui/data-table";
-import { ErrorPanel } from "@/components/ui/error-panel";
+import { nameLinkColumn, type ServerColumn } from "@/components/ui/data-table";
 import { FilterSelect, SearchBox } from "@/components/ui/list-filters";
 import { StateBadge } from "@/components/ui/status";
+import { ServerListTable } from "@/components/ui/server-list-table";
 import { useServerList } from "@/components/ui/use-server-list";
 import { fmtDateTime } from "@/lib/format";
 import { STATE_LABELS, type RevisionState } from "@/lib/workflow";
@@ -48,20 +48,19 @@ interface FormulationListProps {
 /** The team's formulations: search, filter by state, sort and page, all on the server. */
 export function FormulationList({ releasedOnly = false, caption = "Formulations" }: FormulationListProps) {
   const [state, setState] = useState<RevisionState | "">("");
-  const { q, setQ, sorting, setSorting, pagination, setPagination, toFirstPage, data, error, isLoading, mutate } =
-    useServerList<FormulationRow>("/api/formulations", { state: state || undefined }, [{ id: "updatedAt", desc: true }]);
+  const list = useServerList<FormulationRow>("/api/formulations", { state: state || undefined }, [{ id: "updatedAt", desc: true }]);
 
   return (
     <div className="flex flex-col gap-3">
       <div className="flex flex-wrap items-end gap-3">
-        <SearchBox label="Search by name or project" value={q} onChange={setQ} />
+        <SearchBox label="Search by name or project" value={list.q} onChange={list.setQ} />
         {!releasedOnly ? (
           <FilterSelect
             label="State"
             value={state}
             onChange={(v) => {
               setState(v);
-              toFirstPage();
+              list.toFirstPage();
             }}
             anyLabel="Any state"
             options={REVISION_STATES}
@@ -70,22 +69,13 @@ export function FormulationList({ releasedOnly = false, caption = "Formulations"
           />
         ) : null}
       </div>
-      {error ? <ErrorPanel message={error.message} onRetry={() => mutate()} /> : null}
-      <DataTable
+      <ServerListTable
+        list={list}
         caption={caption}
         columns={columns}
-        rows={data?.rows ?? EMPTY}
-        total={data?.total ?? 0}
-        sorting={sorting}
-        onSortingChange={setSorting}
-        pagination={pagination}
-        onPaginationChange={setPagination}
-        loading={isLoading}
-        getRowId={(r) => r.id}
-        empty={q || state ? "No formulation matches." : "No formulations yet."}
+        empty={list.q || state ? "No formulation matches." : "No formulations yet."}
       />
     </div>
   );
 }
 
-const EMPTY: FormulationRow[] = [];

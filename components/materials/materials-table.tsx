@@ -2,10 +2,10 @@
 
 import { useState } from "react";
 import { KIND_WORDS } from "@/components/results/words";
-import { DataTable, nameLinkColumn, type ServerColumn } from "@/components/ui/data-table";
-import { ErrorPanel } from "@/components/ui/error-panel";
+import { nameLinkColumn, type ServerColumn } from "@/components/ui/data-table";
 import { HazardCodes, SAFETY_REMINDER } from "@/components/ui/hazards";
 import { FilterSelect, SearchBox } from "@/components/ui/list-filters";
+import { ServerListTable } from "@/components/ui/server-list-table";
 import { useServerList } from "@/components/ui/use-server-list";
 import { MATERIAL_KINDS, type MaterialKind } from "@/lib/formulation/kinds";
 import { fmtDate, fmtDensity, fmtPercent, fmtQuantity, fmtTemp } from "@/lib/format";
@@ -60,43 +60,32 @@ const columns: ServerColumn<LibraryMaterial>[] = [
   },
 ];
 
-const EMPTY: LibraryMaterial[] = [];
-
 /** The team's materials library: search, filter by kind, sort, page and choose columns (all done by the API). */
 export function MaterialsTable() {
   const [kind, setKind] = useState<MaterialKind | "">("");
-  const { q, setQ, sorting, setSorting, pagination, setPagination, toFirstPage, data, error, isLoading, mutate } =
-    useServerList<LibraryMaterial>("/api/materials", { kind: kind || undefined }, [{ id: "name", desc: false }]);
+  const list = useServerList<LibraryMaterial>("/api/materials", { kind: kind || undefined }, [{ id: "name", desc: false }]);
   return (
     <div className="flex flex-col gap-3">
       <div className="flex flex-wrap items-end gap-3">
-        <SearchBox label="Search by name or CAS number" value={q} onChange={setQ} />
+        <SearchBox label="Search by name or CAS number" value={list.q} onChange={list.setQ} />
         <FilterSelect
           label="Kind"
           value={kind}
           onChange={(v) => {
             setKind(v);
-            toFirstPage();
+            list.toFirstPage();
           }}
           anyLabel="Any kind"
           options={MATERIAL_KINDS}
           words={KIND_WORDS}
         />
       </div>
-      {error ? <ErrorPanel message={error.message} onRetry={() => mutate()} /> : null}
-      <DataTable
+      <ServerListTable
+        list={list}
         caption="Materials library"
         columns={columns}
-        rows={data?.rows ?? EMPTY}
-        total={data?.total ?? 0}
-        sorting={sorting}
-        onSortingChange={setSorting}
-        pagination={pagination}
-        onPaginationChange={setPagination}
         initialVisibility={{ casNumber: false, updatedAt: false }}
-        loading={isLoading}
-        getRowId={(r) => r.id}
-        empty={q || kind ? "No material matches." : "The library is empty."}
+        empty={list.q || kind ? "No material matches." : "The library is empty."}
       />
       <p className="text-xs text-muted">⚠ GHS hazard statements as recorded in the library. {SAFETY_REMINDER}</p>
     </div>

@@ -45,3 +45,6 @@ export function useServerList<Row>(path: string, filters: Record<string, string 
     toFirstPage,
   };
 }
+
+/** What `useServerList` returns, for components that render it. */
+export type ServerList<Row> = ReturnType<typeof useServerList<Row>>;
