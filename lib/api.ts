@@ -96,8 +96,9 @@ export function errorResponse(err: unknown): Response {
   }
   if (isFieldError(err)) {
     const fields: Record<string, string> = {};
-    for (const i of err.issues ?? [{ field: err.field, message: err.message }]) fields[i.field] ??= i.message;
-    fields[err.field] ??= err.message;
+    // An issue with the input as a whole has no path: it is about the body, as for zod errors.
+    for (const i of err.issues ?? [{ field: err.field, message: err.message }]) fields[i.field || "body"] ??= i.message;
+    fields[err.field || "body"] ??= err.message;
     return json(422, { error: { code: err.code, message: err.message, fields } });
   }
   if (err instanceof Error && err.name === "WorkflowError") {
@@ -118,17 +119,26 @@ export function errorResponse(err: unknown): Response {
 
 const MAX_BODY_BYTES = 1_000_000;
 
-/** Reads and validates a JSON body: 413 when too large, 400 when not JSON, 422 when invalid. */
-export async function readJson<T>(req: Request, schema: ZodType<T>, maxBytes = MAX_BODY_BYTES): Promise<T> {
+/** The answer to a request body that is not JSON. */
+export const malformedJson = () => new ApiError(400, "malformed_json", "The request body is not valid JSON.");
+
+/** Reads a request body as text, refusing more than `maxBytes` with 413. */
+export async function readText(req: Request, maxBytes = MAX_BODY_BYTES): Promise<string> {
   const length = Number(req.headers.get("content-length") ?? 0);
   if (length > maxBytes) throw new ApiError(413, "too_large", `The request body is larger than ${maxBytes} bytes.`);
   const text = await req.text();
   if (text.length > maxBytes) throw new ApiError(413, "too_large", `The request body is larger than ${maxBytes} bytes.`);
+  return text;
+}
+
+/** Reads and validates a JSON body: 413 when too large, 400 when not JSON, 422 when invalid. */
+export async function readJson<T>(req: Request, schema: ZodType<T>, maxBytes = MAX_BODY_BYTES): Promise<T> {
+  const text = await readText(req, maxBytes);
   let data: unknown;
   try {
     data = text.length ? JSON.parse(text) : {};
   } catch {
-    throw new ApiError(400, "malformed_json", "The request body is not valid JSON.");
+    throw malformedJson();
   }
   return schema.parse(data);
 }

@@ -3,6 +3,7 @@
  * limit, cross-site requests, and errors that never leak internals.
  */
 import { describe, expect, it } from "vitest";
+import { computeFormulation } from "@/lib/formulation";
 import { coatInput, library } from "./fixtures";
 import { BASE, DEMO_PASSWORD, demo, nextClientIp, signIn, signUp } from "./http";
 
@@ -100,6 +101,28 @@ describe("errors", () => {
     expect(res.status).toBe(422);
     const body = (await res.json()) as { error: { fields: Record<string, string> } };
     expect(Object.keys(body.error.fields).some((f) => f.startsWith("components"))).toBe(true);
+  });
+});
+
+describe("the calculator's engine thread", () => {
+  it("answers exactly what the engine computes here, for 24 different inputs sent at once", async () => {
+    const formulator = await signIn(demo.formulator);
+    const lib = await library(formulator);
+    const inputs = Array.from({ length: 24 }, (_, i) => coatInput(lib, { teos: 0.2 + i * 0.025, cureC: 60 + i }));
+    const answers = await Promise.all(inputs.map((input) => formulator.fetch("/api/compute", { method: "POST", json: input })));
+    expect(answers.map((res) => res.status)).toEqual(inputs.map(() => 200));
+    for (const [i, res] of answers.entries()) {
+      // The same engine in the test process; JSON drops what JSON drops (undefined fields).
+      expect(await res.json()).toEqual(JSON.parse(JSON.stringify(computeFormulation(inputs[i] as Parameters<typeof computeFormulation>[0]))));
+    }
+  });
+
+  it("names the body when the input as a whole is wrong", async () => {
+    const formulator = await signIn(demo.formulator);
+    const res = await formulator.fetch("/api/compute", { method: "POST", body: "[]", headers: { "content-type": "application/json" } });
+    expect(res.status).toBe(422);
+    const body = (await res.json()) as { error: { fields: Record<string, string> } };
+    expect(Object.keys(body.error.fields)).toEqual(["body"]);
   });
 });
 

@@ -1,0 +1,125 @@
+import { Worker } from "node:worker_threads";
+import { afterEach, describe, expect, it } from "vitest";
+import { ApiError, errorResponse } from "@/lib/api";
+import { computeFromText, type EngineReply } from "@/lib/compute/from-text";
+import { EnginePool, unwrap } from "@/lib/compute/pool";
+import { computeFormulation } from "@/lib/formulation";
+import { FormulationError } from "@/lib/formulation/errors";
+import type { FormulationInput } from "@/lib/formulation/input-schema";
+import { ref } from "@/lib/formulation/test-support";
+
+// The pool's behaviour is our own design (lib/compute/pool.ts); the results it carries are
+// checked against the engine itself, in this process.
+
+/** 10 g of silica from TEOS in ethanol, R = 4, HCl 37 %: the engine's own documented example. */
+const teosSilicaInput = (): FormulationInput => ({
+  materials: [ref("teos"), ref("ethanol"), ref("water-di"), ref("hcl-37")],
+  basis: { type: "solidMass", grams: 10 },
+  components: [{ materialId: "teos", weightFraction: 1 }],
+  water: { materialId: "water-di", ratio: "R", value: 4 },
+  solvent: { materialId: "ethanol", mode: "molPerNetworkAtom", value: 4 },
+  catalyst: { materialId: "hcl-37", molPerNetworkAtom: 0.01 },
+  steps: [{ name: "dry", temperatureC: 60, durationH: 24 }],
+});
+
+describe("computeFromText", () => {
+  it("gives the engine's result as JSON", () => {
+    const input = teosSilicaInput();
+    const reply = computeFromText(JSON.stringify(input));
+    expect(reply.ok).toBe(true);
+    expect(JSON.parse((reply as { json: string }).json)).toEqual(JSON.parse(JSON.stringify(computeFormulation(input))));
+  });
+
+  it("tells a body that is not JSON from an input the engine refuses", () => {
+    expect(computeFromText("{not json")).toEqual({ ok: false, kind: "malformed_json" });
+    const refused = computeFromText("[]") as Extract<EngineReply, { kind: "formulation" }>;
+    expect([refused.kind, refused.code, refused.field]).toEqual(["formulation", "invalid_input", ""]);
+    expect((computeFromText("") as { kind: string }).kind).toBe("formulation");
+  });
+});
+
+describe("unwrap", () => {
+  it("turns each reply back into the answer or error the route gives", async () => {
+    expect(unwrap({ ok: true, json: "{}" })).toBe("{}");
+    expect(() => unwrap({ ok: false, kind: "malformed_json" })).toThrow(ApiError);
+    const issues = [{ field: "components", message: "fractions sum to 0.9, not 1" }];
+    let thrown: unknown;
+    try {
+      unwrap({ ok: false, kind: "formulation", code: "fractions_do_not_sum", field: "components", message: "sum", issues });
+    } catch (err) {
+      thrown = err;
+    }
+    expect(thrown).toBeInstanceOf(FormulationError);
+    expect((thrown as FormulationError).issues).toEqual(issues);
+    const res = errorResponse(thrown);
+    expect(res.status).toBe(422);
+    expect(((await res.json()) as { error: { fields: object } }).error.fields).toEqual({ components: "fractions sum to 0.9, not 1" });
+    expect(() => unwrap({ ok: false, kind: "internal", message: "boom" })).toThrow(/boom/);
+  });
+
+  it("names the body for an issue with the input as a whole", async () => {
+    const res = errorResponse(new FormulationError("invalid_input", "", "formulation input must be an object"));
+    expect(((await res.json()) as { error: { fields: object } }).error.fields).toEqual({ body: "formulation input must be an object" });
+  });
+});
+
+/**
+ * A stand-in engine worker that speaks the pool's protocol: "wait:N" answers
+ * after N ms with its thread id, "exit" ends the thread, "hang" never answers.
+ */
+const FAKE_WORKER = String.raw`
+const { parentPort, threadId } = require("node:worker_threads");
+parentPort.on("message", ({ id, text }) => {
+  if (text === "exit") process.exit(3);
+  if (text === "hang") return;
+  const ms = Number(text.split(":")[1] ?? 0);
+  setTimeout(() => parentPort.postMessage({ id, reply: { ok: true, json: JSON.stringify({ text, threadId }) } }), ms);
+});
+`;
+
+const pools: EnginePool[] = [];
+function fakePool(size: number, timeoutMs = 5_000): EnginePool {
+  const pool = new EnginePool({ size, timeoutMs, spawn: () => new Worker(FAKE_WORKER, { eval: true }) });
+  pools.push(pool);
+  return pool;
+}
+const answer = async (p: Promise<EngineReply>) => JSON.parse(unwrap(await p)) as { text: string; threadId: number };
+
+afterEach(() => {
+  for (const pool of pools.splice(0)) pool.close();
+});
+
+describe("EnginePool", () => {
+  it("gives each caller its own answer when answers come back out of order", async () => {
+    const pool = fakePool(1);
+    const [slow, fast] = await Promise.all([answer(pool.run("wait:60")), answer(pool.run("wait:1"))]);
+    expect([slow.text, fast.text]).toEqual(["wait:60", "wait:1"]);
+    expect(pool.started).toBe(1);
+  });
+
+  it("starts another worker while all are busy, up to its size", async () => {
+    const pool = fakePool(2);
+    const results = await Promise.all(["wait:40", "wait:40", "wait:40"].map((t) => answer(pool.run(t))));
+    expect(pool.started).toBe(2);
+    expect(new Set(results.map((r) => r.threadId)).size).toBe(2);
+  });
+
+  it("answers 503 when its worker dies, and starts a new one for the next calculation", async () => {
+    const pool = fakePool(1);
+    const lost = pool.run("exit");
+    await expect(lost).rejects.toMatchObject({ status: 503, code: "calculator_restarted" });
+    expect((await answer(pool.run("wait:0"))).text).toBe("wait:0");
+    expect(pool.started).toBe(2);
+  });
+
+  it("stops a calculation that overruns its time, with 503, and carries on with a new worker", async () => {
+    const pool = fakePool(1, 150);
+    const hung = pool.run("hang");
+    const behind = pool.run("wait:1000"); // on the same worker: lost with it
+    await expect(hung).rejects.toMatchObject({ status: 503, code: "compute_timeout" });
+    await expect(behind).rejects.toMatchObject({ status: 503, code: "calculator_restarted" });
+    expect((await answer(pool.run("wait:0"))).text).toBe("wait:0");
+    expect(pool.started).toBe(2);
+    expect(pool.size).toBe(1);
+  });
+});
