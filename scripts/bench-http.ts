@@ -106,7 +106,8 @@ async function main() {
     [`list API p97.5, ${list.total} formulations, 4 clients`, `${median(listP95).toFixed(1)} ms`, ""],
     ...js.map((j): [string, string, string] => [`first-load JS ${j.path}`, `${j.kb.toFixed(0)} kB (compressed)`, "target ≤ 180 kB"]),
   ];
-  console.log(`\nHTTP benchmarks (${RUNS} runs × ${SECONDS} s, 10 connections; medians)`);
+  const engineThreads = process.env.GELWRIGHT_COMPUTE_WORKERS ?? "1";
+  console.log(`\nHTTP benchmarks (${RUNS} runs × ${SECONDS} s, 10 connections; medians; engine threads: ${engineThreads})`);
   for (const [k, v, t] of rows) console.log(`${k.padEnd(44)} ${v.padStart(22)}   ${t}`);
 }
 
