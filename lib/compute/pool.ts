@@ -1,4 +1,5 @@
 import "server-only";
+import { availableParallelism } from "node:os";
 import { Worker } from "node:worker_threads";
 import { ApiError, malformedJson } from "@/lib/api";
 import { FormulationError } from "@/lib/formulation/errors";
@@ -126,10 +127,17 @@ export class EnginePool {
   }
 }
 
-/** Engine threads for /api/compute: GELWRIGHT_COMPUTE_WORKERS, default 1, 0 to compute in the request's thread. */
+/**
+ * Engine threads for /api/compute: GELWRIGHT_COMPUTE_WORKERS (0 to 8; 0
+ * computes in the request's thread). By default 1, or 0 on a one-core
+ * machine, where a second thread could only take turns with the first.
+ */
 export function computeWorkerCount(): number {
-  const n = Number(process.env.GELWRIGHT_COMPUTE_WORKERS ?? 1);
-  return Number.isInteger(n) && n >= 0 && n <= 8 ? n : 1;
+  const fallback = availableParallelism() > 1 ? 1 : 0;
+  const setting = process.env.GELWRIGHT_COMPUTE_WORKERS;
+  if (setting === undefined || setting.trim() === "") return fallback;
+  const n = Number(setting);
+  return Number.isInteger(n) && n >= 0 && n <= 8 ? n : fallback;
 }
 
 function spawnEngineWorker(): Worker {

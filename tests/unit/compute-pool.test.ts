@@ -1,8 +1,9 @@
+import { availableParallelism } from "node:os";
 import { Worker } from "node:worker_threads";
 import { afterEach, describe, expect, it } from "vitest";
 import { ApiError, errorResponse } from "@/lib/api";
 import { computeFromText, type EngineReply } from "@/lib/compute/from-text";
-import { EnginePool, unwrap } from "@/lib/compute/pool";
+import { computeWorkerCount, EnginePool, unwrap } from "@/lib/compute/pool";
 import { computeFormulation } from "@/lib/formulation";
 import { FormulationError } from "@/lib/formulation/errors";
 import type { FormulationInput } from "@/lib/formulation/input-schema";
@@ -121,5 +122,23 @@ describe("EnginePool", () => {
     expect((await answer(pool.run("wait:0"))).text).toBe("wait:0");
     expect(pool.started).toBe(2);
     expect(pool.size).toBe(1);
+  });
+});
+
+describe("computeWorkerCount", () => {
+  const saved = process.env.GELWRIGHT_COMPUTE_WORKERS;
+  afterEach(() => {
+    if (saved === undefined) delete process.env.GELWRIGHT_COMPUTE_WORKERS;
+    else process.env.GELWRIGHT_COMPUTE_WORKERS = saved;
+  });
+
+  it("takes 0 to 8 from the setting and falls back to the default for anything else", () => {
+    delete process.env.GELWRIGHT_COMPUTE_WORKERS;
+    const fallback = computeWorkerCount();
+    expect(fallback).toBe(availableParallelism() > 1 ? 1 : 0);
+    for (const [setting, want] of [["0", 0], ["3", 3], ["8", 8], ["9", fallback], ["-1", fallback], ["two", fallback], ["1.5", fallback], ["", fallback]] as const) {
+      process.env.GELWRIGHT_COMPUTE_WORKERS = setting;
+      expect(computeWorkerCount(), setting).toBe(want);
+    }
   });
 });
