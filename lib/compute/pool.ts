@@ -145,6 +145,8 @@ function spawnEngineWorker(): Worker {
 }
 
 let pool: EnginePool | undefined;
+/** The pool of the previous copy of this module, which the development server's reloads leave behind. */
+const shared = globalThis as typeof globalThis & { gelwrightEnginePool?: EnginePool };
 
 /**
  * The result JSON for a calculator request body, or the error to answer
@@ -154,7 +156,11 @@ let pool: EnginePool | undefined;
 export async function computeJson(text: string): Promise<string> {
   const size = computeWorkerCount();
   if (size === 0) return unwrap(computeFromText(text));
-  pool ??= new EnginePool({ size, spawn: spawnEngineWorker, timeoutMs: COMPUTE_TIMEOUT_MS });
+  if (!pool) {
+    // After a reload in development, stop the old copy's workers (they run the old engine).
+    shared.gelwrightEnginePool?.close();
+    pool = shared.gelwrightEnginePool = new EnginePool({ size, spawn: spawnEngineWorker, timeoutMs: COMPUTE_TIMEOUT_MS });
+  }
   return unwrap(await pool.run(text));
 }
 
