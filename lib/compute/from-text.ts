@@ -1,6 +1,5 @@
 import { computeFormulation } from "@/lib/formulation";
-import type { FieldIssue, FormulationErrorCode } from "@/lib/formulation/errors";
-import { isFormulationError } from "@/lib/formulation/errors";
+import { isFormulationError, type FieldIssue, type FormulationErrorCode } from "@/lib/formulation/errors";
 import type { FormulationInput } from "@/lib/formulation/input-schema";
 
 /**
