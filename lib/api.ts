@@ -122,13 +122,30 @@ const MAX_BODY_BYTES = 1_000_000;
 /** The answer to a request body that is not JSON. */
 export const malformedJson = () => new ApiError(400, "malformed_json", "The request body is not valid JSON.");
 
-/** Reads a request body as text, refusing more than `maxBytes` with 413. */
+/**
+ * Reads a request body as text, refusing more than `maxBytes` with 413. The
+ * bytes are counted as they stream in and reading stops at the limit (the
+ * HTTP front, lib/server/body-limit.ts, has already held the body to its
+ * route's limit; this is the route's own, possibly smaller, one).
+ */
 export async function readText(req: Request, maxBytes = MAX_BODY_BYTES): Promise<string> {
-  const length = Number(req.headers.get("content-length") ?? 0);
-  if (length > maxBytes) throw new ApiError(413, "too_large", `The request body is larger than ${maxBytes} bytes.`);
-  const text = await req.text();
-  if (text.length > maxBytes) throw new ApiError(413, "too_large", `The request body is larger than ${maxBytes} bytes.`);
-  return text;
+  const tooLarge = () => new ApiError(413, "too_large", `The request body is larger than ${maxBytes} bytes.`);
+  if (Number(req.headers.get("content-length") ?? 0) > maxBytes) throw tooLarge();
+  if (!req.body) return "";
+  const reader = req.body.getReader();
+  const chunks: Uint8Array[] = [];
+  let size = 0;
+  for (;;) {
+    const { done, value } = await reader.read();
+    if (done) break;
+    size += value.byteLength;
+    if (size > maxBytes) {
+      await reader.cancel().catch(() => undefined);
+      throw tooLarge();
+    }
+    chunks.push(value);
+  }
+  return Buffer.concat(chunks, size).toString("utf8");
 }
 
 /** Reads and validates a JSON body: 413 when too large, 400 when not JSON, 422 when invalid. */
@@ -146,22 +163,18 @@ export async function readJson<T>(req: Request, schema: ZodType<T>, maxBytes = M
 type RouteContext<P> = { params: Promise<P> };
 
 const SAFE_METHODS = new Set(["GET", "HEAD", "OPTIONS"]);
-const trustedOrigins = new Set(
-  [config.baseUrl, ...(process.env.GELWRIGHT_TRUSTED_ORIGINS ?? "").split(",")]
-    .map((o) => o.trim())
-    .filter(Boolean)
-    .map((o) => new URL(o).origin),
-);
 
 /**
- * Cross-site request check for changes: a browser always sends Origin on a
- * POST/PUT/PATCH/DELETE, and it must be our own. (Cookies are SameSite=Lax too.)
+ * Cross-site request check for changes, as the HTTP front makes it too (a
+ * second line for a handler reached some other way): a browser always sends
+ * Origin on a POST/PUT/PATCH/DELETE, and it must be one of ours; a change
+ * without one is refused. (Cookies are SameSite=Lax as well.)
  */
 function assertSameOrigin(req: Request): void {
   if (SAFE_METHODS.has(req.method)) return;
   const origin = req.headers.get("origin");
-  if (origin && !trustedOrigins.has(origin)) {
-    throw new ApiError(403, "bad_origin", "This request came from another site and was refused.");
+  if (!origin || !config.trustedOrigins.has(origin)) {
+    throw new ApiError(403, "bad_origin", origin ? "This request came from another site and was refused." : "Changes are accepted only from Gelwright's own pages (the request had no Origin header).");
   }
 }
 

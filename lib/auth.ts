@@ -6,6 +6,7 @@ import { organization } from "better-auth/plugins";
 import { db } from "@/db";
 import * as schema from "@/db/schema";
 import { config } from "./config";
+import { CLIENT_ADDRESS_HEADER } from "./server/client-address";
 import { sendMail } from "./mail";
 import { ac, roles } from "./permissions";
 
@@ -53,6 +54,10 @@ export const auth = betterAuth({
     useSecureCookies: secure,
     defaultCookieAttributes: { httpOnly: true, sameSite: "lax", secure },
     cookiePrefix: "gelwright",
+    // The client's address as the HTTP front established it (scripts/server.ts):
+    // X-Forwarded-For counts only from GELWRIGHT_TRUSTED_PROXIES, and the front
+    // overwrites this header whatever the client sent.
+    ipAddress: { ipAddressHeaders: [CLIENT_ADDRESS_HEADER] },
   },
   plugins: [
     organization({

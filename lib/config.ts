@@ -1,8 +1,13 @@
 import "server-only";
+import { readFrontSettings } from "./server/settings";
+
+const front = readFrontSettings();
 
 /** Settings from the environment, each with a working local default. */
 export const config = {
-  baseUrl: process.env.BETTER_AUTH_URL ?? process.env.GELWRIGHT_BASE_URL ?? "http://localhost:3000",
+  baseUrl: front.baseUrl,
+  /** Origins allowed to send changes: the app's own and GELWRIGHT_TRUSTED_ORIGINS. */
+  trustedOrigins: front.trustedOrigins,
   authSecret:
     process.env.BETTER_AUTH_SECRET ??
     // Local default so `npm start` needs no env file; scripts/start.sh sets a generated one.

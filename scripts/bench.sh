@@ -26,7 +26,7 @@ npx tsx db/migrate.ts && npx tsx db/seed.ts && npx tsx scripts/bench-data.ts 100
 echo; npx tsx scripts/bench-engine.ts
 npx tsx scripts/bench-import.ts
 npx next build >"$ROOT/.data/bench-build.log"
-GELWRIGHT_RATE_LIMIT=off setsid npx next start -H localhost -p 3120 >"$ROOT/.data/bench-app.log" 2>&1 &
+GELWRIGHT_RATE_LIMIT=off setsid npx tsx scripts/server.ts -H localhost -p 3120 >"$ROOT/.data/bench-app.log" 2>&1 &
 APP_PID=$!
 wait_http "$BENCH_BASE/api/health" 60
 npx tsx scripts/bench-http.ts

@@ -12,4 +12,4 @@ start_fake_s3 "${FAKE_S3_PORT:-4569}" "$ROOT/.data/s3" .data/fake-s3.pid
 npx tsx db/migrate.ts
 npx tsx db/seed.ts
 trap 'stop_pidfile .data/fake-smtp.pid; stop_pidfile .data/fake-s3.pid; bash scripts/db.sh stop' INT TERM EXIT
-npx next dev -H localhost -p "${PORT:-3000}"
+npx tsx scripts/server.ts --dev -H localhost -p "${PORT:-3000}"

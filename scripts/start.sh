@@ -64,6 +64,6 @@ cat <<MSG
   Press Ctrl-C to stop the app and MariaDB.
 
 MSG
-setsid npx next start -H localhost -p "$PORT" &
+setsid npx tsx scripts/server.ts -H localhost -p "$PORT" &
 APP_PID=$!
 wait "$APP_PID"

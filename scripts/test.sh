@@ -85,9 +85,12 @@ if npx next build >"$OUT/build.log" 2>&1; then
     log "Port $TEST_APP_PORT or $TEST_APP_PORT2 is already in use; stop what runs there (or set GELWRIGHT_TEST_APP_PORT)."
     failed=$((failed + 1)); failures+=("port $TEST_APP_PORT busy")
   else
-    GELWRIGHT_SIGNIN_RATE_LIMIT=5 setsid npx next start -H localhost -p "$TEST_APP_PORT" >"$OUT/app.log" 2>&1 &
+    # The tests stand for many clients behind one proxy on 127.0.0.1 (each sends
+    # its own X-Forwarded-For); a client on any other loopback address is not a proxy.
+    export GELWRIGHT_TRUSTED_PROXIES="127.0.0.1"
+    GELWRIGHT_SIGNIN_RATE_LIMIT=5 setsid npx tsx scripts/server.ts -H localhost -p "$TEST_APP_PORT" >"$OUT/app.log" 2>&1 &
     APP_PID=$!
-    GELWRIGHT_SIGNIN_RATE_LIMIT=5 setsid npx next start -H localhost -p "$TEST_APP_PORT2" >"$OUT/app2.log" 2>&1 &
+    GELWRIGHT_SIGNIN_RATE_LIMIT=5 setsid npx tsx scripts/server.ts -H localhost -p "$TEST_APP_PORT2" >"$OUT/app2.log" 2>&1 &
     APP2_PID=$!
     if wait_http "http://localhost:$TEST_APP_PORT/api/health" 60 && wait_http "http://localhost:$TEST_APP_PORT2/api/health" 60; then
       vitest_run "http-and-browser" vitest.e2e.config.ts

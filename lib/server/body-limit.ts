@@ -1,0 +1,102 @@
+/**
+ * Byte limits on request bodies, enforced by the HTTP front while the bytes
+ * arrive, before Next.js, better-auth or any of our handlers sees the request.
+ * A declared Content-Length over the limit is refused at once; a chunked body
+ * is counted as it comes in and cut off at the limit, so no body larger than
+ * its route's limit is ever held in memory.
+ */
+import type { IncomingMessage, ServerResponse } from "node:http";
+import { MAX_PDF_BYTES } from "@/lib/spreadsheet/pdf";
+import { IMPORT_LIMITS } from "@/lib/spreadsheet/template";
+
+/** Room for the multipart boundaries and the other fields beside an uploaded file. */
+export const FORM_OVERHEAD_BYTES = 64 * 1024;
+
+/** The most a JSON body to one of our API routes may hold (the calculator's largest formulation fits many times over). */
+export const MAX_JSON_BODY_BYTES = 1_000_000;
+
+/** Sign-in, sign-up, password reset and the other sign-in library routes: a few short fields. */
+export const MAX_AUTH_BODY_BYTES = 64 * 1024;
+
+/** Anything else (pages take no bodies). */
+export const MAX_OTHER_BODY_BYTES = 64 * 1024;
+
+/** After the limit is passed, this much more is read and thrown away so the client can read our answer; beyond it the connection is closed. */
+export const DISCARD_AFTER_LIMIT_BYTES = 4 * 1024 * 1024;
+
+/**
+ * The byte limit for a request's body.
+ *
+ * @example bodyLimitFor("POST", "/api/imports") // 5,308,416 (5 MB file + 64 kB of form)
+ */
+export function bodyLimitFor(method: string, pathname: string): number {
+  if (method === "GET" || method === "HEAD") return 0;
+  if (pathname === "/api/imports") return IMPORT_LIMITS.maxBytes + FORM_OVERHEAD_BYTES;
+  if (pathname === "/api/attachments") return MAX_PDF_BYTES + FORM_OVERHEAD_BYTES;
+  if (pathname.startsWith("/api/auth/")) return MAX_AUTH_BODY_BYTES;
+  if (pathname.startsWith("/api/")) return MAX_JSON_BODY_BYTES;
+  return MAX_OTHER_BODY_BYTES;
+}
+
+/** The answer to a body over its limit, in the API's one error shape. */
+export function tooLargeBody(limit: number): string {
+  return JSON.stringify({
+    error: { code: "too_large", message: `The request body is larger than ${limit} bytes, the most this address accepts.` },
+  });
+}
+
+type Push = (chunk: unknown, encoding?: BufferEncoding) => boolean;
+
+/**
+ * Holds `req` to `limit` bytes. Returns false when the declared length is
+ * already over it (the 413 has been sent; do not hand the request on);
+ * otherwise counts the bytes as Node's HTTP parser pushes them into the
+ * request stream and answers 413 the moment the count passes the limit.
+ * Bytes past the limit are never pushed into the stream, so nothing
+ * downstream buffers them.
+ */
+export function limitBody(req: IncomingMessage, res: ServerResponse, limit: number): boolean {
+  const declared = req.headers["content-length"];
+  if (declared !== undefined && Number(declared) > limit) {
+    refuse(req, res, limit);
+    return false;
+  }
+  const chunked = declared === undefined && req.headers["transfer-encoding"] !== undefined;
+  if (!chunked) return true; // Node's parser stops at Content-Length; no body when neither is sent.
+  let seen = 0;
+  let over = false;
+  const push = req.push.bind(req) as Push;
+  (req as unknown as { push: Push }).push = (chunk, encoding) => {
+    if (chunk === null || chunk === undefined) return over ? true : push(chunk, encoding);
+    seen += (chunk as Buffer).length;
+    if (over) {
+      // Thrown away; past a few more megabytes the client is not listening, so hang up.
+      if (seen > limit + DISCARD_AFTER_LIMIT_BYTES) req.socket.destroy();
+      return true;
+    }
+    if (seen > limit) {
+      over = true;
+      refuse(req, res, limit);
+      return true;
+    }
+    return push(chunk, encoding);
+  };
+  return true;
+}
+
+function refuse(req: IncomingMessage, res: ServerResponse, limit: number): void {
+  if (res.headersSent) {
+    req.socket.destroy();
+    return;
+  }
+  const body = tooLargeBody(limit);
+  res.writeHead(413, {
+    "content-type": "application/json",
+    "content-length": Buffer.byteLength(body),
+    "cache-control": "no-store",
+    connection: "close",
+  });
+  // With "connection: close" Node closes the socket once the answer is out;
+  // what the client still sends is dropped (see limitBody), never buffered.
+  res.end(body);
+}

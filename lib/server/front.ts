@@ -1,0 +1,148 @@
+/**
+ * What the HTTP front does to every request before Next.js sees it: it
+ * establishes the client's address, holds the body to its route's byte
+ * limit, refuses changes that are not same-origin JSON, and sets the
+ * headers that depend on the request (a fresh script nonce for each page).
+ */
+import { randomBytes } from "node:crypto";
+import type { IncomingMessage, ServerResponse } from "node:http";
+import { bodyLimitFor, limitBody } from "./body-limit";
+import { compileTrust, setClientAddress } from "./client-address";
+import type { FrontSettings } from "./settings";
+
+const CHANGE_METHODS = new Set(["POST", "PUT", "PATCH", "DELETE"]);
+
+/** Routes that take a file as multipart/form-data; every other change is JSON. */
+const MULTIPART_ROUTES = new Set(["/api/imports", "/api/attachments"]);
+
+/** API answers are data, never documents: nothing may load, nothing may frame them. */
+export const API_POLICY = "default-src 'none'; frame-ancestors 'none'";
+
+/**
+ * The content security policy of a page: scripts only with this response's
+ * nonce (Next.js puts it on its own script tags when it finds the policy on
+ * the request), no inline event handlers, no framing.
+ *
+ * @example pagePolicy("abc", false) // "default-src 'self'; script-src 'self' 'nonce-abc' 'strict-dynamic'; …"
+ */
+export function pagePolicy(nonce: string, dev: boolean): string {
+  return [
+    "default-src 'self'",
+    `script-src 'self' 'nonce-${nonce}' 'strict-dynamic'${dev ? " 'unsafe-eval'" : ""}`,
+    // React and the chart library set style attributes; styles cannot run code.
+    "style-src 'self' 'unsafe-inline'",
+    "img-src 'self' data: blob:",
+    "font-src 'self'",
+    `connect-src 'self'${dev ? " ws: wss:" : ""}`,
+    "object-src 'none'",
+    "base-uri 'self'",
+    "form-action 'self'",
+    "frame-ancestors 'none'",
+  ].join("; ");
+}
+
+export interface Refusal {
+  status: number;
+  code: string;
+  message: string;
+}
+
+/** The media type of a Content-Type header, lower case, without parameters. */
+function mediaType(header: string | undefined): string {
+  return (header ?? "").split(";")[0]!.trim().toLowerCase();
+}
+
+/** True when the request carries a body (a length above zero, or chunks). */
+function hasBody(req: IncomingMessage): boolean {
+  const length = req.headers["content-length"];
+  if (length !== undefined) return Number(length) > 0;
+  return req.headers["transfer-encoding"] !== undefined;
+}
+
+/**
+ * Why a change to the API is refused, or null: it must come from one of our
+ * own origins (a browser always sends Origin on these methods; a missing one
+ * is refused too), and a body must be JSON, or multipart on the upload routes.
+ */
+export function changeRefusal(req: IncomingMessage, pathname: string, trustedOrigins: Set<string>): Refusal | null {
+  if (!CHANGE_METHODS.has(req.method ?? "")) return null;
+  const origin = req.headers.origin;
+  if (!origin || !trustedOrigins.has(origin)) {
+    return {
+      status: 403,
+      code: "bad_origin",
+      message: origin ? "This request came from another site and was refused." : "Changes are accepted only from Gelwright's own pages (the request had no Origin header).",
+    };
+  }
+  if (!hasBody(req)) return null;
+  const type = mediaType(req.headers["content-type"]);
+  const allowed = MULTIPART_ROUTES.has(pathname) ? ["multipart/form-data"] : ["application/json"];
+  if (!allowed.includes(type)) {
+    return {
+      status: 415,
+      code: "unsupported_media_type",
+      message: `Send the body as ${allowed.join(" or ")}${type ? `, not ${type}` : " (the Content-Type header is missing)"}.`,
+    };
+  }
+  return null;
+}
+
+/** Sends one JSON error in the API's shape and closes the connection (its body is never read). */
+export function sendError(res: ServerResponse, refusal: Refusal): void {
+  const body = JSON.stringify({ error: { code: refusal.code, message: refusal.message } });
+  res.writeHead(refusal.status, {
+    "content-type": "application/json",
+    "content-length": Buffer.byteLength(body),
+    "cache-control": "no-store",
+    connection: "close",
+  });
+  res.end(body);
+}
+
+/**
+ * Next.js answers a method a route does not have with an empty 405; this
+ * gives that answer a JSON body in our shape instead.
+ */
+function jsonMethodNotAllowed(req: IncomingMessage, res: ServerResponse): void {
+  const end = res.end.bind(res) as (...args: unknown[]) => ServerResponse;
+  (res as unknown as { end: (...args: unknown[]) => ServerResponse }).end = (...args: unknown[]) => {
+    const empty = args.length === 0 || typeof args[0] === "function" || args[0] === undefined || args[0] === null;
+    if (res.statusCode === 405 && empty && !res.headersSent) {
+      const body = JSON.stringify({ error: { code: "method_not_allowed", message: `${req.method} is not accepted at this address.` } });
+      res.setHeader("content-type", "application/json");
+      res.setHeader("content-length", Buffer.byteLength(body));
+      return end(body);
+    }
+    return end(...args);
+  };
+}
+
+/**
+ * Builds the per-request step of the front. It returns false when it has
+ * answered the request itself (refused), true when Next.js should handle it.
+ */
+export function createFront(settings: FrontSettings, options: { dev: boolean }) {
+  const trust = compileTrust(settings.trustedProxies);
+  return function prepare(req: IncomingMessage, res: ServerResponse): boolean {
+    const pathname = (req.url ?? "/").split("?")[0]!;
+    setClientAddress(req, trust);
+    // The policy Next.js reads its nonce from is ours alone, never the client's.
+    delete req.headers["content-security-policy"];
+    delete req.headers["content-security-policy-report-only"];
+    if (pathname.startsWith("/api/")) {
+      res.setHeader("cache-control", "no-store");
+      res.setHeader("content-security-policy", API_POLICY);
+      jsonMethodNotAllowed(req, res);
+      const refusal = changeRefusal(req, pathname, settings.trustedOrigins);
+      if (refusal) {
+        sendError(res, refusal);
+        return false;
+      }
+    } else {
+      const policy = pagePolicy(randomBytes(16).toString("base64"), options.dev);
+      req.headers["content-security-policy"] = policy;
+      res.setHeader("content-security-policy", policy);
+    }
+    return limitBody(req, res, bodyLimitFor(req.method ?? "GET", pathname));
+  };
+}

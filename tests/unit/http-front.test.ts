@@ -1,0 +1,200 @@
+/**
+ * The HTTP front (lib/server/*), on real sockets of an in-process Node server:
+ * the client's address, byte limits while a body streams in, same-origin JSON
+ * for changes, the page policy and JSON for 405.
+ */
+import { once } from "node:events";
+import { createServer, type IncomingMessage, type Server, type ServerResponse } from "node:http";
+import type { AddressInfo } from "node:net";
+import { afterEach, describe, expect, it } from "vitest";
+import { bodyLimitFor, MAX_AUTH_BODY_BYTES, MAX_JSON_BODY_BYTES } from "@/lib/server/body-limit";
+import { CLIENT_ADDRESS_HEADER } from "@/lib/server/client-address";
+import { changeRefusal, createFront, pagePolicy } from "@/lib/server/front";
+import { rawRequest, type RawAnswer, type RawRequest } from "@/tests/helpers/raw-http";
+import { parseTrustedOrigins, parseTrustedProxies, readFrontSettings, SettingError } from "@/lib/server/settings";
+
+const ORIGIN = "http://localhost:3000";
+let server: Server | undefined;
+
+afterEach(async () => {
+  if (server) {
+    server.closeAllConnections();
+    await new Promise((resolve) => server!.close(resolve));
+    server = undefined;
+  }
+});
+
+interface Seen {
+  address?: string;
+  forwardedFor?: string;
+  bodyBytes: number;
+  policyOnRequest?: string;
+}
+
+/** A server with the front before a handler that reads the whole body, as a route would. */
+async function start(trustedProxies: string, handler?: (req: IncomingMessage, res: ServerResponse) => void) {
+  const prepare = createFront(readFrontSettings({ BETTER_AUTH_URL: ORIGIN, GELWRIGHT_TRUSTED_PROXIES: trustedProxies }), { dev: false });
+  const seen: Seen = { bodyBytes: 0 };
+  server = createServer((req, res) => {
+    if (!prepare(req, res)) return;
+    seen.address = req.headers[CLIENT_ADDRESS_HEADER] as string;
+    seen.forwardedFor = req.headers["x-forwarded-for"] as string;
+    seen.policyOnRequest = req.headers["content-security-policy"] as string | undefined;
+    if (handler) return handler(req, res);
+    req.on("data", (chunk: Buffer) => (seen.bodyBytes += chunk.length));
+    req.on("end", () => res.end("ok"));
+    req.on("error", () => undefined);
+  });
+  server.listen(0, "127.0.0.1");
+  await once(server, "listening");
+  return { port: (server.address() as AddressInfo).port, seen };
+}
+
+type Answer = RawAnswer;
+const send = (port: number, opts: Omit<RawRequest, "port">) => rawRequest({ port, path: "/api/x", ...opts });
+
+describe("client address", () => {
+  // Choosing the client address from X-Forwarded-For: only entries added by trusted
+  // proxies count, walking from the socket outwards (MDN Web Docs, "X-Forwarded-For",
+  // section "Selecting an IP address"; proxy-addr's documented behaviour).
+  it("ignores X-Forwarded-For when no proxy is trusted (the default) and uses the socket's address", async () => {
+    const { port, seen } = await start("");
+    await send(port, { headers: { "x-forwarded-for": "203.0.113.7", [CLIENT_ADDRESS_HEADER]: "198.51.100.9" } });
+    expect(seen.address).toBe("127.0.0.1");
+    expect(seen.forwardedFor).toBe("127.0.0.1");
+  });
+
+  it("takes the address a trusted proxy added, and the first untrusted one in a chain", async () => {
+    const { port, seen } = await start("127.0.0.1");
+    await send(port, { headers: { "x-forwarded-for": "203.0.113.7" } });
+    expect(seen.address).toBe("203.0.113.7");
+    // A client that forged an entry before the proxy's: the forged one is never reached.
+    await send(port, { headers: { "x-forwarded-for": "198.51.100.1, 203.0.113.8" } });
+    expect(seen.address).toBe("203.0.113.8");
+  });
+
+  it("does not believe a client on another address that sends X-Forwarded-For", async () => {
+    const { port, seen } = await start("127.0.0.1");
+    await send(port, { headers: { "x-forwarded-for": "203.0.113.7" }, localAddress: "127.0.0.9" });
+    expect(seen.address).toBe("127.0.0.9");
+  });
+});
+
+describe("settings", () => {
+  it("accepts addresses, CIDR ranges and proxy-addr's named ranges", () => {
+    expect(parseTrustedProxies(" 10.0.0.5, 10.1.0.0/16 ,::1, fd00::/8, loopback")).toEqual(["10.0.0.5", "10.1.0.0/16", "::1", "fd00::/8", "loopback"]);
+    expect(parseTrustedProxies(undefined)).toEqual([]);
+  });
+
+  describe("edge cases", () => {
+    it("stops with a message naming the setting and the bad entry", () => {
+      expect(() => parseTrustedProxies("10.0.0.5, proxy.example")).toThrow(SettingError);
+      expect(() => parseTrustedProxies("10.0.0.0/33")).toThrow(/GELWRIGHT_TRUSTED_PROXIES: “10.0.0.0\/33”/);
+      expect(() => parseTrustedOrigins(ORIGIN, "not a url")).toThrow(/GELWRIGHT_TRUSTED_ORIGINS: “not a url” is not a URL/);
+      expect(() => parseTrustedOrigins("ftp://x.example", undefined)).toThrow(/BETTER_AUTH_URL/);
+    });
+  });
+});
+
+describe("body limits", () => {
+  it("gives each kind of route its own limit", () => {
+    expect(bodyLimitFor("POST", "/api/auth/sign-in/email")).toBe(MAX_AUTH_BODY_BYTES);
+    expect(bodyLimitFor("POST", "/api/compute")).toBe(MAX_JSON_BODY_BYTES);
+    expect(bodyLimitFor("POST", "/api/imports")).toBeGreaterThan(5 * 1024 * 1024);
+    expect(bodyLimitFor("POST", "/api/attachments")).toBeGreaterThan(10 * 1024 * 1024);
+  });
+
+  it("refuses a declared Content-Length over the limit before reading any of it", async () => {
+    const { port, seen } = await start("");
+    const answer = await send(port, {
+      method: "POST",
+      path: "/api/auth/sign-in/email",
+      headers: { origin: ORIGIN, "content-type": "application/json", "content-length": String(MAX_AUTH_BODY_BYTES + 1) },
+      body: "x".repeat(MAX_AUTH_BODY_BYTES + 1),
+    });
+    expect(answer).not.toBe("closed");
+    expect((answer as Answer).status).toBe(413);
+    expect(JSON.parse((answer as Answer).body)).toMatchObject({ error: { code: "too_large" } });
+    expect(seen.bodyBytes).toBe(0);
+  });
+
+  it("cuts a chunked body off at the limit: the route never receives more, the sender is answered 413 or hung up on", async () => {
+    const { port, seen } = await start("");
+    // 64 MB in 64 kB chunks, with no Content-Length, to a route that allows 64 kB.
+    const answer = await send(port, {
+      method: "POST",
+      path: "/api/auth/sign-in/email",
+      headers: { origin: ORIGIN, "content-type": "application/json", "transfer-encoding": "chunked" },
+      chunks: { size: 64 * 1024, count: 1024 },
+    });
+    if (answer !== "closed") expect(answer.status).toBe(413);
+    expect(seen.bodyBytes).toBeLessThanOrEqual(MAX_AUTH_BODY_BYTES);
+  });
+
+  it("passes a chunked body within the limit whole", async () => {
+    const { port, seen } = await start("");
+    const answer = await send(port, {
+      method: "POST",
+      path: "/api/compute",
+      headers: { origin: ORIGIN, "content-type": "application/json", "transfer-encoding": "chunked" },
+      chunks: { size: 1000, count: 900 },
+    });
+    expect((answer as Answer).status).toBe(200);
+    expect(seen.bodyBytes).toBe(900_000);
+  });
+});
+
+describe("changes to the API", () => {
+  const post = (headers: Record<string, string>) => ({ method: "POST", headers: { host: "localhost:3000", ...headers } }) as IncomingMessage;
+  const origins = parseTrustedOrigins(ORIGIN, undefined);
+
+  it("are refused without an Origin, from another origin, or with a body that is not JSON", () => {
+    expect(changeRefusal(post({ "content-type": "application/json", "content-length": "2" }), "/api/formulations", origins)).toMatchObject({ status: 403 });
+    expect(changeRefusal(post({ origin: "https://evil.example", "content-type": "application/json", "content-length": "2" }), "/api/formulations", origins)).toMatchObject({ status: 403 });
+    expect(changeRefusal(post({ origin: ORIGIN, "content-type": "text/plain", "content-length": "2" }), "/api/formulations", origins)).toMatchObject({ status: 415 });
+    expect(changeRefusal(post({ origin: ORIGIN, "content-type": "application/x-www-form-urlencoded", "content-length": "2" }), "/api/auth/sign-in/email", origins)).toMatchObject({ status: 415 });
+    expect(changeRefusal(post({ origin: ORIGIN, "content-type": "multipart/form-data; boundary=x", "content-length": "2" }), "/api/formulations", origins)).toMatchObject({ status: 415 });
+  });
+
+  it("are let through from our origin as JSON, as multipart on the upload routes, and without a body", () => {
+    expect(changeRefusal(post({ origin: ORIGIN, "content-type": "application/json; charset=utf-8", "content-length": "2" }), "/api/formulations", origins)).toBeNull();
+    expect(changeRefusal(post({ origin: ORIGIN, "content-type": "multipart/form-data; boundary=x", "content-length": "2" }), "/api/imports", origins)).toBeNull();
+    expect(changeRefusal(post({ origin: ORIGIN }), "/api/revisions/x/release", origins)).toBeNull();
+    expect(changeRefusal({ method: "GET", headers: {} } as IncomingMessage, "/api/formulations", origins)).toBeNull();
+  });
+
+  it("answers a refused change in the API's error shape, without reading the body", async () => {
+    const { port, seen } = await start("");
+    const answer = (await send(port, { method: "POST", path: "/api/formulations", headers: { "content-type": "text/plain" }, body: "{}" })) as Answer;
+    expect(answer.status).toBe(403);
+    expect(JSON.parse(answer.body)).toMatchObject({ error: { code: "bad_origin" } });
+    expect(seen.bodyBytes).toBe(0);
+  });
+});
+
+describe("headers", () => {
+  it("gives each page a fresh script nonce and never allows inline script without it", async () => {
+    const { port, seen } = await start("", (_req, res) => res.end("page"));
+    const first = (await send(port, { path: "/sign-in", headers: { "content-security-policy": "script-src *" } })) as Answer;
+    const policy = String(first.headers["content-security-policy"]);
+    expect(policy).toMatch(/script-src 'self' 'nonce-[A-Za-z0-9+/=]{24}' 'strict-dynamic'/);
+    expect(policy.split(";").find((d) => d.trim().startsWith("script-src"))).not.toMatch(/unsafe-inline|unsafe-eval/);
+    // Next.js reads the nonce from the request's policy: ours, never the client's.
+    expect(seen.policyOnRequest).toBe(policy);
+    const second = (await send(port, { path: "/sign-in" })) as Answer;
+    expect(second.headers["content-security-policy"]).not.toBe(policy);
+    expect(pagePolicy("n", false)).toMatch(/frame-ancestors 'none'/);
+  });
+
+  it("marks API answers no-store and gives a bodyless 405 a JSON body", async () => {
+    const { port } = await start("", (_req, res) => {
+      res.statusCode = 405;
+      res.end();
+    });
+    const answer = (await send(port, { method: "PATCH", path: "/api/health", headers: { origin: ORIGIN } })) as Answer;
+    expect(answer.status).toBe(405);
+    expect(answer.headers["cache-control"]).toBe("no-store");
+    expect(answer.headers["content-type"]).toBe("application/json");
+    expect(JSON.parse(answer.body)).toEqual({ error: { code: "method_not_allowed", message: "PATCH is not accepted at this address." } });
+  });
+});
