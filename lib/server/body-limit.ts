@@ -49,16 +49,23 @@ type Push = (chunk: unknown, encoding?: BufferEncoding) => boolean;
 
 /**
  * Holds `req` to `limit` bytes. Returns false when the declared length is
- * already over it (the 413 has been sent; do not hand the request on);
+ * already over it (the front answers 413 itself; do not hand the request on);
  * otherwise counts the bytes as Node's HTTP parser pushes them into the
- * request stream and answers 413 the moment the count passes the limit.
- * Bytes past the limit are never pushed into the stream, so nothing
- * downstream buffers them.
+ * request stream. Bytes past the limit are never pushed into the stream, so
+ * nothing downstream buffers them. A sender at most DISCARD_AFTER_LIMIT_BYTES
+ * over is read to the end (and the bytes dropped) before the 413, so that a
+ * browser or fetch that is still sending sees the answer; a larger one is
+ * answered at once and hung up on.
  */
 export function limitBody(req: IncomingMessage, res: ServerResponse, limit: number): boolean {
   const declared = req.headers["content-length"];
   if (declared !== undefined && Number(declared) > limit) {
-    refuse(req, res, limit);
+    if (Number(declared) - limit <= DISCARD_AFTER_LIMIT_BYTES) {
+      req.on("data", () => undefined);
+      req.on("end", () => refuse(req, res, limit));
+    } else {
+      refuse(req, res, limit);
+    }
     return false;
   }
   const chunked = declared === undefined && req.headers["transfer-encoding"] !== undefined;
@@ -67,16 +74,19 @@ export function limitBody(req: IncomingMessage, res: ServerResponse, limit: numb
   let over = false;
   const push = req.push.bind(req) as Push;
   (req as unknown as { push: Push }).push = (chunk, encoding) => {
-    if (chunk === null || chunk === undefined) return over ? true : push(chunk, encoding);
-    seen += (chunk as Buffer).length;
-    if (over) {
-      // Thrown away; past a few more megabytes the client is not listening, so hang up.
-      if (seen > limit + DISCARD_AFTER_LIMIT_BYTES) req.socket.destroy();
+    if (chunk === null || chunk === undefined) {
+      // The end of the body: the handler never sees it when the body was too large.
+      if (!over) return push(chunk, encoding);
+      refuse(req, res, limit);
       return true;
     }
-    if (seen > limit) {
-      over = true;
+    seen += (chunk as Buffer).length;
+    if (seen > limit + DISCARD_AFTER_LIMIT_BYTES) {
       refuse(req, res, limit);
+      return true;
+    }
+    if (over || seen > limit) {
+      over = true;
       return true;
     }
     return push(chunk, encoding);
@@ -86,7 +96,8 @@ export function limitBody(req: IncomingMessage, res: ServerResponse, limit: numb
 
 function refuse(req: IncomingMessage, res: ServerResponse, limit: number): void {
   if (res.headersSent) {
-    req.socket.destroy();
+    // Answered already (413 sent, or the handler began its answer): hang up.
+    req.socket?.destroy();
     return;
   }
   const body = tooLargeBody(limit);

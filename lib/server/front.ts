@@ -104,16 +104,30 @@ export function sendError(res: ServerResponse, refusal: Refusal): void {
  * gives that answer a JSON body in our shape instead.
  */
 function jsonMethodNotAllowed(req: IncomingMessage, res: ServerResponse): void {
-  const end = res.end.bind(res) as (...args: unknown[]) => ServerResponse;
-  (res as unknown as { end: (...args: unknown[]) => ServerResponse }).end = (...args: unknown[]) => {
-    const empty = args.length === 0 || typeof args[0] === "function" || args[0] === undefined || args[0] === null;
-    if (res.statusCode === 405 && empty && !res.headersSent) {
-      const body = JSON.stringify({ error: { code: "method_not_allowed", message: `${req.method} is not accepted at this address.` } });
+  type Fn = (...args: unknown[]) => unknown;
+  const target = res as unknown as Record<"writeHead" | "write" | "end", Fn>;
+  const [writeHead, write, end] = [target.writeHead.bind(res), target.write.bind(res), target.end.bind(res)];
+  let is405 = false;
+  const body = () => JSON.stringify({ error: { code: "method_not_allowed", message: `${req.method} is not accepted at this address.` } });
+  const empty = (chunk: unknown) => chunk === undefined || chunk === null || typeof chunk === "function" || (chunk as { length?: number }).length === 0;
+  target.writeHead = (status, ...rest) => {
+    if (status === 405) {
+      is405 = true;
       res.setHeader("content-type", "application/json");
-      res.setHeader("content-length", Buffer.byteLength(body));
-      return end(body);
+      res.removeHeader("content-length");
+      // Headers given with the call win over set ones: drop the empty answer's length and type there too.
+      const headers = rest.find((r) => r && typeof r === "object" && !Array.isArray(r)) as Record<string, unknown> | undefined;
+      for (const key of Object.keys(headers ?? {})) {
+        if (/^content-(length|type)$/i.test(key)) delete headers![key];
+      }
     }
-    return end(...args);
+    return writeHead(status, ...rest);
+  };
+  // Next.js writes nothing for its 405 but may write empty chunks; those are dropped, the JSON is sent at the end.
+  target.write = (chunk, ...rest) => (is405 && empty(chunk) ? true : write(chunk, ...rest));
+  target.end = (chunk, ...rest) => {
+    if (!res.headersSent && res.statusCode === 405) target.writeHead(405);
+    return is405 && empty(chunk) ? end(body()) : end(chunk, ...rest);
   };
 }
 

@@ -118,6 +118,22 @@ describe("body limits", () => {
     expect(seen.bodyBytes).toBe(0);
   });
 
+  it("reads a sender slightly over the limit to the end and answers 413, so that fetch sees the answer", async () => {
+    const { port, seen } = await start("");
+    const body = JSON.stringify({ pad: "x".repeat(MAX_JSON_BODY_BYTES + 100_000) });
+    const res = await fetch(`http://127.0.0.1:${port}/api/compute`, { method: "POST", headers: { origin: ORIGIN, "content-type": "application/json" }, body });
+    expect(res.status).toBe(413);
+    expect(seen.bodyBytes).toBe(0);
+    const chunked = await send(port, {
+      method: "POST",
+      path: "/api/compute",
+      headers: { origin: ORIGIN, "content-type": "application/json", "transfer-encoding": "chunked" },
+      chunks: { size: 100_000, count: 12 },
+    });
+    expect((chunked as Answer).status).toBe(413);
+    expect(seen.bodyBytes).toBeLessThanOrEqual(MAX_JSON_BODY_BYTES);
+  });
+
   it("cuts a chunked body off at the limit: the route never receives more, the sender is answered 413 or hung up on", async () => {
     const { port, seen } = await start("");
     // 64 MB in 64 kB chunks, with no Content-Length, to a route that allows 64 kB.
@@ -186,15 +202,42 @@ describe("headers", () => {
     expect(pagePolicy("n", false)).toMatch(/frame-ancestors 'none'/);
   });
 
-  it("marks API answers no-store and gives a bodyless 405 a JSON body", async () => {
+  it("marks API answers no-store and gives a bodyless 405 a JSON body, however the empty answer is written", async () => {
+    const ways: ((res: ServerResponse) => void)[] = [
+      (res) => res.end(),
+      (res) => {
+        res.flushHeaders();
+        res.write(new Uint8Array(0));
+        res.end();
+      },
+      (res) => {
+        res.writeHead(405, { "content-length": "0" });
+        res.end("");
+      },
+    ];
+    for (const [i, way] of ways.entries()) {
+      const { port } = await start("", (_req, res) => {
+        res.statusCode = 405;
+        way(res);
+      });
+      const answer = (await send(port, { method: "PATCH", path: "/api/health", headers: { origin: ORIGIN } })) as Answer;
+      expect(answer.status, `way ${i}`).toBe(405);
+      expect(answer.headers["cache-control"]).toBe("no-store");
+      expect(answer.headers["content-type"], `way ${i}`).toBe("application/json");
+      expect(JSON.parse(answer.body)).toEqual({ error: { code: "method_not_allowed", message: "PATCH is not accepted at this address." } });
+      server!.closeAllConnections();
+      await new Promise((resolve) => server!.close(resolve));
+      server = undefined;
+    }
+  });
+
+  it("leaves other answers as the handler wrote them", async () => {
     const { port } = await start("", (_req, res) => {
-      res.statusCode = 405;
-      res.end();
+      res.writeHead(200, { "content-type": "text/plain" });
+      res.write("a");
+      res.end("b");
     });
-    const answer = (await send(port, { method: "PATCH", path: "/api/health", headers: { origin: ORIGIN } })) as Answer;
-    expect(answer.status).toBe(405);
-    expect(answer.headers["cache-control"]).toBe("no-store");
-    expect(answer.headers["content-type"]).toBe("application/json");
-    expect(JSON.parse(answer.body)).toEqual({ error: { code: "method_not_allowed", message: "PATCH is not accepted at this address." } });
+    const answer = (await send(port, { path: "/api/health" })) as Answer;
+    expect([answer.status, answer.body, answer.headers["content-type"]]).toEqual([200, "ab", "text/plain"]);
   });
 });
