@@ -12,8 +12,8 @@ import type { FrontSettings } from "./settings";
 
 const CHANGE_METHODS = new Set(["POST", "PUT", "PATCH", "DELETE"]);
 
-/** Routes that take a file as multipart/form-data; every other change is JSON. */
-const MULTIPART_ROUTES = new Set(["/api/imports", "/api/attachments"]);
+/** Routes that take a file as multipart/form-data (they check that themselves, after the caller's role); every other change is JSON. */
+const UPLOAD_ROUTES = new Set(["/api/imports", "/api/attachments"]);
 
 /** API answers are data, never documents: nothing may load, nothing may frame them. */
 export const API_POLICY = "default-src 'none'; frame-ancestors 'none'";
@@ -62,7 +62,8 @@ function hasBody(req: IncomingMessage): boolean {
 /**
  * Why a change to the API is refused, or null: it must come from one of our
  * own origins (a browser always sends Origin on these methods; a missing one
- * is refused too), and a body must be JSON, or multipart on the upload routes.
+ * is refused too), and a body must be JSON (the upload routes answer a body
+ * that is not multipart/form-data themselves, once they know who is asking).
  */
 export function changeRefusal(req: IncomingMessage, pathname: string, trustedOrigins: Set<string>): Refusal | null {
   if (!CHANGE_METHODS.has(req.method ?? "")) return null;
@@ -74,14 +75,13 @@ export function changeRefusal(req: IncomingMessage, pathname: string, trustedOri
       message: origin ? "This request came from another site and was refused." : "Changes are accepted only from Gelwright's own pages (the request had no Origin header).",
     };
   }
-  if (!hasBody(req)) return null;
+  if (!hasBody(req) || UPLOAD_ROUTES.has(pathname)) return null;
   const type = mediaType(req.headers["content-type"]);
-  const allowed = MULTIPART_ROUTES.has(pathname) ? ["multipart/form-data"] : ["application/json"];
-  if (!allowed.includes(type)) {
+  if (type !== "application/json") {
     return {
       status: 415,
       code: "unsupported_media_type",
-      message: `Send the body as ${allowed.join(" or ")}${type ? `, not ${type}` : " (the Content-Type header is missing)"}.`,
+      message: `Send the body as application/json${type ? `, not ${type}` : " (the Content-Type header is missing)"}.`,
     };
   }
   return null;

@@ -172,9 +172,11 @@ describe("changes to the API", () => {
     expect(changeRefusal(post({ origin: ORIGIN, "content-type": "multipart/form-data; boundary=x", "content-length": "2" }), "/api/formulations", origins)).toMatchObject({ status: 415 });
   });
 
-  it("are let through from our origin as JSON, as multipart on the upload routes, and without a body", () => {
+  it("are let through from our origin as JSON, to the upload routes, and without a body", () => {
     expect(changeRefusal(post({ origin: ORIGIN, "content-type": "application/json; charset=utf-8", "content-length": "2" }), "/api/formulations", origins)).toBeNull();
     expect(changeRefusal(post({ origin: ORIGIN, "content-type": "multipart/form-data; boundary=x", "content-length": "2" }), "/api/imports", origins)).toBeNull();
+    // The upload routes say themselves that they want multipart, after the role check (400 not_multipart).
+    expect(changeRefusal(post({ origin: ORIGIN, "content-type": "application/json", "content-length": "2" }), "/api/attachments", origins)).toBeNull();
     expect(changeRefusal(post({ origin: ORIGIN }), "/api/revisions/x/release", origins)).toBeNull();
     expect(changeRefusal({ method: "GET", headers: {} } as IncomingMessage, "/api/formulations", origins)).toBeNull();
   });
