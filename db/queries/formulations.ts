@@ -196,30 +196,39 @@ export async function createFormulation(
 }
 
 /**
- * Locks a revision for a change, and its formulation first: every change of a
- * formulation's revisions (save, submit, review, release, archive, a new
- * revision) takes the formulation's row lock before a revision's, so two
- * people releasing two revisions at once wait for each other instead of both
- * finding no other released revision, and the locks are always taken in one
- * order (no deadlock). Reads after this must be locking reads (`FOR UPDATE`)
- * to see what the transaction that held the lock before committed.
+ * The formulation a revision belongs to (it never changes). Read before the
+ * transaction starts, so that the transaction's first read is its lock.
  */
-async function lockRevision(tx: DbOrTx, teamId: string, revisionId: string): Promise<RevisionRow> {
-  const [owner] = await tx
+async function formulationOfRevision(teamId: string, revisionId: string): Promise<string> {
+  const [owner] = await db
     .select({ formulationId: revisions.formulationId })
     .from(revisions)
     .where(and(eq(revisions.teamId, teamId), eq(revisions.id, revisionId)))
     .limit(1);
   if (!owner) throw notFound("revision");
+  return owner.formulationId;
+}
+
+/**
+ * Locks a revision for a change, and its formulation first: every change of a
+ * formulation's revisions (save, submit, review, release, archive, a new
+ * revision) takes the formulation's row lock before a revision's, so two
+ * people releasing two revisions at once wait for each other instead of both
+ * finding no other released revision, and the locks are always taken in one
+ * order (no deadlock). Call it first in the transaction: a plain read before
+ * it would fix the transaction's snapshot before the lock was granted, and
+ * later plain reads would miss what the previous lock holder committed.
+ */
+async function lockRevision(tx: DbOrTx, teamId: string, revisionId: string, formulationId: string): Promise<RevisionRow> {
   await tx
     .select({ id: formulations.id })
     .from(formulations)
-    .where(and(eq(formulations.teamId, teamId), eq(formulations.id, owner.formulationId)))
+    .where(and(eq(formulations.teamId, teamId), eq(formulations.id, formulationId)))
     .for("update");
   const [row] = await tx
     .select()
     .from(revisions)
-    .where(and(eq(revisions.teamId, teamId), eq(revisions.id, revisionId)))
+    .where(and(eq(revisions.teamId, teamId), eq(revisions.id, revisionId), eq(revisions.formulationId, formulationId)))
     .for("update")
     .limit(1);
   if (!row) throw notFound("revision");
@@ -265,8 +274,9 @@ async function touchFormulation(tx: DbOrTx, formulationId: string, number: numbe
  */
 export async function saveDraft(actor: Actor, revisionId: string, data: { input: FormulationInput; version: number }) {
   const { result, computeError } = evaluate(data.input);
+  const formulationId = await formulationOfRevision(actor.teamId, revisionId);
   return db.transaction(async (tx) => {
-    const current = await lockRevision(tx, actor.teamId, revisionId);
+    const current = await lockRevision(tx, actor.teamId, revisionId, formulationId);
     if (current.state !== "draft") {
       throw conflict(
         `Revision ${current.number} is ${current.state.replace("_", " ")} and can no longer change. Start a new revision to edit it.`,
@@ -367,8 +377,9 @@ export async function transition(
   action: WorkflowAction,
   opts: { comment?: string | null } = {},
 ): Promise<TransitionOutcome> {
+  const formulationId = await formulationOfRevision(actor.teamId, revisionId);
   return db.transaction(async (tx) => {
-    const rev = await lockRevision(tx, actor.teamId, revisionId);
+    const rev = await lockRevision(tx, actor.teamId, revisionId, formulationId);
     const to = nextState(rev.state, action);
     const now = new Date();
     const set: Partial<typeof revisions.$inferInsert> = { state: to };
@@ -399,7 +410,7 @@ export async function transition(
     if (action === "release") {
       set.releasedAt = now;
       // One released revision per formulation: the previous one is archived.
-      // A locking read: it sees a release that another transaction committed while this one waited for the lock.
+      // Under the formulation's lock; a locking read besides, so it sees the latest committed state.
       const older = await tx
         .select({ id: revisions.id, number: revisions.number })
         .from(revisions)

@@ -182,6 +182,22 @@ describe("a second person approves", () => {
     expect(done.to).toBe("approved");
   });
 
+  it("never lets the submitter approve, also when submit and approve are sent at the same moment, every round", async () => {
+    const creator = { userId: users.formulator!, teamId };
+    const submitter = { userId: (await addMember("reviewer")).userId, teamId };
+    for (let round = 0; round < ROUNDS; round++) {
+      const { revisionId } = await fq.createFormulation(creator, { name: `Submit and approve race ${round}`, input });
+      const [submit, approve] = await Promise.allSettled([
+        fq.transition(submitter, revisionId, "submit"),
+        fq.transition(submitter, revisionId, "approve", OK),
+      ]);
+      expect(submit.status, `round ${round}`).toBe("fulfilled");
+      expect(approve.status, `round ${round}`).toBe("rejected");
+      const [rev] = await t.db.select({ state: revisions.state }).from(revisions).where(eq(revisions.id, revisionId));
+      expect(rev!.state).toBe("in_review");
+    }
+  });
+
   it("refuses approval by someone who only submitted it", async () => {
     const creator = { userId: users.formulator!, teamId };
     const submitter = await addMember("formulator");
