@@ -333,5 +333,6 @@ describe("bad input on every write route", () => {
     }
     expect(problems).toEqual([]);
     expect(await snapshot()).toEqual(before);
-  });
+    // Over 400 requests one after another: room for a busy machine (a limit on the run, not an assertion on its time).
+  }, 240_000);
 });
