@@ -24,7 +24,7 @@ export const unauthorized = () => new ApiError(401, "unauthorized", "Sign in to 
 export const forbidden = (what = "do this") =>
   new ApiError(403, "forbidden", `Your role in this team does not allow you to ${what}.`);
 export const notFound = (what = "record") => new ApiError(404, "not_found", `No such ${what}.`);
-export const conflict = (message: string) => new ApiError(409, "conflict", message);
+export const conflict = (message: string, fields?: Record<string, string>) => new ApiError(409, "conflict", message, fields);
 
 /** Turns a zod issue path into "components.2.weightFraction". */
 export function issuePath(path: readonly PropertyKey[]): string {
@@ -81,7 +81,58 @@ export function isDbUnavailable(err: unknown): boolean {
   return false;
 }
 
-/** Maps any thrown value to a JSON response; unknown errors never leak detail. */
+interface MysqlError {
+  code?: unknown;
+  errno?: unknown;
+  sqlMessage?: unknown;
+  message?: unknown;
+}
+
+/** The MariaDB error (ER_… code) behind `err`, following Drizzle's `cause` chain. */
+function mysqlError(err: unknown, code: string, errno: number): MysqlError | null {
+  for (let e: unknown = err, i = 0; e && i < 6; i++) {
+    const m = e as MysqlError;
+    if (m.code === code || m.errno === errno) return m;
+    e = (e as { cause?: unknown }).cause;
+  }
+  return null;
+}
+
+/**
+ * The unique key that a duplicate-key error (ER_DUP_ENTRY, errno 1062) names,
+ * or null when `err` is no such error.
+ *
+ * @example
+ * ```ts
+ * duplicateKey(err); // "materials_team_name_uq"
+ * ```
+ */
+export function duplicateKey(err: unknown): string | null {
+  const m = mysqlError(err, "ER_DUP_ENTRY", 1062);
+  if (!m) return null;
+  const text = String(m.sqlMessage ?? m.message ?? "");
+  return /for key '(?:[^'.]*\.)?([^']+)'/.exec(text)?.[1] ?? "";
+}
+
+/** What a clash on each unique key means to the person who sent the request. */
+const UNIQUE_KEYS: Record<string, { field: string; message: string }> = {
+  materials_team_name_uq: { field: "material.name", message: "The library already has a material with this name." },
+  formulations_team_name_uq: { field: "name", message: "A formulation with this name already exists in this team." },
+  revisions_formulation_number_uq: { field: "body", message: "Someone started a revision at the same moment; reload and try again." },
+};
+
+/** The column that a value was too long for (ER_DATA_TOO_LONG, errno 1406), or null. */
+function tooLongColumn(err: unknown): string | null {
+  const m = mysqlError(err, "ER_DATA_TOO_LONG", 1406);
+  if (!m) return null;
+  return /for column [`']?([^`' ]+)[`']?/.exec(String(m.sqlMessage ?? m.message ?? ""))?.[1] ?? "body";
+}
+
+/**
+ * Maps any thrown value to a JSON response; unknown errors never leak detail.
+ * A duplicate key (two people saving the same name at once) is 409 naming the
+ * field; a value too long for its column is 422.
+ */
 export function errorResponse(err: unknown): Response {
   const json = (status: number, body: ApiErrorBody) => Response.json(body, { status });
   if (err instanceof ApiError) {
@@ -105,6 +156,16 @@ export function errorResponse(err: unknown): Response {
     const w = err as Error & { code: string; field?: string };
     const status = w.code === "wrong_state" ? 409 : 422;
     return json(status, { error: { code: w.code, message: w.message, fields: w.field ? { [w.field]: w.message } : undefined } });
+  }
+  const dup = duplicateKey(err);
+  if (dup !== null) {
+    const known = UNIQUE_KEYS[dup] ?? { field: "body", message: "A record with these values already exists." };
+    return json(409, { error: { code: "duplicate", message: known.message, fields: { [known.field]: known.message } } });
+  }
+  const tooLong = tooLongColumn(err);
+  if (tooLong !== null) {
+    const message = `${tooLong}: the value is too long.`;
+    return json(422, { error: { code: "invalid_input", message, fields: { [tooLong]: message } } });
   }
   if (isDbUnavailable(err)) {
     console.error("[api] database unavailable:", err instanceof Error ? err.message : err);

@@ -85,19 +85,20 @@ export function assertSubmittable(result: FormulationResult | null, computeError
 }
 
 /**
- * A reviewer's decision: never on their own revision; a thermal fail cannot be
- * approved; a thermal caution or a return needs a comment.
+ * A reviewer's decision: never by anyone who authored the revision (its
+ * creator, and everyone who saved or submitted it, `authorIds`); a thermal
+ * fail cannot be approved; a thermal caution or a return needs a comment.
  */
 export function assertReviewable(input: {
   decision: "approved" | "returned";
   reviewerId: string;
-  authorId: string | null;
+  authorIds: readonly string[];
   comment: string | null | undefined;
   thermalStatus: "clear" | "caution" | "fail" | undefined;
 }): void {
   const comment = input.comment?.trim() ?? "";
-  if (input.authorId && input.authorId === input.reviewerId) {
-    throw new WorkflowError("own_revision", "You wrote this revision; another reviewer must decide on it.");
+  if (input.authorIds.includes(input.reviewerId)) {
+    throw new WorkflowError("own_revision", "You wrote or changed this revision; another reviewer must decide on it.");
   }
   if (input.decision === "returned" && !comment) {
     throw new WorkflowError("comment_required", "Say what needs changing: a comment is required to send a revision back.", "comment");

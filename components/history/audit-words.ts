@@ -26,7 +26,20 @@ const ACTION_WORDS: Record<string, string> = {
   "member.role_changed": "changed a member's role",
   "member.removed": "removed a member",
   "member.invited": "invited someone",
+  "batch.started": "started a batch",
+  "batch.line_recorded": "recorded a weighing",
+  "batch.notes_changed": "changed a batch's notes",
+  "batch.closed": "closed a batch",
+  "batch.settings_changed": "changed the batch tolerance settings",
 };
+
+/** A value of a before/after pair in words: empty text and null read "none". */
+function shown(value: unknown): string {
+  if (value === null || value === undefined || value === "") return "none";
+  if (typeof value === "number") return String(value);
+  const text = String(value);
+  return text.length > 80 ? `${text.slice(0, 79)}…` : `“${text}”`;
+}
 
 /** "approved", "saved a draft" … (unknown actions: the code with dots as spaces). */
 export function actionWords(action: string): string {
@@ -50,6 +63,15 @@ export function summaryWords(summary: unknown): string {
   if (typeof after.email === "string") parts.push(String(after.email));
   if (typeof after.version === "number") parts.push(`version ${after.version}`);
   if (typeof after.computeError === "string" && after.computeError) parts.push(`cannot compute: ${after.computeError}`);
+  if (typeof after.line === "number") parts.push(`line ${after.line}`);
+  for (const [key, label] of [
+    ["notes", "notes"],
+    ["initials", "initials"],
+    ["lotNumber", "lot"],
+    ["actualGrams", "mass (g)"],
+  ] as const) {
+    if (key in after && before[key] !== after[key]) parts.push(`${label} ${shown(before[key])} → ${shown(after[key])}`);
+  }
   if (typeof s.note === "string" && s.note) parts.push(`“${s.note}”`);
   return parts.join(" · ");
 }
@@ -59,5 +81,6 @@ export function eventHref(e: Pick<AuditEventView, "entityType" | "entityId">): s
   if (e.entityType === "revision") return `/revisions/${e.entityId}`;
   if (e.entityType === "formulation") return `/formulations/${e.entityId}`;
   if (e.entityType === "material") return `/materials/${e.entityId}`;
+  if (e.entityType === "batch") return `/batches/${e.entityId}`;
   return null;
 }

@@ -254,19 +254,29 @@ export async function recordLine(
       entityType: "batch",
       entityId: id,
       summary: {
-        before: { line: index + 1, actualGrams: line.actualGrams, lotNumber: line.lotNumber },
-        after: { line: index + 1, actualGrams: next.actualGrams, lotNumber: next.lotNumber },
+        before: { line: index + 1, actualGrams: line.actualGrams, lotNumber: line.lotNumber, initials: line.initials ?? null },
+        after: { line: index + 1, actualGrams: next.actualGrams, lotNumber: next.lotNumber, initials: next.initials ?? null },
       },
     });
   });
   return (await getBatch(actor.teamId, id))!;
 }
 
-/** Changes the notes of an open batch. */
+/** Changes the notes of an open batch; a change is kept in the audit trail with the notes before and after. */
 export async function saveBatchNotes(actor: Actor, id: string, notes: string | null) {
   await db.transaction(async (tx) => {
-    await lockOpenBatch(tx, actor.teamId, id);
-    await tx.update(batchRecords).set({ notes: notes?.trim() || null }).where(eq(batchRecords.id, id));
+    const row = await lockOpenBatch(tx, actor.teamId, id);
+    const after = notes?.trim() || null;
+    if (after === row.notes) return;
+    await tx.update(batchRecords).set({ notes: after }).where(eq(batchRecords.id, id));
+    await recordEvent(tx, {
+      teamId: actor.teamId,
+      actorId: actor.userId,
+      action: "batch.notes_changed",
+      entityType: "batch",
+      entityId: id,
+      summary: { before: { notes: row.notes }, after: { notes: after } },
+    });
   });
   return (await getBatch(actor.teamId, id))!;
 }

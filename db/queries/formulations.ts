@@ -1,8 +1,8 @@
 import { and, asc, desc, eq, exists, inArray, like, or, sql, type SQL } from "drizzle-orm";
 import { db } from "@/db";
 import type { DbOrTx } from "@/db/client";
-import { formulations, reviews, revisions, user, REVISION_STATES, type RevisionRow } from "@/db/schema";
-import { conflict, notFound } from "@/lib/api";
+import { auditEvents, formulations, reviews, revisions, user, REVISION_STATES, type RevisionRow } from "@/db/schema";
+import { conflict, duplicateKey, notFound } from "@/lib/api";
 import { diffRevisions } from "@/lib/diff";
 import { computeFormulation, ENGINE_VERSION, type FormulationInput, type FormulationResult } from "@/lib/formulation";
 import { assertReviewable, assertSubmittable, nextState, type RevisionState, type WorkflowAction } from "@/lib/workflow";
@@ -150,20 +150,22 @@ export async function insertFormulation(
   const { result, computeError } = evaluate(data.input);
   const formulationId = crypto.randomUUID();
   const revisionId = crypto.randomUUID();
-  const [dup] = await tx
-    .select({ id: formulations.id })
-    .from(formulations)
-    .where(and(eq(formulations.teamId, actor.teamId), eq(formulations.name, data.name)))
-    .limit(1);
-  if (dup) throw conflict(opts.duplicateMessage ?? `A formulation named "${data.name}" already exists in this team.`);
-  await tx.insert(formulations).values({
-    id: formulationId,
-    teamId: actor.teamId,
-    name: data.name,
-    project: data.project ?? null,
-    description: data.description ?? null,
-    createdBy: actor.userId,
-  });
+  // The unique key refuses a name the team has, also when two people create it at once.
+  await tx
+    .insert(formulations)
+    .values({
+      id: formulationId,
+      teamId: actor.teamId,
+      name: data.name,
+      project: data.project ?? null,
+      description: data.description ?? null,
+      createdBy: actor.userId,
+    })
+    .catch((err: unknown) => {
+      if (duplicateKey(err) !== "formulations_team_name_uq") throw err;
+      const message = opts.duplicateMessage ?? `A formulation named "${data.name}" already exists in this team.`;
+      throw conflict(message, { name: message });
+    });
   await tx.insert(revisions).values({
     id: revisionId,
     teamId: actor.teamId,
@@ -193,16 +195,70 @@ export async function createFormulation(
   return db.transaction((tx) => insertFormulation(tx, actor, data));
 }
 
-async function lockRevision(tx: DbOrTx, teamId: string, revisionId: string): Promise<RevisionRow> {
+/**
+ * The formulation a revision belongs to (it never changes). Read before the
+ * transaction starts, so that the transaction's first read is its lock.
+ */
+async function formulationOfRevision(teamId: string, revisionId: string): Promise<string> {
+  const [owner] = await db
+    .select({ formulationId: revisions.formulationId })
+    .from(revisions)
+    .where(and(eq(revisions.teamId, teamId), eq(revisions.id, revisionId)))
+    .limit(1);
+  if (!owner) throw notFound("revision");
+  return owner.formulationId;
+}
+
+/**
+ * Locks a revision for a change, and its formulation first: every change of a
+ * formulation's revisions (save, submit, review, release, archive, a new
+ * revision) takes the formulation's row lock before a revision's, so two
+ * people releasing two revisions at once wait for each other instead of both
+ * finding no other released revision, and the locks are always taken in one
+ * order (no deadlock). Call it first in the transaction: a plain read before
+ * it would fix the transaction's snapshot before the lock was granted, and
+ * later plain reads would miss what the previous lock holder committed.
+ */
+async function lockRevision(tx: DbOrTx, teamId: string, revisionId: string, formulationId: string): Promise<RevisionRow> {
+  await tx
+    .select({ id: formulations.id })
+    .from(formulations)
+    .where(and(eq(formulations.teamId, teamId), eq(formulations.id, formulationId)))
+    .for("update");
   const [row] = await tx
     .select()
     .from(revisions)
-    .where(and(eq(revisions.teamId, teamId), eq(revisions.id, revisionId)))
+    .where(and(eq(revisions.teamId, teamId), eq(revisions.id, revisionId), eq(revisions.formulationId, formulationId)))
     .for("update")
     .limit(1);
   if (!row) throw notFound("revision");
   return row;
 }
+
+/**
+ * Everyone who authored a revision's content: its creator, and whoever saved,
+ * started or submitted it (from the audit trail, written in the same
+ * transaction as each change). None of them may review it.
+ */
+async function authorsOf(tx: DbOrTx, teamId: string, rev: RevisionRow): Promise<string[]> {
+  const rows = await tx
+    .selectDistinct({ actorId: auditEvents.actorId })
+    .from(auditEvents)
+    .where(
+      and(
+        eq(auditEvents.teamId, teamId),
+        eq(auditEvents.entityType, "revision"),
+        eq(auditEvents.entityId, rev.id),
+        inArray(auditEvents.action, AUTHORING_ACTIONS),
+      ),
+    );
+  const ids = new Set(rows.map((r) => r.actorId).filter((id): id is string => !!id));
+  if (rev.authorId) ids.add(rev.authorId);
+  return [...ids];
+}
+
+/** Audit actions on a revision that change or vouch for its content. */
+const AUTHORING_ACTIONS = ["revision.started", "revision.saved", "revision.submitted", "revision.seeded"];
 
 async function touchFormulation(tx: DbOrTx, formulationId: string, number: number, state: RevisionState) {
   // The list shows the newest revision's state; older revisions changing state do not move it.
@@ -218,8 +274,9 @@ async function touchFormulation(tx: DbOrTx, formulationId: string, number: numbe
  */
 export async function saveDraft(actor: Actor, revisionId: string, data: { input: FormulationInput; version: number }) {
   const { result, computeError } = evaluate(data.input);
+  const formulationId = await formulationOfRevision(actor.teamId, revisionId);
   return db.transaction(async (tx) => {
-    const current = await lockRevision(tx, actor.teamId, revisionId);
+    const current = await lockRevision(tx, actor.teamId, revisionId, formulationId);
     if (current.state !== "draft") {
       throw conflict(
         `Revision ${current.number} is ${current.state.replace("_", " ")} and can no longer change. Start a new revision to edit it.`,
@@ -320,8 +377,9 @@ export async function transition(
   action: WorkflowAction,
   opts: { comment?: string | null } = {},
 ): Promise<TransitionOutcome> {
+  const formulationId = await formulationOfRevision(actor.teamId, revisionId);
   return db.transaction(async (tx) => {
-    const rev = await lockRevision(tx, actor.teamId, revisionId);
+    const rev = await lockRevision(tx, actor.teamId, revisionId, formulationId);
     const to = nextState(rev.state, action);
     const now = new Date();
     const set: Partial<typeof revisions.$inferInsert> = { state: to };
@@ -333,7 +391,7 @@ export async function transition(
       assertReviewable({
         decision: action === "approve" ? "approved" : "returned",
         reviewerId: actor.userId,
-        authorId: rev.authorId,
+        authorIds: await authorsOf(tx, actor.teamId, rev),
         comment: opts.comment,
         thermalStatus: rev.result?.thermal.status,
       });
@@ -352,10 +410,12 @@ export async function transition(
     if (action === "release") {
       set.releasedAt = now;
       // One released revision per formulation: the previous one is archived.
+      // Under the formulation's lock; a locking read besides, so it sees the latest committed state.
       const older = await tx
         .select({ id: revisions.id, number: revisions.number })
         .from(revisions)
-        .where(and(eq(revisions.formulationId, rev.formulationId), eq(revisions.state, "released")));
+        .where(and(eq(revisions.formulationId, rev.formulationId), eq(revisions.state, "released")))
+        .for("update");
       for (const o of older) {
         await tx.update(revisions).set({ state: "archived" }).where(eq(revisions.id, o.id));
         await recordEvent(tx, {

@@ -2,7 +2,22 @@ import { and, asc, desc, eq, inArray, like, or, sql, type SQL } from "drizzle-or
 import { db } from "@/db";
 import { materials, MATERIAL_KINDS, type MaterialRow } from "@/db/schema";
 import type { Material } from "@/lib/formulation";
+import { conflict, duplicateKey } from "@/lib/api";
 import { recordEvent } from "./audit";
+
+/**
+ * Turns the unique-key clash of two materials with one name (also when two
+ * people save at the same moment) into a 409 that names the field.
+ */
+function nameTaken(name: string) {
+  return (err: unknown): never => {
+    if (duplicateKey(err) === "materials_team_name_uq") {
+      const message = `The library already has a material named "${name}".`;
+      throw conflict(message, { "material.name": message });
+    }
+    throw err;
+  };
+}
 
 export type MaterialKind = (typeof MATERIAL_KINDS)[number];
 
@@ -89,7 +104,7 @@ export async function createMaterial(teamId: string, userId: string, material: M
       entityId: id,
       summary: { after: { name: material.name, kind: material.kind } },
     });
-  });
+  }).catch(nameTaken(material.name));
   return (await getMaterial(teamId, id))!;
 }
 
@@ -110,7 +125,7 @@ export async function updateMaterial(teamId: string, userId: string, id: string,
       entityId: id,
       summary: { before: { name: before.name, kind: before.kind }, after: { name: material.name, kind: material.kind } },
     });
-  });
+  }).catch(nameTaken(material.name));
   return getMaterial(teamId, id);
 }
 

@@ -1,6 +1,7 @@
-import { and, asc, eq, sql } from "drizzle-orm";
+import { and, asc, eq } from "drizzle-orm";
 import { db } from "@/db";
-import { invitation, member, user } from "@/db/schema";
+import type { Tx } from "@/db/client";
+import { invitation, member, organization, user } from "@/db/schema";
 import { conflict, notFound } from "@/lib/api";
 import type { RoleName } from "@/lib/permissions";
 import { recordEvent } from "./audit";
@@ -38,20 +39,30 @@ export async function listInvitations(teamId: string) {
     .orderBy(asc(invitation.createdAt));
 }
 
-async function adminCount(teamId: string): Promise<number> {
-  const [row] = await db
-    .select({ n: sql<number>`count(*)` })
+/**
+ * Locks the team for a change of its members, then the member row, and counts
+ * the team's admins with a locking read. Two admins demoting or removing each
+ * other at the same moment are thus taken one after the other, and the
+ * second sees the first's change: the team always keeps an admin.
+ */
+async function lockMember(tx: Tx, teamId: string, memberId: string) {
+  const [team] = await tx.select({ id: organization.id }).from(organization).where(eq(organization.id, teamId)).for("update");
+  if (!team) throw notFound("member");
+  const [m] = await tx.select().from(member).where(and(eq(member.organizationId, teamId), eq(member.id, memberId))).for("update").limit(1);
+  if (!m) throw notFound("member");
+  const admins = await tx
+    .select({ id: member.id })
     .from(member)
-    .where(and(eq(member.organizationId, teamId), eq(member.role, "admin")));
-  return Number(row?.n ?? 0);
+    .where(and(eq(member.organizationId, teamId), eq(member.role, "admin")))
+    .for("update");
+  return { m, adminCount: admins.length };
 }
 
 /** Changes a member's role; the team always keeps at least one admin. */
 export async function changeRole(teamId: string, actorId: string, memberId: string, role: RoleName) {
   return db.transaction(async (tx) => {
-    const [m] = await tx.select().from(member).where(and(eq(member.organizationId, teamId), eq(member.id, memberId))).for("update").limit(1);
-    if (!m) throw notFound("member");
-    if (m.role === "admin" && role !== "admin" && (await adminCount(teamId)) <= 1) {
+    const { m, adminCount } = await lockMember(tx, teamId, memberId);
+    if (m.role === "admin" && role !== "admin" && adminCount <= 1) {
       throw conflict("This is the team's last admin. Make someone else admin first.");
     }
     await tx.update(member).set({ role }).where(eq(member.id, memberId));
@@ -70,9 +81,8 @@ export async function changeRole(teamId: string, actorId: string, memberId: stri
 /** Removes a member; never the team's last admin. */
 export async function removeMember(teamId: string, actorId: string, memberId: string) {
   return db.transaction(async (tx) => {
-    const [m] = await tx.select().from(member).where(and(eq(member.organizationId, teamId), eq(member.id, memberId))).for("update").limit(1);
-    if (!m) throw notFound("member");
-    if (m.role === "admin" && (await adminCount(teamId)) <= 1) {
+    const { m, adminCount } = await lockMember(tx, teamId, memberId);
+    if (m.role === "admin" && adminCount <= 1) {
       throw conflict("This is the team's last admin and cannot be removed.");
     }
     await tx.delete(member).where(eq(member.id, memberId));

@@ -29,6 +29,7 @@ export {
   type ProcessStep,
 } from "./input-schema";
 export { parseFormulationInput } from "./validate";
+export { textProblem, nameText, multilineText } from "./text-rules";
 export { parseFormula, molarMassOf } from "./formula";
 export { residueYield } from "./precursor";
 export { hardLimit } from "./thermal";

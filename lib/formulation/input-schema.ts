@@ -1,6 +1,7 @@
 import { z } from "zod";
 import { WEIGHT_FRACTION_SUM_TOLERANCE } from "./constants";
 import { dec, ZERO } from "./decimal";
+import { nameText } from "./text-rules";
 import { materialSchema, type Material, type MaterialKind } from "./material-schema";
 import { BATCH_AMOUNT, DENSITY_G_PER_CM3, DURATION_H, MARGIN_C, MOLAR_RATIO, TEMPERATURE_C, WEIGHT_FRACTION } from "./limits";
 import { fraction, nonEmptyString, positiveNumber, rangedNumber, required, zeroOrRangedNumber } from "./zod-helpers";
@@ -119,7 +120,7 @@ export const catalystSpecSchema = z.object(
  */
 export const processStepSchema = z.object(
   {
-    name: nonEmptyString("step name"),
+    name: nameText("step name", { max: 200 }),
     temperatureC: rangedNumber("step temperature (°C)", TEMPERATURE_C),
     durationH: rangedNumber("step duration (h)", DURATION_H),
   },

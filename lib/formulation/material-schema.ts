@@ -7,6 +7,7 @@ import {
   RESIDUE_UNITS_PER_MOLECULE,
   TEMPERATURE_C,
 } from "./limits";
+import { nameText } from "./text-rules";
 import { fraction, nonEmptyString, rangedNumber, required, zeroOrRangedNumber } from "./zod-helpers";
 
 import { MATERIAL_KINDS, type MaterialKind } from "./kinds";
@@ -15,6 +16,9 @@ export { MATERIAL_KINDS, type MaterialKind };
 
 /** Tolerance on assay + waterFraction + solventFraction ≤ 1 (dimensionless). Common practice, no source. */
 const COMPOSITION_SUM_TOLERANCE = 1e-9;
+
+/** Longest material name (characters); the database column holds 200. */
+export const MATERIAL_NAME_MAX = 200;
 
 /** CAS Registry Number layout: 2–7 digits, 2 digits, 1 check digit. */
 const CAS_NUMBER = /^\d{2,7}-\d{2}-\d$/;
@@ -133,7 +137,7 @@ export const materialSchema = z
   .object(
     {
       id: nonEmptyString("material id"),
-      name: nonEmptyString("material name"),
+      name: nameText("material name", { max: MATERIAL_NAME_MAX }),
       kind: z.enum(MATERIAL_KINDS, {
         error: `kind must be one of ${MATERIAL_KINDS.join(", ")}`,
       }),

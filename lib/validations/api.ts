@@ -1,11 +1,12 @@
 import { z } from "zod";
 import { formulationInputSchema, materialSchema } from "@/lib/formulation";
 import { ROLE_NAMES } from "@/lib/permissions";
+import { batchNotesSchema, recordLineSchema, startBatchSchema } from "@/lib/spreadsheet/api-schemas";
 import { REVISION_STATES } from "@/lib/workflow-states";
+import { lineTextField, nameField, notesField } from "./text";
 
 const page = z.coerce.number().int().min(1).max(100_000).optional();
 const pageSize = z.coerce.number().int().min(1).max(200).optional();
-const text = (max: number) => z.string().trim().min(1, "Required").max(max, `At most ${max} characters`);
 
 export const formulationListQuerySchema = z.object({
   q: z.string().trim().max(200).optional(),
@@ -18,9 +19,9 @@ export const formulationListQuerySchema = z.object({
 });
 
 export const createFormulationSchema = z.strictObject({
-  name: text(200),
-  project: z.string().trim().max(200).nullish(),
-  description: z.string().trim().max(5000).nullish(),
+  name: nameField(200),
+  project: lineTextField(200, "Project"),
+  description: notesField(5000, "Description").optional(),
   input: formulationInputSchema,
 });
 
@@ -67,7 +68,7 @@ export const inviteSchema = z.strictObject({
   role: roleSchema,
 });
 
-export const createTeamSchema = z.strictObject({ name: text(120) });
+export const createTeamSchema = z.strictObject({ name: nameField(120, "Team name") });
 
 export const auditQuerySchema = z.object({
   entityId: z.string().max(36).optional(),
@@ -79,6 +80,17 @@ export const auditQuerySchema = z.object({
   page,
   pageSize,
 });
+
+/*
+ * The batch routes' schemas (lib/spreadsheet/api-schemas.ts) with the shared
+ * text rule on what people type into a batch record.
+ */
+export const startBatchBodySchema = startBatchSchema.extend({ notes: notesField(5000).optional() });
+export const recordLineBodySchema = recordLineSchema.extend({
+  lotNumber: lineTextField(100, "Lot number"),
+  initials: lineTextField(10, "Initials"),
+});
+export const batchNotesBodySchema = batchNotesSchema.extend({ notes: notesField(5000) });
 
 /** Parses URL search params with a schema (422 on bad values). */
 export function parseQuery<T>(url: string, schema: z.ZodType<T>): T {

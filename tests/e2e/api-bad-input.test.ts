@@ -22,6 +22,24 @@ interface BadCase {
 }
 
 const NUMBER_BAD: Json[] = ["abc", null, true, [], {}, "NaN", "Infinity", "1e999"];
+/** Names that cannot be read, read differently than stored, or break the text: refused with 422 naming the field. */
+const NAME_BAD: string[] = [
+  "\u200B",
+  "\u2060\u2060",
+  "\uFEFF",
+  "\u00AD",
+  " \t ",
+  "\u3164",
+  "Resin\u202Etxt.exe",
+  "Resin \u2066isolate\u2069",
+  "Resin\u200E",
+  "Resin\u061C",
+  "Resin\u0000",
+  "Resin\u0007",
+  "Resin \uD800",
+  "Resin \uDFFF",
+  "x".repeat(201),
+];
 const STRING_BAD: Json[] = [12345, null, false, [], { x: 1 }];
 
 /** Every leaf of a JSON value with its dotted path. */
@@ -172,6 +190,12 @@ beforeAll(async () => {
     ["compute", f2, "POST", () => "/api/compute", "just a string", "body"],
     ["compute", f2, "POST", () => "/api/compute", { ...(validInput as object), components: [] }, "components"],
   ];
+  for (const name of NAME_BAD) {
+    simple.push(["create formulation", f2, "POST", () => "/api/formulations", { name, input: validInput }, "name"]);
+    simple.push(["create team", a, "POST", () => "/api/teams", { name }, "name"]);
+    simple.push(["create material", f2, "POST", () => "/api/materials", { material: setAt(validMaterial, "name", name) }, "material.name"]);
+    simple.push(["update material", f2, "PUT", () => `/api/materials/${materialId}`, { material: setAt(validMaterial, "name", name) }, "material.name"]);
+  }
   for (const [label, client, method, path, body, field] of simple) {
     cases.push({ label: `${label} ${JSON.stringify(body).slice(0, 60)}`, client, method, path, body: JSON.stringify(body), field });
   }
@@ -194,6 +218,14 @@ beforeAll(async () => {
   for (const v of STRING_BAD.filter((x) => x !== null)) batchBad.push(["PATCH", () => `/api/batches/${batchId}`, { notes: v }, "notes"]);
   for (const v of NUMBER_BAD.concat([-1, 0, 11])) batchBad.push(["POST", () => "/api/batches", { revisionId: released, balanceResolutionGrams: v }, "balanceResolutionGrams"]);
   for (const v of STRING_BAD) batchBad.push(["POST", () => "/api/batches", { revisionId: v }, "revisionId"]);
+  // Short forms that fit initials (10 characters); text that trims to nothing clears a field and is not bad input.
+  const shortBad = NAME_BAD.map((n) => n.replace("Resin", "R").replace("isolate", "i")).filter((n) => n.length <= 10 && n.trim() !== "");
+  for (const name of shortBad) {
+    batchBad.push(["PATCH", () => `/api/batches/${batchId}/lines/0`, { initials: name }, "initials"]);
+    batchBad.push(["PATCH", () => `/api/batches/${batchId}/lines/0`, { lotNumber: name }, "lotNumber"]);
+    batchBad.push(["PATCH", () => `/api/batches/${batchId}`, { notes: name }, "notes"]);
+    batchBad.push(["POST", () => "/api/batches", { revisionId: released, notes: name }, "notes"]);
+  }
   for (const [method, path, body, field] of batchBad) {
     cases.push({ label: `batch ${method} ${JSON.stringify(body).slice(0, 50)}`, client: p, method, path, body: JSON.stringify(body), field });
   }
@@ -301,5 +333,6 @@ describe("bad input on every write route", () => {
     }
     expect(problems).toEqual([]);
     expect(await snapshot()).toEqual(before);
-  });
+    // Over 400 requests one after another: room for a busy machine (a limit on the run, not an assertion on its time).
+  }, 240_000);
 });

@@ -63,3 +63,30 @@ describe("apiErrorFrom", () => {
     expect([other.code, other.message, other.fields]).toEqual(["http_502", "The server answered 502.", {}]);
   });
 });
+
+describe("errorResponse and MariaDB's own refusals", () => {
+  // mysql2's error fields as MariaDB 10.11 sends them (ER_DUP_ENTRY 1062, ER_DATA_TOO_LONG 1406), wrapped as Drizzle 0.45 wraps a failed query.
+  const wrapped = (cause: object) => Object.assign(new Error("Failed query: insert into `materials` …"), { cause });
+
+  it("returns 409 naming material.name for a duplicate material name", async () => {
+    const err = wrapped({ code: "ER_DUP_ENTRY", errno: 1062, sqlMessage: "Duplicate entry 'team-1-Ethanol' for key 'materials_team_name_uq'" });
+    const res = errorResponse(err);
+    expect(res.status).toBe(409);
+    const body = (await res.json()) as { error: { code: string; fields: Record<string, string> } };
+    expect(body.error.code).toBe("duplicate");
+    expect(Object.keys(body.error.fields)).toEqual(["material.name"]);
+  });
+
+  it("returns 409 for a duplicate on a key it does not know, without its values", async () => {
+    const res = errorResponse(wrapped({ code: "ER_DUP_ENTRY", errno: 1062, sqlMessage: "Duplicate entry 'secret' for key 'other_uq'" }));
+    expect(res.status).toBe(409);
+    expect(await res.text()).not.toMatch(/secret/);
+  });
+
+  it("returns 422 naming the column for a value too long for it", async () => {
+    const res = errorResponse(wrapped({ code: "ER_DATA_TOO_LONG", errno: 1406, sqlMessage: "Data too long for column 'name' at row 1" }));
+    expect(res.status).toBe(422);
+    const body = (await res.json()) as { error: { fields: Record<string, string> } };
+    expect(Object.keys(body.error.fields)).toEqual(["name"]);
+  });
+});

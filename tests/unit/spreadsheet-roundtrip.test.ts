@@ -82,7 +82,9 @@ describe("spreadsheet round trip", () => {
   describe("generated formulations", () => {
     const demo = demoInputs()[1]!.input; // HC-3 r2: GPTMS + TEOS + Ti isopropoxide, fill solvent
     const awkwardName = fc.oneof(
-      fc.constantFrom("=cmd|' /C calc'!A0", "+SUM(A1)", "-neg", "@at", "\tTab", "Plain, with comma", 'Quote "q"', "Ünïcode µ"),
+      // A name with a tab or another control character is refused on import (the shared text rule); a leading
+      // tab's neutralising on export is checked in spreadsheet-export.test.ts.
+      fc.constantFrom("=cmd|' /C calc'!A0", "+SUM(A1)", "-neg", "@at", "Plain, with comma", 'Quote "q"', "Ünïcode µ"),
       fc.string({ minLength: 1, maxLength: 30 }).filter((s) => s.trim() === s && s.trim().length > 0 && !/^\[.*\]$/.test(s) && !s.startsWith("'")),
     );
     const arb = fc.record({

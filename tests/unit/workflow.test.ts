@@ -41,13 +41,20 @@ describe("assertSubmittable", () => {
 });
 
 describe("assertReviewable", () => {
-  const base = { reviewerId: "r", authorId: "a", comment: null, thermalStatus: "clear" as const };
+  const base = { reviewerId: "r", authorIds: ["a"], comment: null, thermalStatus: "clear" as const };
   it("lets another person approve a clear revision without a comment", () => {
     expect(() => assertReviewable({ ...base, decision: "approved" })).not.toThrow();
   });
   it("refuses the author's own revision, either way", () => {
     expect(() => assertReviewable({ ...base, reviewerId: "a", decision: "approved" })).toThrow(/another reviewer/);
     expect(() => assertReviewable({ ...base, reviewerId: "a", decision: "returned", comment: "x" })).toThrow(/another reviewer/);
+  });
+  it("refuses everyone who authored a change (creator, editor, submitter), not only the creator", () => {
+    const authors = { ...base, authorIds: ["creator", "editor", "submitter"] };
+    for (const reviewerId of authors.authorIds) {
+      expect(() => assertReviewable({ ...authors, reviewerId, decision: "approved" })).toThrow(/another reviewer/);
+    }
+    expect(() => assertReviewable({ ...authors, reviewerId: "r", decision: "approved" })).not.toThrow();
   });
   it("refuses to approve a thermal fail, even with a comment", () => {
     expect(() => assertReviewable({ ...base, decision: "approved", thermalStatus: "fail", comment: "fine" })).toThrow(/cannot be approved/);

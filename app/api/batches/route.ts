@@ -1,9 +1,9 @@
 import { listBatches, startBatch } from "@/db/queries/batches";
 import { readJson, route } from "@/lib/api";
 import { can } from "@/lib/permissions";
-import { batchListQuerySchema, startBatchSchema } from "@/lib/spreadsheet/api-schemas";
+import { batchListQuerySchema } from "@/lib/spreadsheet/api-schemas";
 import { requireContext } from "@/lib/session";
-import { parseQuery } from "@/lib/validations/api";
+import { parseQuery, startBatchBodySchema } from "@/lib/validations/api";
 
 /** GET /api/batches?formulationId=&revisionId=&state= : the team's batch records, newest first. */
 export const GET = route(async (req) => {
@@ -14,7 +14,7 @@ export const GET = route(async (req) => {
 /** POST /api/batches { revisionId, notes?, balanceResolutionGrams? } : starts a batch from a released revision. */
 export const POST = route(async (req) => {
   const ctx = await requireContext(req.headers, "batch:create");
-  const body = await readJson(req, startBatchSchema);
+  const body = await readJson(req, startBatchBodySchema);
   const releasedOnly = !can(ctx.role, "formulation:readUnreleased");
   return Response.json(await startBatch(ctx, body.revisionId, { ...body, releasedOnly }), { status: 201 });
 });

@@ -1,5 +1,5 @@
-import { createMaterial, getMaterialByName, listMaterials } from "@/db/queries/materials";
-import { conflict, readJson, route } from "@/lib/api";
+import { createMaterial, listMaterials } from "@/db/queries/materials";
+import { readJson, route } from "@/lib/api";
 import { requireContext } from "@/lib/session";
 import { materialBodySchema, materialListQuerySchema, parseQuery } from "@/lib/validations/api";
 
@@ -11,8 +11,6 @@ export const GET = route(async (req) => {
 export const POST = route(async (req) => {
   const ctx = await requireContext(req.headers, "material:create");
   const { material, casNumber } = await readJson(req, materialBodySchema);
-  if (await getMaterialByName(ctx.teamId, material.name)) {
-    throw conflict(`The library already has a material named "${material.name}".`);
-  }
+  // A name the team already has is refused by the unique key (409), also when two people save at once.
   return Response.json(await createMaterial(ctx.teamId, ctx.userId, material, casNumber), { status: 201 });
 });

@@ -1,6 +1,6 @@
 import { getBatch, saveBatchNotes } from "@/db/queries/batches";
 import { notFound, readJson, route } from "@/lib/api";
-import { batchNotesSchema } from "@/lib/spreadsheet/api-schemas";
+import { batchNotesBodySchema } from "@/lib/validations/api";
 import { requireContext } from "@/lib/session";
 
 /** GET /api/batches/:id : the record with each line's deviation and the composition made. */
@@ -16,6 +16,6 @@ export const GET = route<{ id: string }>(async (req, { params }) => {
 export const PATCH = route<{ id: string }>(async (req, { params }) => {
   const ctx = await requireContext(req.headers, "batch:update");
   const { id } = await params;
-  const { notes } = await readJson(req, batchNotesSchema);
+  const { notes } = await readJson(req, batchNotesBodySchema);
   return Response.json(await saveBatchNotes(ctx, id, notes));
 });

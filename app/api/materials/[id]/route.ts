@@ -1,5 +1,5 @@
-import { deleteMaterial, getMaterial, getMaterialByName, updateMaterial } from "@/db/queries/materials";
-import { conflict, notFound, readJson, route } from "@/lib/api";
+import { deleteMaterial, getMaterial, updateMaterial } from "@/db/queries/materials";
+import { notFound, readJson, route } from "@/lib/api";
 import { requireContext } from "@/lib/session";
 import { materialBodySchema } from "@/lib/validations/api";
 
@@ -15,8 +15,6 @@ export const PUT = route<{ id: string }>(async (req, { params }) => {
   const { id } = await params;
   if (!(await getMaterial(ctx.teamId, id))) throw notFound("material");
   const { material, casNumber } = await readJson(req, materialBodySchema);
-  const same = await getMaterialByName(ctx.teamId, material.name);
-  if (same && same.id !== id) throw conflict(`The library already has a material named "${material.name}".`);
   const updated = await updateMaterial(ctx.teamId, ctx.userId, id, material, casNumber);
   if (!updated) throw notFound("material");
   return Response.json(updated);

@@ -1,6 +1,6 @@
 import { recordLine } from "@/db/queries/batches";
 import { ApiError, readJson, route } from "@/lib/api";
-import { recordLineSchema } from "@/lib/spreadsheet/api-schemas";
+import { recordLineBodySchema } from "@/lib/validations/api";
 import { requireContext } from "@/lib/session";
 
 /** PATCH /api/batches/:id/lines/:index { actualGrams?, lotNumber?, initials? } : one line, 0-based index. */
@@ -9,6 +9,6 @@ export const PATCH = route<{ id: string; index: string }>(async (req, { params }
   const { id, index } = await params;
   const n = Number(index);
   if (!Number.isInteger(n) || n < 0 || n > 10_000) throw new ApiError(404, "not_found", "No such line.");
-  const body = await readJson(req, recordLineSchema);
+  const body = await readJson(req, recordLineBodySchema);
   return Response.json(await recordLine(ctx, id, n, body));
 });
