@@ -64,7 +64,9 @@ describe("GET /api/revisions/:id/export", () => {
     expect(res.headers.get("content-type")).toBe("text/csv; charset=utf-8");
     const bytes = new Uint8Array(await res.arrayBuffer());
     expect([...bytes.slice(0, 3)]).toEqual([0xef, 0xbb, 0xbf]); // UTF-8 byte-order mark, so spreadsheet programs read "³" and "°" right
-    expect(new TextDecoder().decode(bytes).split("\r\n")[0]).toBe("Order,Material,Role,Lot number,Target mass as supplied (g),Target volume as supplied (mL),Actual mass (g),Time (hh:mm),Initials");
+    expect(new TextDecoder().decode(bytes).split("\r\n")[0]).toBe(
+      ["Order", "Material", "Role", "Lot number", "Target mass as supplied (g)", "Target volume as supplied (mL)", "Actual mass (g)", "Time (hh:mm)", "Initials"].map((h) => `"${h}"`).join(","),
+    );
   });
 
   it("answers 404 to production for a draft, 404 to another team, 401 when signed out, 422 for an unknown format", async () => {
