@@ -10,7 +10,7 @@
 import { describe, expect, it } from "vitest";
 import { readUpload, UploadError } from "@/lib/spreadsheet/read";
 import { IMPORT_LIMITS, MATERIALS_INPUT_SHEETS, SHEET } from "@/lib/spreadsheet/template";
-import { readWorkbookInWorker } from "@/lib/spreadsheet/worker";
+import { memoryHeadroomBytes, readWorkbookInWorker } from "@/lib/spreadsheet/worker";
 import { ZIP_LIMITS } from "@/lib/spreadsheet/zip-guard";
 import { bombSheet, deflated, SHEET_PATH, workbookEntries, workbookWith, writeZip, type RawEntry } from "../helpers/zip";
 
@@ -117,6 +117,20 @@ describe("zip bombs in .xlsx uploads", () => {
         expect((err as UploadError).message).toContain("768 MB");
       } finally {
         delete process.env.GELWRIGHT_IMPORT_SPARE_WORKERS;
+      }
+    });
+
+    it("takes the watchdog's headroom from GELWRIGHT_IMPORT_MEMORY_HEADROOM_MB, and 768 MB for anything out of range", () => {
+      const saved = process.env.GELWRIGHT_IMPORT_MEMORY_HEADROOM_MB;
+      try {
+        for (const [setting, mb] of [[undefined, 768], ["", 768], ["1024", 1024], ["64", 64], ["63", 768], ["1.5", 768], ["lots", 768], ["70000", 768]] as const) {
+          if (setting === undefined) delete process.env.GELWRIGHT_IMPORT_MEMORY_HEADROOM_MB;
+          else process.env.GELWRIGHT_IMPORT_MEMORY_HEADROOM_MB = setting;
+          expect(memoryHeadroomBytes(), String(setting)).toBe(mb * MiB);
+        }
+      } finally {
+        if (saved === undefined) delete process.env.GELWRIGHT_IMPORT_MEMORY_HEADROOM_MB;
+        else process.env.GELWRIGHT_IMPORT_MEMORY_HEADROOM_MB = saved;
       }
     });
 
