@@ -10,6 +10,9 @@
  * The main figure is taken that way (the benchmark waits for the spare
  * between runs, outside the timing); the figure with no spare (the first
  * upload after a start, or GELWRIGHT_IMPORT_SPARE_WORKERS=0) is printed too.
+ * Also printed: the growth of this process's resident memory while the
+ * largest sheet the limits allow (5,000 rows × 60 columns) is read, and its
+ * sizes against the archive caps (lib/spreadsheet/zip-guard.ts).
  */
 import { performance } from "node:perf_hooks";
 import * as XLSX from "xlsx";
@@ -18,6 +21,7 @@ import { materialsWorkbook } from "../lib/spreadsheet/export-materials";
 import { previewMaterialsImport } from "../lib/spreadsheet/import-materials";
 import { MATERIALS_INPUT_SHEETS } from "../lib/spreadsheet/template";
 import { readWorkbookInWorker, spareWorkersReady } from "../lib/spreadsheet/worker";
+import { readCentralDirectory, ZIP_LIMITS } from "../lib/spreadsheet/zip-guard";
 
 const ROWS = 4_999;
 const RUNS = 5;
@@ -71,6 +75,32 @@ async function main() {
   console.log(`  of which the worker-thread parse      ${median(parseOnly).toFixed(0).padStart(6)} ms`);
   console.log(`ratio                                   ${(median(full) / median(bare)).toFixed(2).padStart(6)}×   target ≤ 1.5×`);
   console.log(`with no warmed worker waiting           ${median(cold).toFixed(0).padStart(6)} ms  (${(median(cold) / median(bare)).toFixed(2)}×; first upload after a start)`);
+  delete process.env.GELWRIGHT_IMPORT_SPARE_WORKERS;
+  await largestSheetMemory();
+}
+
+/** Resident-memory growth while a full 5,000 × 60 sheet of mixed text and numbers is read. */
+async function largestSheetMemory() {
+  const MiB = 1024 * 1024;
+  const aoa: (string | number)[][] = [];
+  for (let r = 0; r < 5000; r++) {
+    const row: (string | number)[] = [];
+    for (let c = 0; c < 60; c++) row.push(c % 3 === 0 ? `text value ${r}-${c} with some words` : c % 3 === 1 ? (r * 60 + c) / 7 : `r${r}c${c}`);
+    aoa.push(row);
+  }
+  const book = XLSX.utils.book_new();
+  XLSX.utils.book_append_sheet(book, XLSX.utils.aoa_to_sheet(aoa), "Materials");
+  const bytes = XLSX.write(book, { type: "buffer", bookType: "xlsx", compression: true }) as Buffer;
+  const sheet = readCentralDirectory(bytes).find((e) => e.name.endsWith("sheet1.xml"))!;
+  await spareWorkersReady();
+  const before = process.memoryUsage.rss();
+  let peak = before;
+  const sampler = setInterval(() => (peak = Math.max(peak, process.memoryUsage.rss())), 5);
+  await readWorkbookInWorker(new Uint8Array(bytes), ["Materials"]);
+  clearInterval(sampler);
+  console.log(
+    `5,000 × 60 sheet: ${(bytes.length / MiB).toFixed(1)} MiB file, sheet XML ${(sheet.size / MiB).toFixed(1)} MiB (cap ${ZIP_LIMITS.maxEntryBytes / MiB} MiB per part, ratio ${(sheet.size / sheet.compressedSize).toFixed(1)} : 1, cap ${ZIP_LIMITS.maxRatio} : 1); resident memory +${((peak - before) / MiB).toFixed(0)} MiB at peak over ${(before / MiB).toFixed(0)} MiB`,
+  );
 }
 
 main().catch((err: unknown) => {

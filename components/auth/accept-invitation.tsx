@@ -54,7 +54,7 @@ export function AcceptInvitation({ invitationId, email }: AcceptInvitationProps)
 
   async function switchAccount() {
     await authClient.signOut();
-    router.replace(`/sign-in?next=${encodeURIComponent(`/invitations/${invitationId}`)}`);
+    router.replace(`/sign-in?next=${encodeURIComponent(`/invitations/${encodeURIComponent(invitationId)}`)}`);
     router.refresh();
   }
 

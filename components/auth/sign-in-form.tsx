@@ -9,6 +9,7 @@ import { z } from "zod";
 import { Button } from "@/components/ui/button";
 import { Field, inputClass } from "@/components/ui/field";
 import { authClient, authErrorMessage } from "@/lib/auth-client";
+import { safeNextPath } from "@/lib/safe-next";
 import { AuthCard, FormMessage } from "./auth-card";
 
 const schema = z.object({
@@ -35,7 +36,8 @@ export function SignInForm({ next, reset = false }: SignInFormProps) {
       setError(authErrorMessage(err));
       return;
     }
-    router.replace(next);
+    // Checked again here: the prop comes from the address bar through the server, and this is where the browser goes.
+    router.replace(safeNextPath(next));
     router.refresh();
   });
 

@@ -9,6 +9,7 @@ import { z } from "zod";
 import { Button } from "@/components/ui/button";
 import { Field, inputClass } from "@/components/ui/field";
 import { authClient, authErrorMessage } from "@/lib/auth-client";
+import { safeNextPath } from "@/lib/safe-next";
 import { AuthCard, FormMessage } from "./auth-card";
 
 const schema = z
@@ -43,7 +44,7 @@ export function SignUpForm({ next }: SignUpFormProps) {
       setError(authErrorMessage(err));
       return;
     }
-    router.replace(next ?? "/create-team");
+    router.replace(safeNextPath(next, "/create-team"));
     router.refresh();
   });
 

@@ -6,7 +6,8 @@
 import { csvToSheets, CsvError } from "./csv";
 import { IMPORT_LIMITS, type ImportLimits } from "./template";
 import type { ParsedFile } from "./types";
-import { readWorkbookInWorker, UploadError } from "./worker";
+import { UploadError } from "./upload-error";
+import { readWorkbookInWorker } from "./worker";
 
 export { UploadError };
 

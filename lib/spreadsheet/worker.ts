@@ -10,23 +10,26 @@
  * the row and column limits, and only plain values (no formulas, styles,
  * HTML, macros). What comes back is copied into fresh arrays of strings,
  * numbers and booleans; nothing parsed is ever merged into an existing object.
+ *
+ * Memory is bounded in three ways. The worker's `resourceLimits` cap its
+ * JavaScript heap only (Buffers and ArrayBuffers live outside it), so the
+ * archive is first checked and unpacked by zip-guard.ts under hard size
+ * limits and handed over with every entry stored: `xlsx` then never inflates
+ * and never allocates a buffer from a size the file declares, and what the
+ * worker holds outside its heap is at most ZIP_LIMITS.maxTotalBytes (the
+ * buffer is transferred, not copied). As a second line, a watchdog samples
+ * the process's resident memory while a parse runs and stops the worker
+ * when it grew by more than GELWRIGHT_IMPORT_MEMORY_HEADROOM_MB (default
+ * 768) since the parse began.
  */
 import { join } from "node:path";
 import { Worker } from "node:worker_threads";
 import { IMPORT_LIMITS, type ImportLimits } from "./template";
 import type { Cell, SheetGrid } from "./types";
+import { UploadError } from "./upload-error";
+import { unpackWorkbook, ZIP_LIMITS, type ZipLimits } from "./zip-guard";
 
-/** A problem with an upload as a whole; `status` is the HTTP status to answer with. */
-export class UploadError extends Error {
-  constructor(
-    readonly status: number,
-    readonly code: string,
-    message: string,
-  ) {
-    super(message);
-    this.name = "UploadError";
-  }
-}
+export { UploadError };
 
 interface WorkerRequest {
   bytes: Uint8Array;
@@ -199,11 +202,12 @@ function workerFor(request: WorkerRequest): Worker {
     const [spare] = spares.splice(i, 1);
     spare!.worker.removeAllListeners();
     spare!.worker.ref();
-    spare!.worker.postMessage(request);
+    // The unpacked workbook is handed over, not copied (its buffer is ours alone; see unpackWorkbook).
+    spare!.worker.postMessage(request, [request.bytes.buffer as ArrayBuffer]);
     return spare!.worker;
   }
   const data: WorkerData = { moduleRoot: request.moduleRoot, warm: false, request };
-  return new Worker(WORKER_SOURCE, { eval: true, workerData: data, resourceLimits: RESOURCE_LIMITS });
+  return new Worker(WORKER_SOURCE, { eval: true, workerData: data, resourceLimits: RESOURCE_LIMITS, transferList: [request.bytes.buffer as ArrayBuffer] });
 }
 
 /** Result of reading a workbook: sheet names and the sheets asked for. */
@@ -214,36 +218,60 @@ export interface WorkbookRead {
   sheets: (SheetGrid & { truncatedRows: boolean; truncatedColumns: boolean })[];
 }
 
+/** The watchdog's settings: resident-memory growth allowed during one parse, and how often it looks. */
+export interface MemoryWatch {
+  headroomBytes: number;
+  sampleMs: number;
+  /** The process's resident memory in bytes (replaceable in tests). */
+  rss: () => number;
+}
+
+/** GELWRIGHT_IMPORT_MEMORY_HEADROOM_MB (default 768; a whole number from 64 to 65,536). */
+export function memoryHeadroomBytes(): number {
+  const raw = process.env.GELWRIGHT_IMPORT_MEMORY_HEADROOM_MB;
+  const n = raw === undefined || raw === "" ? 768 : Number(raw);
+  return (Number.isInteger(n) && n >= 64 && n <= 65_536 ? n : 768) * 1024 * 1024;
+}
+
 /**
  * Parses an .xlsx file in a worker thread, reading only `wanted` sheets
  * (matched without regard to case); with `firstSheetFallback`, the first
- * sheet when none of them is present. Rejects with an UploadError.
+ * sheet when none of them is present. The archive is checked and unpacked
+ * under ZIP_LIMITS first (zip-guard.ts). Rejects with an UploadError.
  *
  * @example
  * ```ts
  * const { sheets } = await readWorkbookInWorker(bytes, ["Materials"], { firstSheetFallback: true });
  * ```
  */
-export function readWorkbookInWorker(
+export async function readWorkbookInWorker(
   bytes: Uint8Array,
   wanted: readonly string[],
-  opts: { firstSheetFallback?: boolean; limits?: ImportLimits; moduleRoot?: string } = {},
+  opts: { firstSheetFallback?: boolean; limits?: ImportLimits; zipLimits?: ZipLimits; moduleRoot?: string; memory?: Partial<MemoryWatch> } = {},
 ): Promise<WorkbookRead> {
   const limits = opts.limits ?? IMPORT_LIMITS;
+  const stored = await unpackWorkbook(bytes, opts.zipLimits ?? ZIP_LIMITS);
+  const watch: MemoryWatch = {
+    headroomBytes: opts.memory?.headroomBytes ?? memoryHeadroomBytes(),
+    sampleMs: opts.memory?.sampleMs ?? 50,
+    rss: opts.memory?.rss ?? (() => process.memoryUsage.rss()),
+  };
   const request: WorkerRequest = {
-    bytes,
+    bytes: stored,
     wanted: [...wanted],
     firstSheetFallback: opts.firstSheetFallback ?? false,
     limits: workerLimits(limits),
     moduleRoot: opts.moduleRoot ?? defaultModuleRoot(),
   };
   return new Promise<WorkbookRead>((resolve, reject) => {
+    const rssAtStart = watch.rss();
     const worker = workerFor(request);
     let settled = false;
     const finish = (fn: () => void) => {
       if (settled) return;
       settled = true;
       clearTimeout(timer);
+      clearInterval(watchdog);
       void worker.terminate();
       fn();
       // The next upload's worker warms up after this one is done, not while it parses.
@@ -260,6 +288,20 @@ export function readWorkbookInWorker(
         ),
       );
     }, limits.parseMs);
+    const watchdog = setInterval(() => {
+      const grown = watch.rss() - rssAtStart;
+      if (grown <= watch.headroomBytes) return;
+      finish(() =>
+        reject(
+          new UploadError(
+            413,
+            "too_much_memory",
+            `Reading this workbook needed more than ${Math.round(watch.headroomBytes / 1024 / 1024)} MB of memory and was stopped. Remove unused sheets, images or rows and upload it again.`,
+          ),
+        ),
+      );
+    }, watch.sampleMs);
+    watchdog.unref();
     worker.once("message", (message: WorkerReply) => {
       finish(() => {
         if (message.ok) {
@@ -286,7 +328,7 @@ export function readWorkbookInWorker(
       finish(() =>
         reject(
           err.code === "ERR_WORKER_OUT_OF_MEMORY"
-            ? new UploadError(422, "too_large", "This workbook needs too much memory to read. Remove unused sheets or rows and upload it again.")
+            ? new UploadError(413, "too_much_memory", "This workbook needs too much memory to read. Remove unused sheets or rows and upload it again.")
             : new UploadError(422, "corrupt_file", "This file could not be read as an .xlsx workbook: it is damaged or not a workbook."),
         ),
       );

@@ -77,16 +77,24 @@ function freezeHeaders(file: Buffer, headerRows: number[]): Buffer {
   return CFB.write(zip, { fileType: "zip", type: "buffer", compression: true }) as Buffer;
 }
 
+/**
+ * One CSV field: every cell is wrapped in double quotes and its double quotes
+ * are doubled (OWASP "CSV Injection"), so no separator, quote or line break
+ * inside a cell can start another cell. Numbers are quoted too (spreadsheet
+ * programs still read a quoted number as a number) and never prefixed; an
+ * empty cell stays empty.
+ */
 function csvField(value: Cell): string {
   if (value === null) return "";
   const text = typeof value === "string" ? value : String(value);
-  return /[",\r\n]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
+  return `"${text.replace(/"/g, '""')}"`;
 }
 
 /**
  * A CSV file (RFC 4180, CRLF line ends, UTF-8 with a byte-order mark so
  * spreadsheet programs read the units' symbols right). Every text cell is
- * neutralised; numbers are written in full precision with a point.
+ * neutralised and every cell quoted; numbers are written in full precision
+ * with a point.
  * Further tables follow after a blank line and a "[Sheet name]" line.
  *
  * @example

@@ -156,3 +156,29 @@ describe("the calculator's brief session memo", () => {
     expect((await post(loner.cookie)).status).toBe(403);
   });
 });
+
+describe("the address to return to after signing in", () => {
+  // Open-redirect bypasses (OWASP "Unvalidated Redirects and Forwards Cheat Sheet"):
+  // a browser reads "/\evil.example" as "//evil.example", another site.
+  const offSite = ["/\\evil.example", "//evil.example", "/\\/evil.example", "/\t/evil.example", "https://evil.example/home"];
+
+  it("redirects a signed-in member only within the site, whatever next= says", async () => {
+    const member = await signIn(demo.reviewer);
+    for (const next of offSite) {
+      const res = await member.fetch(`/sign-in?next=${encodeURIComponent(next)}`);
+      expect(res.status, next).toBeGreaterThanOrEqual(300);
+      expect(res.status, next).toBeLessThan(400);
+      const location = res.headers.get("location") ?? "";
+      expect(new URL(location, BASE).origin, `${next} → ${location}`).toBe(new URL(BASE).origin);
+      expect(new URL(location, BASE).pathname, `${next} → ${location}`).toBe("/home");
+    }
+  });
+
+  it("keeps a good path on our site", async () => {
+    const member = await signIn(demo.reviewer);
+    const res = await member.fetch(`/sign-in?next=${encodeURIComponent("/materials?sort=name")}`);
+    const location = res.headers.get("location") ?? "";
+    expect(new URL(location, BASE).origin).toBe(new URL(BASE).origin);
+    expect(location).toMatch(/\/materials\?sort=name$/);
+  });
+});

@@ -5,6 +5,7 @@
  */
 import * as XLSX from "xlsx";
 import { beforeAll, describe, expect, it } from "vitest";
+import { bombSheet, workbookWith } from "../helpers/zip";
 import { anonymous, demo, signIn, signUp, type Client } from "./http";
 
 let formulator: Client, reviewer: Client, production: Client, other: Client;
@@ -64,7 +65,9 @@ describe("GET /api/revisions/:id/export", () => {
     expect(res.headers.get("content-type")).toBe("text/csv; charset=utf-8");
     const bytes = new Uint8Array(await res.arrayBuffer());
     expect([...bytes.slice(0, 3)]).toEqual([0xef, 0xbb, 0xbf]); // UTF-8 byte-order mark, so spreadsheet programs read "³" and "°" right
-    expect(new TextDecoder().decode(bytes).split("\r\n")[0]).toBe("Order,Material,Role,Lot number,Target mass as supplied (g),Target volume as supplied (mL),Actual mass (g),Time (hh:mm),Initials");
+    expect(new TextDecoder().decode(bytes).split("\r\n")[0]).toBe(
+      ["Order", "Material", "Role", "Lot number", "Target mass as supplied (g)", "Target volume as supplied (mL)", "Actual mass (g)", "Time (hh:mm)", "Initials"].map((h) => `"${h}"`).join(","),
+    );
   });
 
   it("answers 404 to production for a draft, 404 to another team, 401 when signed out, 422 for an unknown format", async () => {
@@ -161,6 +164,20 @@ describe("POST /api/imports → preview → confirm", () => {
       expect(corrupt.status).toBe(422);
       const big = await upload(formulator, new Uint8Array(6 * 1024 * 1024).fill(65), "big.csv", { kind: "materials" });
       expect(big.status).toBe(413);
+    });
+
+    it("answers a zip bomb with 413 and a lying-size sheet with 422, in the error shape, and the app keeps answering", async () => {
+      // A 2 MB workbook whose sheet unpacks to 2,000 MiB of one repeated byte; then a sheet that claims 1,000 bytes and inflates to 300 MiB.
+      const bomb = await upload(formulator, workbookWith(bombSheet(2000)), "bomb.xlsx", { kind: "materials" });
+      expect(bomb.status).toBe(413);
+      const bombBody = (await bomb.json()) as { error: { code: string; message: string; fields: Record<string, string> } };
+      expect(bombBody.error.code).toBe("unpacks_too_large");
+      expect(bombBody.error.message).toMatch(/xl\/worksheets\/sheet1\.xml" declares [\d,]+ MB when unpacked; at most 64 MB per part/);
+      expect(bombBody.error.fields.file).toBe(bombBody.error.message);
+      const lying = await upload(formulator, workbookWith({ ...bombSheet(300), centralSize: 1000, localSize: 1000 }), "lying.xlsx", { kind: "materials" });
+      expect(lying.status).toBe(422);
+      expect(((await lying.json()) as { error: { code: string } }).error.code).toBe("size_mismatch");
+      expect((await formulator.fetch("/api/health")).status).toBe(200);
     });
   });
 });

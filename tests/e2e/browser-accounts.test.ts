@@ -7,7 +7,7 @@
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { openSession, poll, screenshot, seriousViolations, unique, type Session } from "./browser";
-import { BASE, demo, signIn, signUp, type Client } from "./http";
+import { BASE, DEMO_PASSWORD, demo, signIn, signUp, type Client } from "./http";
 import { waitForMail } from "./mailbox";
 
 let session: Session;
@@ -89,6 +89,22 @@ describe("accepting an invitation", () => {
 
     const members = (await (await admin.fetch("/api/members")).json()) as { rows: { email: string; role: string }[] };
     expect(members.rows).toContainEqual(expect.objectContaining({ email, role: "production" }));
+  });
+});
+
+describe("signing in with a next= address", () => {
+  it("stays on our site when next= is a backslash path that browsers read as another host", async () => {
+    // Open-redirect bypass (OWASP "Unvalidated Redirects and Forwards Cheat Sheet"): "/\evil.example" is "//evil.example" to a browser.
+    const { page } = await freshSession();
+    const requested: string[] = [];
+    page.on("request", (req) => requested.push(req.url()));
+    await page.goto(`/sign-in?next=${encodeURIComponent("/\\evil.example")}`);
+    await page.getByLabel("E-mail address").fill(demo.reviewer);
+    await page.getByLabel("Password", { exact: true }).fill(DEMO_PASSWORD);
+    await page.getByRole("button", { name: "Sign in" }).click();
+    await page.waitForURL(/\/home$/);
+    expect(new URL(page.url()).origin).toBe(new URL(BASE).origin);
+    expect(requested.filter((url) => url.includes("evil.example") && !url.startsWith(BASE))).toEqual([]);
   });
 });
 

@@ -136,7 +136,7 @@ describe("revision workbook", () => {
 
   it("returns the batch sheet as CSV with the same lines", () => {
     const csv = batchSheetCsv(rev);
-    expect(csv.startsWith("\uFEFFOrder,Material,Role,Lot number,Target mass as supplied (g)")).toBe(true);
+    expect(csv.startsWith('\uFEFF"Order","Material","Role","Lot number","Target mass as supplied (g)"')).toBe(true);
     const { rows } = parseCsv(csv);
     const lines = rev.result!.lines.filter((l) => l.massGrams > 0);
     expect(rows.length).toBe(lines.length + 1);
@@ -183,7 +183,77 @@ describe("formula-injection neutralising", () => {
     const csv = batchSheetCsv(rev);
     expect(csv).toContain(`"'=HYPERLINK(""http://example.invalid"",""x"")"`);
     for (const row of parseCsv(csv).rows) for (const cell of row) if (typeof cell === "string") expect(/^[=+\-@\t\r]/.test(cell)).toBe(false);
-    expect(toCsv([{ name: "t", rows: [["-2", -2, "\tx"]] }])).toBe("\uFEFF'-2,-2,'\tx\r\n");
+    expect(toCsv([{ name: "t", rows: [["-2", -2, "\tx"]] }])).toBe('\uFEFF"\'-2","-2","\'\tx"\r\n');
+  });
+});
+
+/**
+ * The complete rule of OWASP "CSV Injection"
+ * (https://owasp.org/www-community/attacks/CSV_Injection): no cell may begin
+ * with = + - @ tab (0x09) or carriage return (0x0D), prefixed with a single
+ * quote; in CSV every cell is also wrapped in double quotes with embedded
+ * double quotes doubled, so a separator or a quote inside a cell cannot start
+ * a new cell. We also treat a leading line feed (0x0A) and the full-width and
+ * small forms of = + - @ (＝ ＋ － ＠, ﹦ ﹢ ﹣ ﹫; spreadsheet programs in East
+ * Asian locales read them as the ASCII operators) as triggers, and spaces
+ * before a trigger (common practice, no other source).
+ */
+describe("formula-injection neutralising, the complete OWASP rule", () => {
+  const triggers = [
+    "=1+2",
+    "+1",
+    "-1",
+    "@SUM(A1)",
+    "\tTAB",
+    "\rCR",
+    "\nLF=cmd|' /C calc'!A0",
+    "＝1+2",
+    "＋1",
+    "－1",
+    "＠SUM(A1)",
+    "﹦1+2",
+    "﹢1",
+    "﹣1",
+    "﹫SUM(A1)",
+    " =1+2",
+    "\u00a0=1+2",
+    "\u3000＝1+2",
+  ];
+
+  it("prefixes every trigger with a single quote, and the import removes it again", () => {
+    for (const t of triggers) {
+      expect(neutraliseText(t), JSON.stringify(t)).toBe(`'${t}`);
+      expect(restoreText(neutraliseText(t)), JSON.stringify(t)).toBe(t);
+    }
+    for (const plain of ["TEOS", "1-propanol", "pH 4", "a=b", "x@y.example", "'quoted", "", "  spaced"]) expect(neutraliseText(plain)).toBe(plain);
+    expect(restoreText("'plain")).toBe("'plain");
+  });
+
+  it("wraps every CSV cell in double quotes and doubles embedded quotes, so a separator or quote cannot open a new cell", () => {
+    // OWASP's example payload that breaks out of a cell through a quote and a separator.
+    const breakout = 'a";=1+2;"b';
+    const csv = toCsv([{ name: "t", rows: [[breakout, "x,=2+3", "y;@SUM(A1)", 'He said "hi"', "TEOS"]] }]);
+    expect(csv).toBe('\uFEFF"a"";=1+2;""b","x,=2+3","y;@SUM(A1)","He said ""hi""","TEOS"\r\n');
+    const { rows } = parseCsv(csv);
+    expect(rows).toEqual([[breakout, "x,=2+3", "y;@SUM(A1)", 'He said "hi"', "TEOS"]]);
+  });
+
+  it("writes the neutralised text of every trigger into quoted CSV cells that read back as the text", () => {
+    const csv = toCsv([{ name: "t", rows: [triggers] }]);
+    const { rows } = parseCsv(csv);
+    expect(rows[0]).toEqual(triggers.map((t) => `'${t}`));
+    const fields = csv.slice(1).replace(/\r\n$/, "");
+    expect(fields.startsWith('"\'=1+2","\'+1"')).toBe(true);
+  });
+
+  it("keeps numbers numeric and unprefixed: -1.5 stays a number in the workbook and the CSV", () => {
+    const csv = toCsv([{ name: "t", rows: [[-1.5, 0, 2e-7, -20, true, null, "-1.5"]] }]);
+    expect(csv).toBe('\uFEFF"-1.5","0","2e-7","-20","true",,"\'-1.5"\r\n');
+    const input = structuredClone(released.input);
+    input.steps = [...input.steps, { name: "－cool", temperatureC: -1.5, durationH: 1 }];
+    const wb = open(revisionWorkbook(revision(input)));
+    const step = grid(wb, "Process steps").find((row) => row[0] === "'－cool");
+    expect(step?.[1]).toBe(-1.5);
   });
 });
 
@@ -204,7 +274,7 @@ describe("materials library export", () => {
 
   it("returns CSV with the sources table after a [Material sources] line", () => {
     const csv = materialsCsv(materials);
-    expect(csv).toContain("\r\n\r\n[Material sources]\r\nMaterial,Property,Source\r\n");
+    expect(csv).toContain('\r\n\r\n"[Material sources]"\r\n"Material","Property","Source"\r\n');
   });
 
   describe("edge cases", () => {

@@ -156,7 +156,7 @@ describe("formulation import", () => {
     });
     const csv = toCsv(sheets.map((s) => ({ name: s.name, rows: [...s.header, ...s.rows] })));
     const lines = csv.split("\r\n");
-    const expectedLine = lines.findIndex((l) => l.startsWith("Titanium")) + 1;
+    const expectedLine = lines.findIndex((l) => l.startsWith('"Titanium')) + 1;
     const parsed = await readUpload(Buffer.from(csv), "f.csv", { wanted: FORMULATION_INPUT_SHEETS, defaultSheet: SHEET.input });
     const preview = previewFormulationImport(parsed.sheets, library, new Set(), newId);
     expect(errors(preview.problems)).toContainEqual(expect.objectContaining({ sheet: "Components", row: expectedLine, columnLetter: "B" }));

@@ -1,18 +1,14 @@
 import type { Metadata } from "next";
 import { redirect } from "next/navigation";
 import { SignInForm } from "@/components/auth/sign-in-form";
+import { safeNextPath } from "@/lib/safe-next";
 import { getContext } from "@/lib/session";
 
 export const metadata: Metadata = { title: "Sign in" };
 
-function safeNext(next: string | string[] | undefined): string {
-  const value = Array.isArray(next) ? next[0] : next;
-  return value && value.startsWith("/") && !value.startsWith("//") ? value : "/home";
-}
-
 export default async function SignInPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const params = await searchParams;
-  const next = safeNext(params.next);
+  const next = safeNextPath(params.next);
   const ctx = await getContext();
   if (ctx?.teamId) redirect(next);
   if (ctx) redirect(next.startsWith("/invitations/") ? next : "/create-team");

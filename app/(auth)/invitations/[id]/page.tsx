@@ -8,7 +8,7 @@ export const metadata: Metadata = { title: "Invitation" };
 export default async function InvitationPage({ params }: { params: Promise<{ id: string }> }) {
   const { id } = await params;
   const ctx = await getContext();
-  const next = encodeURIComponent(`/invitations/${id}`);
+  const next = encodeURIComponent(`/invitations/${encodeURIComponent(id)}`);
   if (!ctx) {
     return (
       <div className="rounded border border-rule bg-panel p-5">
