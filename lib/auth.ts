@@ -25,7 +25,9 @@ export const auth = betterAuth({
     resetPasswordTokenExpiresIn: 60 * 60,
     revokeSessionsOnPasswordReset: true,
     async sendResetPassword({ user, url }) {
+      // Mail about an account belongs to no team: no team's captured mailbox shows it.
       await sendMail({
+        kind: "account",
         to: user.email,
         subject: "Reset your Gelwright password",
         text: `Someone asked to reset the password of ${user.email}.\n\nOpen this link within an hour to choose a new one:\n${url}\n\nIf it was not you, ignore this mail; your password stays as it is.`,
@@ -63,6 +65,8 @@ export const auth = betterAuth({
       cancelPendingInvitationsOnReInvite: true,
       async sendInvitationEmail({ id, email, role, organization: team, inviter }) {
         await sendMail({
+          kind: "team",
+          teamId: team.id,
           to: email,
           subject: `You are invited to ${team.name} on Gelwright`,
           text: `${inviter.user.name} (${inviter.user.email}) invites you to join ${team.name} as ${role}.\n\nAccept within 7 days:\n${config.baseUrl}/invitations/${id}\n`,
