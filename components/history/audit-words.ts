@@ -26,6 +26,7 @@ const ACTION_WORDS: Record<string, string> = {
   "member.role_changed": "changed a member's role",
   "member.removed": "removed a member",
   "member.invited": "invited someone",
+  "member.joined": "joined the team by invitation",
 };
 
 /** "approved", "saved a draft" … (unknown actions: the code with dots as spaces). */

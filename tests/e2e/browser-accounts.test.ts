@@ -1,8 +1,8 @@
 /**
  * End to end, in Chromium: the account pages besides sign-in. A newcomer
  * creates an account and a team of their own; an invited colleague opens the
- * mailed invitation, creates an account from it and joins with the role
- * given; a user who forgot the password asks for a link, follows the mailed
+ * mailed invitation, creates an account from it, confirms the address by
+ * the mailed link and joins with the role given; a user who forgot the password asks for a link, follows the mailed
  * link, sets a new password and signs in with it.
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
@@ -83,6 +83,15 @@ describe("accepting an invitation", () => {
     await page.locator("#signup-confirm").fill("an-invited-password");
     await page.getByRole("button", { name: "Create account" }).click();
     await page.waitForURL(/\/invitations\//);
+    // A new account's address is not confirmed yet: the page says so and mails a link that leads back.
+    await poll(() => page.getByRole("heading", { name: "Confirm your e-mail address first" }).count()).toBe(1);
+    expect(await page.getByRole("button", { name: "Accept and join" }).count()).toBe(0);
+    expect(await seriousViolations(page)).toEqual([]);
+    await page.getByRole("button", { name: "Send the confirmation link" }).click();
+    await poll(() => page.getByText(/A confirmation link is on its way/).count()).toBe(1);
+    const confirm = await waitForMail(email, /confirm your e-mail/i);
+    await page.goto(linkIn(confirm.text));
+    await page.waitForURL(/\/invitations\/[^/?]+$/);
     await page.getByRole("button", { name: "Accept and join" }).click();
     await page.waitForURL(/\/home$/);
     await poll(() => page.getByText("Larkspur Coatings Lab").count()).toBeGreaterThan(0);
