@@ -64,6 +64,25 @@ describe("creating an account", () => {
   });
 });
 
+describe("the sign-in library's errors on screen", () => {
+  it("shows a clear message for a wrong password and for an address that already has an account", async () => {
+    const { page } = await freshSession();
+    await page.goto("/sign-in");
+    await page.getByLabel("E-mail address").fill(demo.reviewer);
+    await page.getByLabel("Password", { exact: true }).fill("not-the-password-1");
+    await page.getByRole("button", { name: "Sign in" }).click();
+    await poll(() => page.getByText("That e-mail address and password do not match an account.").count()).toBe(1);
+
+    await page.goto("/sign-up");
+    await page.getByLabel("Your name").fill("Rita Repeat");
+    await page.getByLabel("E-mail address").fill(demo.reviewer);
+    await page.locator("#signup-password").fill("a-long-password-1");
+    await page.locator("#signup-confirm").fill("a-long-password-1");
+    await page.getByRole("button", { name: "Create account" }).click();
+    await poll(() => page.getByText("An account with this e-mail address already exists. Sign in instead.").count()).toBe(1);
+  });
+});
+
 describe("accepting an invitation", () => {
   it("takes an invited colleague from the mailed link through a new account into the team with the given role", async () => {
     const email = `invited-${unique()}@larkspur.example`;
