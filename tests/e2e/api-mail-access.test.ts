@@ -125,6 +125,11 @@ describe("accepting an invitation", () => {
     expect(accepted.status).toBe(200);
     members = (await (await admin.fetch("/api/members")).json()) as { rows: { email: string; role: string }[] };
     expect(members.rows).toContainEqual(expect.objectContaining({ email, role: "reviewer" }));
+    // Joining is in the team's activity log, like every other membership change.
+    const audit = (await (await admin.fetch("/api/audit?action=member.joined&pageSize=200")).json()) as {
+      rows: { action: string; summary: { after?: { email?: string; role?: string } } | null }[];
+    };
+    expect(audit.rows.map((r) => r.summary?.after)).toContainEqual({ email, role: "reviewer" });
   });
 
   describe("edge cases", () => {
