@@ -81,6 +81,9 @@ export const auth = betterAuth({
       "/send-verification-email": { window: 60, max: 5 },
     },
   },
+  // Errors that are not the library's own (the database down, a bug) reach our
+  // handler (lib/auth-http.ts), which answers 503 or a generic 500 in our shape.
+  onAPIError: { throw: true },
   advanced: {
     useSecureCookies: secure,
     defaultCookieAttributes: { httpOnly: true, sameSite: "lax", secure },

@@ -114,6 +114,16 @@ describe("serveAuth", () => {
   });
 
   describe("edge cases", () => {
+    it("returns 503 in our shape when the library throws because the database is down", async () => {
+      const spy = vi.spyOn(console, "error").mockImplementation(() => {});
+      const res = await serveAuth(new Request("http://localhost/api/auth/sign-in/email", { method: "POST" }), async () => {
+        throw Object.assign(new Error("connect ECONNREFUSED 127.0.0.1:3317"), { code: "ECONNREFUSED" });
+      });
+      spy.mockRestore();
+      expect(res.status).toBe(503);
+      expect(((await res.json()) as { error: { code: string } }).error.code).toBe("unavailable");
+    });
+
     it("returns a generic 500 in our shape when the library throws", async () => {
       const spy = vi.spyOn(console, "error").mockImplementation(() => {});
       const res = await serveAuth(new Request("http://localhost/api/auth/get-session"), async () => {
