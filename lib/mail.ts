@@ -20,11 +20,22 @@ function getTransport(): Transporter {
   return transport;
 }
 
-export interface MailMessage {
+/**
+ * What a mail is about: "team" for a team's own business (invitations, review
+ * and release notices), "account" for mail about one person's account
+ * (password reset, address confirmation), which belongs to no team.
+ */
+export type MailKind = "team" | "account";
+
+/** Headers that tag each mail with its team and kind; the local mail catcher stores them. */
+export const MAIL_TEAM_HEADER = "X-Gelwright-Team";
+export const MAIL_KIND_HEADER = "X-Gelwright-Kind";
+
+export type MailMessage = {
   to: string | string[];
   subject: string;
   text: string;
-}
+} & ({ kind: "team"; teamId: string } | { kind: "account"; teamId?: never });
 
 /**
  * Sends one plain-text mail. A failure to deliver is logged and swallowed:
@@ -34,7 +45,9 @@ export async function sendMail(message: MailMessage): Promise<boolean> {
   const to = Array.isArray(message.to) ? message.to : [message.to];
   if (to.length === 0) return false;
   try {
-    await getTransport().sendMail({ from: config.mailFrom, to, subject: message.subject, text: message.text });
+    const headers: Record<string, string> = { [MAIL_KIND_HEADER]: message.kind };
+    if (message.kind === "team") headers[MAIL_TEAM_HEADER] = message.teamId;
+    await getTransport().sendMail({ from: config.mailFrom, to, subject: message.subject, text: message.text, headers });
     return true;
   } catch (err) {
     console.error("[mail] could not send", message.subject, "to", to.join(", "), err instanceof Error ? err.message : err);

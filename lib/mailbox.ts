@@ -12,8 +12,24 @@ export interface CapturedMail {
   text: string;
 }
 
-/** Mails captured by the local fake SMTP server; null when a real provider is configured. */
-export async function readMailbox(visibleTo: Set<string>, limit = 200): Promise<CapturedMail[] | null> {
+/** A stored mail as the local mail catcher writes it, with the app's tags. */
+interface StoredMail extends CapturedMail {
+  team?: string | null;
+  kind?: string | null;
+}
+
+/**
+ * True when a captured mail may be shown to `teamId`: mail the app tagged as
+ * that team's own business. Mail about an account (password reset, address
+ * confirmation), another team's mail and untagged mail are never shown, so a
+ * team that invites an address cannot read what else is sent to it.
+ */
+export function belongsToTeam(mail: { team?: string | null; kind?: string | null }, teamId: string): boolean {
+  return mail.kind === "team" && typeof mail.team === "string" && mail.team === teamId;
+}
+
+/** Mails captured by the local fake SMTP server for one team; null when a real provider is configured. */
+export async function readMailbox(teamId: string, limit = 200): Promise<CapturedMail[] | null> {
   if (!config.mailboxDir) return null;
   let files: string[];
   try {
@@ -24,8 +40,8 @@ export async function readMailbox(visibleTo: Set<string>, limit = 200): Promise<
   const mails: CapturedMail[] = [];
   for (const f of files) {
     try {
-      const m = JSON.parse(await readFile(join(config.mailboxDir, f), "utf8")) as CapturedMail;
-      if (m.to.some((t) => visibleTo.has(t.toLowerCase()))) mails.push(m);
+      const { team, kind, ...m } = JSON.parse(await readFile(join(config.mailboxDir, f), "utf8")) as StoredMail;
+      if (belongsToTeam({ team, kind }, teamId)) mails.push(m);
     } catch {
       // A half-written file: skip it.
     }

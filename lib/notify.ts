@@ -10,12 +10,14 @@ export async function notifyTransition(teamId: string, t: TransitionOutcome, com
   const title = `${t.formulationName}, revision ${t.number}`;
   if (t.to === "in_review") {
     const to = await emailsByRole(teamId, ["reviewer"]);
-    await sendMail({ to, subject: `Waiting for your review: ${title}`, text: `${title} was submitted for review.\n\n${link}\n` });
+    await sendMail({ kind: "team", teamId, to, subject: `Waiting for your review: ${title}`, text: `${title} was submitted for review.\n\n${link}\n` });
   } else if (t.from === "in_review" && (t.to === "approved" || t.to === "draft")) {
     const to = await emailOfUser(t.authorId);
     if (!to) return;
     const word = t.to === "approved" ? "approved" : "sent back to draft";
     await sendMail({
+      kind: "team",
+      teamId,
       to,
       subject: `${title} was ${word}`,
       text: `${title} was ${word}.${comment ? `\n\nReviewer's comment:\n${comment}` : ""}\n\n${link}\n`,
@@ -23,6 +25,8 @@ export async function notifyTransition(teamId: string, t: TransitionOutcome, com
   } else if (t.to === "released") {
     const to = await emailsByRole(teamId, ["production"]);
     await sendMail({
+      kind: "team",
+      teamId,
       to,
       subject: `Released to production: ${title}`,
       text: `${title} is released. Its batch sheet is ready.\n\n${link}\n`,

@@ -74,8 +74,14 @@ export async function runLoad(opts: LoadOptions): Promise<LoadReport> {
   async function user(i: number) {
     const ip = `10.${block}.${Math.floor(i / 250)}.${(i % 250) + 1}`;
     const email = ACCOUNTS[i % ACCOUNTS.length]!;
-    const signIn = await call("sign-in", ip, "", "/api/auth/sign-in/email", { method: "POST", body: JSON.stringify({ email, password }) });
-    if (!signIn.res) return;
+    const signInBody = JSON.stringify({ email, password });
+    let signIn = await call("sign-in", ip, "", "/api/auth/sign-in/email", { method: "POST", body: signInBody });
+    // A sign-in that meets a database outage (503) is tried again shortly, as a person would.
+    while (signIn.status === 503 && Date.now() < deadline) {
+      await new Promise((r) => setTimeout(r, 250));
+      signIn = await call("sign-in", ip, "", "/api/auth/sign-in/email", { method: "POST", body: signInBody });
+    }
+    if (!signIn.res || signIn.status !== 200) return;
     const cookie = signIn.res.headers
       .getSetCookie()
       .map((c) => c.split(";")[0])

@@ -26,6 +26,7 @@ const ACTION_WORDS: Record<string, string> = {
   "member.role_changed": "changed a member's role",
   "member.removed": "removed a member",
   "member.invited": "invited someone",
+  "member.joined": "joined the team by invitation",
   "batch.started": "started a batch",
   "batch.line_recorded": "recorded a weighing",
   "batch.notes_changed": "changed a batch's notes",

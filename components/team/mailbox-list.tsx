@@ -14,7 +14,7 @@ interface Mail {
   text: string;
 }
 
-/** Mail captured by the local fake mail server, for this team's members and invitees. */
+/** Mail about this team's own business captured by the local fake mail server (never account mail). */
 export function MailboxList() {
   const { data, error, isLoading, mutate } = useSWR<{ rows: Mail[] }>("/api/mailbox", fetcher, { refreshInterval: 10_000 });
   if (error instanceof ApiRequestError && error.status === 404) {

@@ -2,10 +2,11 @@
  * Who may call what: every API route against every role (a table), signed-out
  * callers (401), and another team's ids (404, nothing changed).
  */
-import { readdirSync, readFileSync } from "node:fs";
+import { existsSync, readdirSync, readFileSync } from "node:fs";
 import { join, relative, sep } from "node:path";
 import { beforeAll, describe, expect, it } from "vitest";
 import { coatInput, library, type LibraryMaterial } from "./fixtures";
+import { AUTH_ALLOWED } from "@/lib/auth-http";
 import { anonymous, demo, signIn, signUp, type Client } from "./http";
 
 type Role = "admin" | "formulator" | "reviewer" | "production";
@@ -206,5 +207,113 @@ describe("another team's records", () => {
     expect(await (await clients.admin.fetch(`/api/materials/${ids.material}`)).json()).toEqual(beforeMaterial);
     const members = (await (await clients.admin.fetch("/api/members")).json()) as { rows: { id: string; role: string }[] };
     expect(members.rows.find((m) => m.id === ids.member)?.role).toBe("production");
+  });
+});
+
+type Caller = Role | "anonymous";
+
+interface AuthCase {
+  method: "GET" | "POST";
+  /** The path under /api/auth, e.g. "/sign-in/email". */
+  path: string;
+  name: string;
+  query?: string;
+  body?: unknown;
+  /** Expected status per caller; every answer of 400 or more is in our error shape. */
+  expect: Record<Caller, number>;
+}
+
+const everyone = (status: number): Record<Caller, number> => ({ anonymous: status, admin: status, formulator: status, reviewer: status, production: status });
+const signedIn = (status: number): Record<Caller, number> => ({ ...everyone(status), anonymous: 401 });
+
+// The sign-in library's endpoints we keep, called so that nothing changes (bad input, unknown ids).
+const authCases: AuthCase[] = [
+  { method: "GET", path: "/get-session", name: "own session", expect: everyone(200) },
+  { method: "POST", path: "/sign-in/email", name: "sign in (invalid body)", body: {}, expect: everyone(422) },
+  { method: "POST", path: "/sign-up/email", name: "sign up (invalid body)", body: {}, expect: everyone(422) },
+  { method: "POST", path: "/sign-out", name: "sign out (no session cookie sent)", body: {}, expect: everyone(200) },
+  { method: "POST", path: "/request-password-reset", name: "ask for a reset link (invalid body)", body: {}, expect: everyone(422) },
+  { method: "POST", path: "/reset-password", name: "set a new password (invalid body)", body: {}, expect: everyone(422) },
+  { method: "GET", path: "/reset-password/:token", name: "open a reset link (unknown token)", query: "?callbackURL=%2Freset-password", expect: everyone(302) },
+  { method: "GET", path: "/verify-email", name: "open a confirmation link (bad token)", query: "?token=not-a-token", expect: everyone(401) },
+  { method: "POST", path: "/send-verification-email", name: "mail a confirmation link (invalid body)", body: {}, expect: everyone(422) },
+  { method: "GET", path: "/organization/get-invitation", name: "see an invitation (unknown id)", query: "?id=missing", expect: signedIn(422) },
+  { method: "POST", path: "/organization/accept-invitation", name: "accept an invitation (unknown id)", body: { invitationId: "missing" }, expect: signedIn(422) },
+];
+
+/** Every endpoint path the sign-in library and its organization plugin define, read from the installed package. */
+function libraryAuthPaths(): string[] {
+  const roots = ["node_modules/better-auth/dist/api/routes", "node_modules/better-auth/dist/plugins/organization/routes"].map((r) => join(process.cwd(), r));
+  const out = new Set<string>();
+  for (const root of roots) {
+    if (!existsSync(root)) continue;
+    for (const f of readdirSync(root).filter((n) => n.endsWith(".mjs"))) {
+      for (const m of readFileSync(join(root, f), "utf8").matchAll(/createAuthEndpoint\("([^"]+)"/g)) out.add(m[1]!);
+    }
+  }
+  return [...out].sort();
+}
+
+describe("the sign-in library's routes (/api/auth/*)", () => {
+  let callers: Record<Caller, Client>;
+  beforeAll(() => {
+    callers = { ...clients, anonymous: anonymous() };
+  });
+
+  it("has a row for every endpoint we keep open, and the library defines each of them", () => {
+    const kept = Object.entries(AUTH_ALLOWED).flatMap(([method, patterns]) =>
+      patterns.map((p) => `${method} ${p.source.replace(/^\^|\$$/g, "").replace(/\\\//g, "/").replace("[^/]+", ":token")}`),
+    );
+    expect(new Set(authCases.map((c) => `${c.method} ${c.path}`))).toEqual(new Set(kept));
+    const defined = libraryAuthPaths();
+    expect(defined.length).toBeGreaterThan(40);
+    for (const c of authCases) expect(defined, c.path).toContain(c.path);
+  });
+
+  for (const c of authCases) {
+    it(`${c.method} ${c.path} ${c.name}: ${JSON.stringify(c.expect)}`, async () => {
+      const got: Record<string, number> = {};
+      for (const who of Object.keys(c.expect) as Caller[]) {
+        // Signing out is called without the session cookie, so the table's sessions stay valid.
+        const client = c.path === "/sign-out" ? anonymous() : callers[who];
+        const res = await client.fetch(`/api/auth${c.path.replace(":token", "no-such-token")}${c.query ?? ""}`, { method: c.method, json: c.body });
+        got[who] = res.status;
+        if (res.status >= 400) {
+          const body = (await res.json()) as { error?: { code?: unknown; message?: unknown } };
+          expect(typeof body.error?.code, `${who} ${c.path}`).toBe("string");
+          expect(typeof body.error?.message, `${who} ${c.path}`).toBe("string");
+        }
+      }
+      expect(got).toEqual(c.expect);
+    });
+  }
+
+  it("answers 404 in our error shape to every other endpoint of the library, for every caller and method", async () => {
+    const kept = new Set(authCases.map((c) => c.path));
+    const closed = libraryAuthPaths().filter((p) => !kept.has(p));
+    expect(closed).toEqual(expect.arrayContaining(["/organization/update-member-role", "/organization/remove-member", "/organization/invite-member", "/update-user", "/change-email", "/delete-user"]));
+    for (const path of closed) {
+      for (const who of ["anonymous", "admin", "production"] as Caller[]) {
+        for (const method of ["GET", "POST"] as const) {
+          const res = await callers[who].fetch(`/api/auth${path.replace(/:\w+/g, "x")}`, { method, json: method === "POST" ? {} : undefined });
+          expect(res.status, `${who} ${method} ${path}`).toBe(404);
+          const body = (await res.json()) as { error: { code: string; message: string } };
+          expect(body.error.code, `${who} ${method} ${path}`).toBe("not_found");
+        }
+      }
+    }
+  });
+
+  it("refuses the kept endpoints under another method, and paths the library does not have", async () => {
+    for (const [method, path] of [
+      ["GET", "/sign-in/email"],
+      ["POST", "/get-session"],
+      ["PUT", "/sign-in/email"],
+      ["POST", "/Organization/Accept-Invitation"],
+      ["POST", "/no-such-endpoint"],
+    ] as const) {
+      const res = await callers.admin.fetch(`/api/auth${path}`, { method, json: method === "GET" ? undefined : {} });
+      expect(res.status, `${method} ${path}`).toBe(method === "PUT" ? 405 : 404);
+    }
   });
 });

@@ -5,7 +5,7 @@
  */
 import { beforeAll, describe, expect, it } from "vitest";
 import { coatInput, library, type LibraryMaterial } from "./fixtures";
-import { demo, signIn, signUp, type Client } from "./http";
+import { demo, signIn, signUp, verifyAddress, type Client } from "./http";
 import { waitForMail } from "./mailbox";
 
 let formulator: Client, reviewer: Client, production: Client, admin: Client;
@@ -153,7 +153,8 @@ describe("revision lifecycle over HTTP", () => {
     const { id: invitationId } = await json<{ id: string }>(invite);
     const mail = await waitForMail(email, /invited/i);
     expect(mail.text).toContain(`/invitations/${invitationId}`);
-    const newcomer = await signUp(email, "Sam Switcher");
+    // Joining needs the invited address confirmed by the mailed link.
+    const newcomer = await verifyAddress(await signUp(email, "Sam Switcher"), email);
     const accepted = await newcomer.fetch("/api/auth/organization/accept-invitation", { method: "POST", json: { invitationId } });
     expect(accepted.status).toBe(200);
 

@@ -1,8 +1,8 @@
 /**
  * End to end, in Chromium: the account pages besides sign-in. A newcomer
  * creates an account and a team of their own; an invited colleague opens the
- * mailed invitation, creates an account from it and joins with the role
- * given; a user who forgot the password asks for a link, follows the mailed
+ * mailed invitation, creates an account from it, confirms the address by
+ * the mailed link and joins with the role given; a user who forgot the password asks for a link, follows the mailed
  * link, sets a new password and signs in with it.
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
@@ -64,6 +64,25 @@ describe("creating an account", () => {
   });
 });
 
+describe("the sign-in library's errors on screen", () => {
+  it("shows a clear message for a wrong password and for an address that already has an account", async () => {
+    const { page } = await freshSession();
+    await page.goto("/sign-in");
+    await page.getByLabel("E-mail address").fill(demo.reviewer);
+    await page.getByLabel("Password", { exact: true }).fill("not-the-password-1");
+    await page.getByRole("button", { name: "Sign in" }).click();
+    await poll(() => page.getByText("That e-mail address and password do not match an account.").count()).toBe(1);
+
+    await page.goto("/sign-up");
+    await page.getByLabel("Your name").fill("Rita Repeat");
+    await page.getByLabel("E-mail address").fill(demo.reviewer);
+    await page.locator("#signup-password").fill("a-long-password-1");
+    await page.locator("#signup-confirm").fill("a-long-password-1");
+    await page.getByRole("button", { name: "Create account" }).click();
+    await poll(() => page.getByText("An account with this e-mail address already exists. Sign in instead.").count()).toBe(1);
+  });
+});
+
 describe("accepting an invitation", () => {
   it("takes an invited colleague from the mailed link through a new account into the team with the given role", async () => {
     const email = `invited-${unique()}@larkspur.example`;
@@ -83,6 +102,15 @@ describe("accepting an invitation", () => {
     await page.locator("#signup-confirm").fill("an-invited-password");
     await page.getByRole("button", { name: "Create account" }).click();
     await page.waitForURL(/\/invitations\//);
+    // A new account's address is not confirmed yet: the page says so and mails a link that leads back.
+    await poll(() => page.getByRole("heading", { name: "Confirm your e-mail address first" }).count()).toBe(1);
+    expect(await page.getByRole("button", { name: "Accept and join" }).count()).toBe(0);
+    expect(await seriousViolations(page)).toEqual([]);
+    await page.getByRole("button", { name: "Send the confirmation link" }).click();
+    await poll(() => page.getByText(/A confirmation link is on its way/).count()).toBe(1);
+    const confirm = await waitForMail(email, /confirm your e-mail/i);
+    await page.goto(linkIn(confirm.text));
+    await page.waitForURL(/\/invitations\/[^/?]+$/);
     await page.getByRole("button", { name: "Accept and join" }).click();
     await page.waitForURL(/\/home$/);
     await poll(() => page.getByText("Larkspur Coatings Lab").count()).toBeGreaterThan(0);

@@ -13,7 +13,7 @@ export default async function MailPage() {
     <>
       <PageHeader
         title="Captured mail"
-        subtitle="While the local fake mail server is in use, mail sent to this team's members and invitees lands here instead of a real inbox."
+        subtitle="While the local fake mail server is in use, this team's own mail (invitations, review and release notices) lands here instead of a real inbox. Password-reset and address-confirmation mail goes to its owner only and is never shown here."
       />
       <MailboxList />
     </>
