@@ -1,6 +1,7 @@
 import "server-only";
 import { ZodError, type ZodType } from "zod";
 import { config } from "./config";
+import { MAX_JSON_BODY_BYTES } from "./server/body-limit";
 
 /** The one error shape of every route: { error: { code, message, fields? } }. */
 export interface ApiErrorBody {
@@ -178,39 +179,57 @@ export function errorResponse(err: unknown): Response {
   return json(500, { error: { code: "internal", message: "Something went wrong on our side. Nothing was changed." } });
 }
 
-const MAX_BODY_BYTES = 1_000_000;
-
 /** The answer to a request body that is not JSON. */
 export const malformedJson = () => new ApiError(400, "malformed_json", "The request body is not valid JSON.");
 
+/** A request body that broke off while it was being read. */
+export const unreadableBody = () => new ApiError(400, "unreadable_body", "The request body could not be read; try again.");
+
 /**
- * Reads a request body as text, refusing more than `maxBytes` with 413. The
- * bytes are counted as they stream in and reading stops at the limit (the
- * HTTP front, lib/server/body-limit.ts, has already held the body to its
- * route's limit; this is the route's own, possibly smaller, one).
+ * Reads a request body as bytes, throwing `tooLarge()` as soon as more than
+ * `limit` bytes have arrived (the rest is never read). The HTTP front,
+ * lib/server/body-limit.ts, has already held the body to its route's limit;
+ * this is the route's own, possibly smaller, one, and holds also where the
+ * app is reached some other way.
  */
-export async function readText(req: Request, maxBytes = MAX_BODY_BYTES): Promise<string> {
-  const tooLarge = () => new ApiError(413, "too_large", `The request body is larger than ${maxBytes} bytes.`);
-  if (Number(req.headers.get("content-length") ?? 0) > maxBytes) throw tooLarge();
-  if (!req.body) return "";
+export async function readBodyBytes(req: Request, limit: number, tooLarge: () => ApiError): Promise<Uint8Array<ArrayBuffer>> {
+  if (Number(req.headers.get("content-length") ?? 0) > limit) throw tooLarge();
+  if (!req.body) return new Uint8Array(0);
   const reader = req.body.getReader();
   const chunks: Uint8Array[] = [];
-  let size = 0;
+  let total = 0;
   for (;;) {
-    const { done, value } = await reader.read();
-    if (done) break;
-    size += value.byteLength;
-    if (size > maxBytes) {
-      await reader.cancel().catch(() => undefined);
+    let step: ReadableStreamReadResult<Uint8Array>;
+    try {
+      step = await reader.read();
+    } catch {
+      throw unreadableBody();
+    }
+    if (step.done) break;
+    total += step.value.byteLength;
+    if (total > limit) {
+      void reader.cancel().catch(() => undefined);
       throw tooLarge();
     }
-    chunks.push(value);
+    chunks.push(step.value);
   }
-  return Buffer.concat(chunks, size).toString("utf8");
+  const out = new Uint8Array(total);
+  let offset = 0;
+  for (const chunk of chunks) {
+    out.set(chunk, offset);
+    offset += chunk.byteLength;
+  }
+  return out;
+}
+
+/** Reads a request body as text, refusing more than `maxBytes` with 413 while it streams in. */
+export async function readText(req: Request, maxBytes = MAX_JSON_BODY_BYTES): Promise<string> {
+  const tooLarge = () => new ApiError(413, "too_large", `The request body is larger than ${maxBytes} bytes.`);
+  return Buffer.from(await readBodyBytes(req, maxBytes, tooLarge)).toString("utf8");
 }
 
 /** Reads and validates a JSON body: 413 when too large, 400 when not JSON, 422 when invalid. */
-export async function readJson<T>(req: Request, schema: ZodType<T>, maxBytes = MAX_BODY_BYTES): Promise<T> {
+export async function readJson<T>(req: Request, schema: ZodType<T>, maxBytes = MAX_JSON_BODY_BYTES): Promise<T> {
   const text = await readText(req, maxBytes);
   let data: unknown;
   try {

@@ -1,38 +1,6 @@
 /** Reading a multipart/form-data upload with a size limit checked before the body is read. */
-import { ApiError } from "@/lib/api";
-
-/** Room for the multipart boundaries and the other fields beside the file. */
-const FORM_OVERHEAD_BYTES = 64 * 1024;
-
-/** The request body, or `tooLarge()` as soon as more than `limit` bytes have arrived (the rest is never read). */
-async function readBodyUpTo(req: Request, limit: number, tooLarge: () => ApiError): Promise<Uint8Array<ArrayBuffer>> {
-  if (!req.body) return new Uint8Array(0);
-  const reader = req.body.getReader();
-  const chunks: Uint8Array[] = [];
-  let total = 0;
-  for (;;) {
-    let step: ReadableStreamReadResult<Uint8Array>;
-    try {
-      step = await reader.read();
-    } catch {
-      throw new ApiError(400, "bad_upload", "The upload could not be read; try again.", { file: "Choose a file." });
-    }
-    if (step.done) break;
-    total += step.value.byteLength;
-    if (total > limit) {
-      void reader.cancel().catch(() => undefined);
-      throw tooLarge();
-    }
-    chunks.push(step.value);
-  }
-  const out = new Uint8Array(total);
-  let offset = 0;
-  for (const chunk of chunks) {
-    out.set(chunk, offset);
-    offset += chunk.byteLength;
-  }
-  return out;
-}
+import { ApiError, readBodyBytes } from "@/lib/api";
+import { FORM_OVERHEAD_BYTES } from "@/lib/server/body-limit";
 
 export interface UploadedFile {
   fileName: string;
@@ -63,7 +31,15 @@ export async function readUploadedFile(req: Request, maxBytes: number): Promise<
     throw new ApiError(400, "not_multipart", "Send the file as multipart/form-data with a field named “file”.", { file: "Choose a file." });
   }
   // Read at most the limit, also when no Content-Length was sent (a chunked body), before parsing the form.
-  const body = await readBodyUpTo(req, maxBytes + FORM_OVERHEAD_BYTES, tooLarge);
+  let body: Uint8Array<ArrayBuffer>;
+  try {
+    body = await readBodyBytes(req, maxBytes + FORM_OVERHEAD_BYTES, tooLarge);
+  } catch (err) {
+    if (err instanceof ApiError && err.code === "unreadable_body") {
+      throw new ApiError(400, "bad_upload", "The upload could not be read; try again.", { file: "Choose a file." });
+    }
+    throw err;
+  }
   let form: FormData;
   try {
     form = await new Response(body, { headers: { "content-type": req.headers.get("content-type") ?? "" } }).formData();
