@@ -6,6 +6,7 @@
  */
 import { describe, expect, it } from "vitest";
 import { rawRequest, type RawAnswer } from "@/tests/helpers/raw-http";
+import { bombSheet, workbookWith } from "@/tests/helpers/zip";
 import { coatInput, library } from "./fixtures";
 import { BASE, demo, signIn } from "./http";
 import { pidListeningOn, watchMemory } from "./server-process";
@@ -50,12 +51,15 @@ describe("request bodies over their limit", () => {
     expect((await fetch(`${BASE}/api/health`)).status).toBe(200);
   });
 
-  it("fault test: ten 200 MB chunked bodies at once leave /api/health answering 200 and the server under 1 GB", async () => {
+  it("fault test: ten 200 MB chunked bodies and ten decompression bombs at once leave /api/health answering 200 and the server under 1 GB", async () => {
     const pid = pidListeningOn(PORT);
     expect(pid, "the app's process").not.toBeNull();
+    const formulator = await signIn(demo.formulator);
+    // About 2 MB each: a sheet declaring 2,000 MiB unpacked, and one that claims 1,000 bytes but inflates to 300 MiB.
+    const bombs = [workbookWith(bombSheet(2000)), workbookWith({ ...bombSheet(300), centralSize: 1000, localSize: 1000 })];
     const memory = watchMemory(pid!);
     const targets = ["/api/auth/sign-in/email", "/api/auth/sign-up/email", "/api/compute", "/api/formulations", "/api/imports?kind=materials"];
-    const attacks = Array.from({ length: 10 }, (_, i) =>
+    const bodies = Array.from({ length: 10 }, (_, i) =>
       rawRequest({
         port: PORT,
         method: "POST",
@@ -64,13 +68,25 @@ describe("request bodies over their limit", () => {
         chunks: { size: 1024 * 1024, count: 200 },
       }),
     );
+    const uploads = Array.from({ length: 10 }, (_, i) => {
+      const form = new FormData();
+      form.set("file", new Blob([new Uint8Array(bombs[i % 2]!)]), `bomb-${i}.xlsx`);
+      form.set("kind", "materials");
+      return formulator.fetch("/api/imports?kind=materials", { method: "POST", body: form });
+    });
     const health = await fetch(`${BASE}/api/health`);
-    const answers = await Promise.all(attacks);
+    const answers = await Promise.all(bodies);
+    const uploaded = await Promise.all(uploads);
     const peak = memory.stop();
-    console.log(`[fault] ten 200 MB chunked bodies: server peak resident memory ${(peak / 1024 / 1024).toFixed(0)} MB; answers ${answers.map((a) => (a === "closed" ? "closed" : a.status)).join(" ")}`);
+    console.log(
+      `[fault] ten 200 MB chunked bodies and ten zip bombs: server peak resident memory ${(peak / 1024 / 1024).toFixed(0)} MB; ` +
+        `bodies ${answers.map((a) => (a === "closed" ? "closed" : a.status)).join(" ")}; bombs ${uploaded.map((r) => r.status).join(" ")}`,
+    );
     expect(health.status).toBe(200);
     expect((await fetch(`${BASE}/api/health`)).status).toBe(200);
     for (const a of answers) if (a !== "closed") expect([401, 413]).toContain(a.status);
+    // 413 for the declared size, 422 for the size that lied.
+    expect(uploaded.map((r) => r.status)).toEqual(Array.from({ length: 10 }, (_, i) => (i % 2 === 0 ? 413 : 422)));
     expect(peak).toBeLessThan(1024 * 1024 * 1024);
   });
 });
