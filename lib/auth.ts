@@ -9,6 +9,7 @@ import { db } from "@/db";
 import { recordEvent } from "@/db/queries/audit";
 import * as schema from "@/db/schema";
 import { config } from "./config";
+import { textProblem } from "./formulation/text-rules";
 import { CLIENT_ADDRESS_HEADER } from "./server/client-address";
 import { sendMail } from "./mail";
 import { ac, ROLE_NAMES, roles } from "./permissions";
@@ -85,6 +86,19 @@ export const auth = betterAuth({
   // Errors that are not the library's own (the database down, a bug) reach our
   // handler (lib/auth-http.ts), which answers 503 or a generic 500 in our shape.
   onAPIError: { throw: true },
+  // A display name typed at sign-up follows the same rule as every other name
+  // (visible, no bidirectional or control characters; lib/formulation/text-rules.ts).
+  databaseHooks: {
+    user: {
+      create: {
+        async before(newUser) {
+          const problem = textProblem(String(newUser.name ?? ""));
+          if (problem) throw APIError.from("BAD_REQUEST", { code: "INVALID_NAME", message: `Name ${problem}.` });
+          return { data: newUser };
+        },
+      },
+    },
+  },
   advanced: {
     useSecureCookies: secure,
     defaultCookieAttributes: { httpOnly: true, sameSite: "lax", secure },

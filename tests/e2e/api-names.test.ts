@@ -7,7 +7,7 @@
  */
 import { beforeAll, describe, expect, it } from "vitest";
 import { coatInput, library, type LibraryMaterial } from "./fixtures";
-import { demo, signIn, type Client } from "./http";
+import { anonymous, demo, signIn, type Client } from "./http";
 
 let formulator: Client, admin: Client, production: Client;
 let lib: Map<string, LibraryMaterial>;
@@ -105,6 +105,19 @@ describe("formulation and team names", () => {
     expect([a.status, b.status].sort()).toEqual([201, 409]);
     const refused = (await (a.status === 409 ? a : b).json()) as ErrorBody;
     expect(Object.keys(refused.error.fields ?? {})).toEqual(["name"]);
+  });
+});
+
+describe("display names at sign-up", () => {
+  it.each(HOSTILE_NAMES)("returns 422 in our error shape for %s, and no account is made", async (_label, name) => {
+    const email = `name-${stamp}-${Math.random().toString(36).slice(2, 8)}@names.example`;
+    const res = await anonymous().fetch("/api/auth/sign-up/email", { method: "POST", json: { email, password: "a-test-password-1", name } });
+    expect(res.status).toBe(422);
+    const body = (await res.json()) as ErrorBody;
+    expect(body.error.message).toMatch(/^Name must /);
+    // The same address can still sign up with a readable name: nothing was kept of the refused try.
+    const ok = await anonymous().fetch("/api/auth/sign-up/email", { method: "POST", json: { email, password: "a-test-password-1", name: "Ada Readable" } });
+    expect(ok.status).toBe(200);
   });
 });
 
