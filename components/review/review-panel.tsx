@@ -26,7 +26,7 @@ export function ReviewPanel({ revision, can, onChanged }: ReviewPanelProps) {
   const [busy, setBusy] = useState<"approve" | "return" | null>(null);
 
   if (revision.state !== "in_review") return null;
-  const own = revision.authorId === can.userId;
+  const own = revision.authorId === can.userId || (revision.authorIds ?? []).includes(can.userId);
   const thermal = revision.result?.thermal.status;
 
   if (!can.review) {
@@ -39,7 +39,7 @@ export function ReviewPanel({ revision, can, onChanged }: ReviewPanelProps) {
   if (own) {
     return (
       <p className="rounded border border-rule bg-panel px-3 py-2 text-sm text-muted" data-testid="review-own">
-        You wrote this revision; another reviewer must decide on it.
+        You wrote or changed this revision; another reviewer must decide on it.
       </p>
     );
   }

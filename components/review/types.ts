@@ -12,6 +12,8 @@ export interface RevisionDto {
   computeError: string | null;
   version: number;
   authorId: string | null;
+  /** Everyone who created, saved or submitted it (filled while it waits for review). */
+  authorIds?: string[];
   authorName: string | null;
   formulationName: string;
   project: string | null;

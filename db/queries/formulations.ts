@@ -134,7 +134,9 @@ export async function getRevision(teamId: string, revisionId: string, opts: { re
     .leftJoin(user, eq(user.id, reviews.reviewerId))
     .where(eq(reviews.revisionId, revisionId))
     .orderBy(asc(reviews.createdAt));
-  return { ...row.revision, formulationName: row.formulationName, project: row.project, authorName: row.authorName, reviews: revReviews };
+  // Everyone who wrote or changed it: none of them may review it (lib/workflow.ts).
+  const authorIds = row.revision.state === "in_review" ? await authorsOf(db, teamId, row.revision) : [];
+  return { ...row.revision, formulationName: row.formulationName, project: row.project, authorName: row.authorName, authorIds, reviews: revReviews };
 }
 
 /**

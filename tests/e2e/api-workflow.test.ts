@@ -64,6 +64,10 @@ describe("revision lifecycle over HTTP", () => {
     expect((await formulator.fetch(`/api/revisions/${revisionId}/submit`, { method: "POST", json: {} })).status).toBe(200);
     await waitForMail(demo.reviewer, new RegExp(`review.*${name}`));
 
+    // The revision names everyone who wrote or changed it, so the review page can hold back its approve button for them.
+    const session = (await (await formulator.fetch("/api/auth/get-session")).json()) as { user: { id: string } };
+    expect((await json<{ authorIds: string[] }>(await reviewer.fetch(`/api/revisions/${revisionId}`))).authorIds).toContain(session.user.id);
+
     // A formulator cannot review at all; production cannot see work in review.
     expect((await formulator.fetch(`/api/revisions/${revisionId}/approve`, { method: "POST", json: {} })).status).toBe(403);
     expect((await production.fetch(`/api/revisions/${revisionId}`)).status).toBe(404);
