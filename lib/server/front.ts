@@ -132,13 +132,29 @@ function jsonMethodNotAllowed(req: IncomingMessage, res: ServerResponse): void {
 }
 
 /**
+ * The path a request is routed by: dot segments resolved and percent-escapes
+ * decoded, so that "/api/./auth/x" or "/%61pi/x" meet the same checks as the
+ * plain path.
+ *
+ * @example routePath("/%61pi/./compute?x=1") // "/api/compute"
+ */
+export function routePath(url: string): string {
+  const { pathname } = new URL(url, "http://front.invalid");
+  try {
+    return decodeURIComponent(pathname);
+  } catch {
+    return pathname; // A broken escape: Next.js refuses such a path itself.
+  }
+}
+
+/**
  * Builds the per-request step of the front. It returns false when it has
  * answered the request itself (refused), true when Next.js should handle it.
  */
 export function createFront(settings: FrontSettings, options: { dev: boolean }) {
   const trust = compileTrust(settings.trustedProxies);
   return function prepare(req: IncomingMessage, res: ServerResponse): boolean {
-    const pathname = (req.url ?? "/").split("?")[0]!;
+    const pathname = routePath(req.url ?? "/");
     setClientAddress(req, trust);
     // The policy Next.js reads its nonce from is ours alone, never the client's.
     delete req.headers["content-security-policy"];

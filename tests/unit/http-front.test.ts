@@ -9,7 +9,7 @@ import type { AddressInfo } from "node:net";
 import { afterEach, describe, expect, it } from "vitest";
 import { bodyLimitFor, MAX_AUTH_BODY_BYTES, MAX_JSON_BODY_BYTES } from "@/lib/server/body-limit";
 import { CLIENT_ADDRESS_HEADER } from "@/lib/server/client-address";
-import { changeRefusal, createFront, pagePolicy } from "@/lib/server/front";
+import { changeRefusal, createFront, pagePolicy, routePath } from "@/lib/server/front";
 import { rawRequest, type RawAnswer, type RawRequest } from "@/tests/helpers/raw-http";
 import { parseTrustedOrigins, parseTrustedProxies, readFrontSettings, SettingError } from "@/lib/server/settings";
 
@@ -179,6 +179,18 @@ describe("changes to the API", () => {
     expect(changeRefusal(post({ origin: ORIGIN, "content-type": "application/json", "content-length": "2" }), "/api/attachments", origins)).toBeNull();
     expect(changeRefusal(post({ origin: ORIGIN }), "/api/revisions/x/release", origins)).toBeNull();
     expect(changeRefusal({ method: "GET", headers: {} } as IncomingMessage, "/api/formulations", origins)).toBeNull();
+  });
+
+  it("meets a path written another way (dot segments, percent-escapes) with the same checks", async () => {
+    expect(routePath("/%61pi/./compute?x=1")).toBe("/api/compute");
+    expect(routePath("/api/x/../auth/sign-in/email")).toBe("/api/auth/sign-in/email");
+    expect(routePath("/api/%E0%A4%A")).toBe("/api/%E0%A4%A");
+    const { port, seen } = await start("");
+    for (const path of ["/%61pi/formulations", "/api/./formulations"]) {
+      const answer = (await send(port, { method: "POST", path, headers: { "content-type": "text/plain" }, body: "{}" })) as Answer;
+      expect(answer.status, path).toBe(403);
+    }
+    expect(seen.bodyBytes).toBe(0);
   });
 
   it("answers a refused change in the API's error shape, without reading the body", async () => {
