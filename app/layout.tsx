@@ -7,6 +7,8 @@ import "./globals.css";
 export const metadata: Metadata = {
   title: { default: "Gelwright", template: "%s · Gelwright" },
   description: "Hybrid sol-gel formulations: recipes, thermal checks, review and batch records for a team.",
+  icons: { icon: { url: "/icon.svg", type: "image/svg+xml" } },
+  manifest: "/manifest.webmanifest",
 };
 
 export default async function RootLayout({ children }: { children: ReactNode }) {
