@@ -6,6 +6,7 @@
  * its route's limit is ever held in memory.
  */
 import type { IncomingMessage, ServerResponse } from "node:http";
+import { sendRefusal } from "./refusal";
 import { MAX_PDF_BYTES } from "@/lib/spreadsheet/pdf";
 import { IMPORT_LIMITS } from "@/lib/spreadsheet/template";
 
@@ -36,13 +37,6 @@ export function bodyLimitFor(method: string, pathname: string): number {
   if (pathname.startsWith("/api/auth/")) return MAX_AUTH_BODY_BYTES;
   if (pathname.startsWith("/api/")) return MAX_JSON_BODY_BYTES;
   return MAX_OTHER_BODY_BYTES;
-}
-
-/** The answer to a body over its limit, in the API's one error shape. */
-export function tooLargeBody(limit: number): string {
-  return JSON.stringify({
-    error: { code: "too_large", message: `The request body is larger than ${limit} bytes, the most this address accepts.` },
-  });
 }
 
 type Push = (chunk: unknown, encoding?: BufferEncoding) => boolean;
@@ -100,14 +94,7 @@ function refuse(req: IncomingMessage, res: ServerResponse, limit: number): void 
     req.socket?.destroy();
     return;
   }
-  const body = tooLargeBody(limit);
-  res.writeHead(413, {
-    "content-type": "application/json",
-    "content-length": Buffer.byteLength(body),
-    "cache-control": "no-store",
-    connection: "close",
-  });
   // With "connection: close" Node closes the socket once the answer is out;
   // what the client still sends is dropped (see limitBody), never buffered.
-  res.end(body);
+  sendRefusal(res, { status: 413, code: "too_large", message: `The request body is larger than ${limit} bytes, the most this address accepts.` });
 }

@@ -8,6 +8,7 @@ import { randomBytes } from "node:crypto";
 import type { IncomingMessage, ServerResponse } from "node:http";
 import { bodyLimitFor, limitBody } from "./body-limit";
 import { compileTrust, setClientAddress } from "./client-address";
+import { sendRefusal, type Refusal } from "./refusal";
 import type { FrontSettings } from "./settings";
 
 const CHANGE_METHODS = new Set(["POST", "PUT", "PATCH", "DELETE"]);
@@ -41,11 +42,6 @@ export function pagePolicy(nonce: string, dev: boolean): string {
   ].join("; ");
 }
 
-export interface Refusal {
-  status: number;
-  code: string;
-  message: string;
-}
 
 /** The media type of a Content-Type header, lower case, without parameters. */
 function mediaType(header: string | undefined): string {
@@ -87,17 +83,6 @@ export function changeRefusal(req: IncomingMessage, pathname: string, trustedOri
   return null;
 }
 
-/** Sends one JSON error in the API's shape and closes the connection (its body is never read). */
-export function sendError(res: ServerResponse, refusal: Refusal): void {
-  const body = JSON.stringify({ error: { code: refusal.code, message: refusal.message } });
-  res.writeHead(refusal.status, {
-    "content-type": "application/json",
-    "content-length": Buffer.byteLength(body),
-    "cache-control": "no-store",
-    connection: "close",
-  });
-  res.end(body);
-}
 
 /**
  * Next.js answers a method a route does not have with an empty 405; this
@@ -165,7 +150,7 @@ export function createFront(settings: FrontSettings, options: { dev: boolean }) 
       jsonMethodNotAllowed(req, res);
       const refusal = changeRefusal(req, pathname, settings.trustedOrigins);
       if (refusal) {
-        sendError(res, refusal);
+        sendRefusal(res, refusal);
         return false;
       }
     } else {
