@@ -9,7 +9,7 @@ import { Field, inputClass } from "@/components/ui/field";
 import { Panel } from "@/components/ui/panel";
 import { TableSkeleton } from "@/components/ui/skeleton";
 import { fmtBytes, uploadWithProgress, type UploadProgress } from "@/components/ui/upload-request";
-import { apiSend, errorMessage, fetcher } from "@/lib/fetcher";
+import { apiSend, errorMessage, fetcher } from "@/lib/client/fetcher";
 import { fmtDateTime } from "@/lib/format";
 
 /** Largest PDF accepted, bytes (the server checks the same: lib/spreadsheet/pdf.ts). */

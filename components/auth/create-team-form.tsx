@@ -8,7 +8,7 @@ import { z } from "zod";
 import { Button } from "@/components/ui/button";
 import { Field, inputClass } from "@/components/ui/field";
 import { authClient } from "@/lib/auth-client";
-import { ApiRequestError, apiSend, errorMessage } from "@/lib/fetcher";
+import { ApiRequestError, apiSend, errorMessage } from "@/lib/client/fetcher";
 import { AuthCard, FormMessage } from "./auth-card";
 
 const schema = z.object({ name: z.string().trim().min(1, "Name your team").max(120, "At most 120 characters") });

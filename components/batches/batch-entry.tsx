@@ -8,7 +8,7 @@ import { ROLE_WORDS } from "@/components/results/words";
 import { Button, buttonClass } from "@/components/ui/button";
 import { Field, FieldError, inputClass } from "@/components/ui/field";
 import { Panel } from "@/components/ui/panel";
-import { ApiRequestError, apiSend, errorMessage, fetcher } from "@/lib/fetcher";
+import { ApiRequestError, apiSend, errorMessage, fetcher } from "@/lib/client/fetcher";
 import { fmtDateTime, fmtMass, fmtPercent, fmtVolume } from "@/lib/format";
 import { deviationWords, liveDeviation, ToleranceBadge } from "./batch-words";
 import { CompositionPanel } from "./composition-panel";

@@ -5,7 +5,7 @@ import useSWR from "swr";
 import { TD, TDN, TH, THN } from "@/components/results/table";
 import { ErrorPanel } from "@/components/ui/error-panel";
 import { TableSkeleton } from "@/components/ui/skeleton";
-import { fetcher, query } from "@/lib/fetcher";
+import { fetcher, query } from "@/lib/client/fetcher";
 import { fmtDateTime } from "@/lib/format";
 import { BatchStateBadge } from "./batch-words";
 import type { BatchListRow } from "./types";

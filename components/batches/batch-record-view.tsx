@@ -7,7 +7,7 @@ import { ROLE_WORDS } from "@/components/results/words";
 import { TD, TDN, TH, THN } from "@/components/results/table";
 import { ErrorPanel } from "@/components/ui/error-panel";
 import { Panel } from "@/components/ui/panel";
-import { fetcher } from "@/lib/fetcher";
+import { fetcher } from "@/lib/client/fetcher";
 import { fmtDateTime, fmtMass, fmtPercent } from "@/lib/format";
 import { deviationWords, ToleranceBadge } from "./batch-words";
 import { CompositionPanel } from "./composition-panel";

@@ -6,7 +6,7 @@ import { BalanceSelect } from "@/components/results/balance-select";
 import { Button } from "@/components/ui/button";
 import { Field, inputClass } from "@/components/ui/field";
 import { Panel } from "@/components/ui/panel";
-import { apiSend, errorMessage } from "@/lib/fetcher";
+import { apiSend, errorMessage } from "@/lib/client/fetcher";
 import { BALANCE_RESOLUTIONS, fmtPercent } from "@/lib/format";
 import { BatchList } from "./batch-list";
 

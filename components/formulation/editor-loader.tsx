@@ -4,7 +4,7 @@ import useSWR from "swr";
 import { ErrorPanel } from "@/components/ui/error-panel";
 import { TableSkeleton } from "@/components/ui/skeleton";
 import type { Material } from "@/lib/formulation";
-import { fetcher } from "@/lib/fetcher";
+import { fetcher } from "@/lib/client/fetcher";
 import { FormulationEditor, type EditableRevision } from "./formulation-editor";
 
 export const LIBRARY_KEY = "/api/materials?pageSize=500&sort=name";

@@ -12,7 +12,7 @@ import { ErrorPanel } from "@/components/ui/error-panel";
 import { Field, inputClass } from "@/components/ui/field";
 import { Panel } from "@/components/ui/panel";
 import type { FormulationInput, Material } from "@/lib/formulation";
-import { ApiRequestError, apiSend, errorMessage, fetcher } from "@/lib/fetcher";
+import { ApiRequestError, apiSend, errorMessage, fetcher } from "@/lib/client/fetcher";
 import { BasisFieldset } from "./basis-fieldset";
 import { ComponentsFieldset } from "./components-fieldset";
 import { EditorContext, useEditor as useEditorFields, type EditorContextValue } from "./editor-context";

@@ -11,7 +11,7 @@ import { Panel } from "@/components/ui/panel";
 import { ThermalBadge } from "@/components/ui/status";
 import { fmtBytes, uploadWithProgress, type UploadProgress } from "@/components/ui/upload-request";
 import type { MaterialKind, ThermalStatus } from "@/lib/formulation";
-import { ApiRequestError, apiSend, errorMessage } from "@/lib/fetcher";
+import { ApiRequestError, apiSend, errorMessage } from "@/lib/client/fetcher";
 
 export type ImportKind = "formulation" | "materials";
 

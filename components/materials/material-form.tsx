@@ -10,7 +10,7 @@ import { useConfirm } from "@/components/ui/confirm-dialog";
 import { Field, inputClass } from "@/components/ui/field";
 import { HazardCodes, SafetyNote } from "@/components/ui/hazards";
 import { MATERIAL_KINDS, materialSchema, type Material, type MaterialKind } from "@/lib/formulation";
-import { ApiRequestError, apiSend, errorMessage } from "@/lib/fetcher";
+import { ApiRequestError, apiSend, errorMessage } from "@/lib/client/fetcher";
 import { ALL_FIELDS, formKey, PROPERTY_GROUPS } from "./material-fields";
 import type { LibraryMaterial } from "./types";
 

@@ -25,7 +25,4 @@ export function FigureRows({ rows, caption }: FigureRowsProps) {
   );
 }
 
-export const TH = "px-2 py-1 text-left text-xs font-semibold text-muted whitespace-nowrap";
-export const THN = "px-2 py-1 text-right text-xs font-semibold text-muted whitespace-nowrap";
-export const TD = "px-2 py-1 align-top";
-export const TDN = "num px-2 py-1 text-right whitespace-nowrap align-top";
+export { TH, THN, TD, TDN } from "@/components/ui/table-head";

@@ -3,7 +3,7 @@
 import useSWR from "swr";
 import { ErrorPanel } from "@/components/ui/error-panel";
 import { TableSkeleton } from "@/components/ui/skeleton";
-import { fetcher } from "@/lib/fetcher";
+import { fetcher } from "@/lib/client/fetcher";
 
 interface DiffEntry {
   path: string;

@@ -6,7 +6,7 @@ import { useSWRConfig } from "swr";
 import { Button } from "@/components/ui/button";
 import { FieldError, inputClass } from "@/components/ui/field";
 import { ThermalBadge } from "@/components/ui/status";
-import { ApiRequestError, apiSend, errorMessage } from "@/lib/fetcher";
+import { ApiRequestError, apiSend, errorMessage } from "@/lib/client/fetcher";
 import type { Abilities, RevisionDto } from "./types";
 
 interface ReviewPanelProps {

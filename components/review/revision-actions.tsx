@@ -4,7 +4,7 @@ import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { useSWRConfig } from "swr";
 import { Button, ButtonLink } from "@/components/ui/button";
-import { apiSend, errorMessage } from "@/lib/fetcher";
+import { apiSend, errorMessage } from "@/lib/client/fetcher";
 import type { Abilities, RevisionDto } from "./types";
 
 interface RevisionActionsProps {

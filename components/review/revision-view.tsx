@@ -7,7 +7,7 @@ import { ResultsView } from "@/components/results/results-view";
 import { ErrorPanel } from "@/components/ui/error-panel";
 import { Panel } from "@/components/ui/panel";
 import { StateBadge, ThermalBadge } from "@/components/ui/status";
-import { fetcher } from "@/lib/fetcher";
+import { fetcher } from "@/lib/client/fetcher";
 import { fmtDateTime } from "@/lib/format";
 import { DiffPanel } from "./diff-panel";
 import { RevisionActions } from "./revision-actions";

@@ -8,7 +8,7 @@ import { Button } from "@/components/ui/button";
 import { ErrorPanel } from "@/components/ui/error-panel";
 import { inputClass } from "@/components/ui/field";
 import { TableSkeleton } from "@/components/ui/skeleton";
-import { fetcher, query } from "@/lib/fetcher";
+import { fetcher, query } from "@/lib/client/fetcher";
 
 const ACTIONS = [
   "formulation.created",

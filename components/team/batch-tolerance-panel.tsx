@@ -8,7 +8,7 @@ import { z } from "zod";
 import { Button } from "@/components/ui/button";
 import { ErrorPanel } from "@/components/ui/error-panel";
 import { Field, inputClass } from "@/components/ui/field";
-import { ApiRequestError, apiSend, errorMessage, fetcher } from "@/lib/fetcher";
+import { ApiRequestError, apiSend, errorMessage, fetcher } from "@/lib/client/fetcher";
 
 interface Settings {
   toleranceFraction: number;

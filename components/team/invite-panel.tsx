@@ -10,7 +10,7 @@ import { Button } from "@/components/ui/button";
 import { ErrorPanel } from "@/components/ui/error-panel";
 import { Field, inputClass } from "@/components/ui/field";
 import { TableSkeleton } from "@/components/ui/skeleton";
-import { ApiRequestError, apiSend, errorMessage, fetcher } from "@/lib/fetcher";
+import { ApiRequestError, apiSend, errorMessage, fetcher } from "@/lib/client/fetcher";
 import { fmtDateTime } from "@/lib/format";
 import { ROLE_NAMES, type RoleName } from "@/lib/permissions";
 

@@ -3,7 +3,7 @@
 import useSWR from "swr";
 import { ErrorPanel } from "@/components/ui/error-panel";
 import { TableSkeleton } from "@/components/ui/skeleton";
-import { ApiRequestError, fetcher } from "@/lib/fetcher";
+import { ApiRequestError, fetcher } from "@/lib/client/fetcher";
 import { fmtDateTime } from "@/lib/format";
 
 interface Mail {

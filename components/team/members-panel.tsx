@@ -7,7 +7,7 @@ import { Button } from "@/components/ui/button";
 import { useConfirm } from "@/components/ui/confirm-dialog";
 import { ErrorPanel } from "@/components/ui/error-panel";
 import { TableSkeleton } from "@/components/ui/skeleton";
-import { apiSend, errorMessage, fetcher } from "@/lib/fetcher";
+import { apiSend, errorMessage, fetcher } from "@/lib/client/fetcher";
 import { ROLE_NAMES, type RoleName } from "@/lib/permissions";
 
 interface Member {

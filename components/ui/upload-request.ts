@@ -1,6 +1,6 @@
 "use client";
 
-import { ApiRequestError, apiErrorFrom } from "@/lib/fetcher";
+import { ApiRequestError, apiErrorFrom } from "@/lib/client/fetcher";
 
 /** Progress of an upload: bytes sent so far of the total (total 0 when unknown). */
 export interface UploadProgress {

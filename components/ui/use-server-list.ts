@@ -3,7 +3,7 @@
 import type { PaginationState, SortingState } from "@tanstack/react-table";
 import { useState } from "react";
 import useSWR from "swr";
-import { fetcher, query } from "@/lib/fetcher";
+import { fetcher, query } from "@/lib/client/fetcher";
 import { useDebounced } from "./use-debounced";
 
 /**

@@ -2,7 +2,7 @@ import { describe, expect, it } from "vitest";
 import { z } from "zod";
 import { ApiError, errorResponse, isDbUnavailable } from "@/lib/api";
 import { computeFormulation } from "@/lib/formulation";
-import { ApiRequestError, apiErrorFrom } from "@/lib/fetcher";
+import { ApiRequestError, apiErrorFrom } from "@/lib/client/fetcher";
 
 // The error shape and status codes are the product's own API contract (DEVELOPERS.md); no external source.
 describe("errorResponse", () => {
