@@ -7,7 +7,7 @@
  */
 import type { FormulationResult } from "@/lib/formulation";
 
-import { REVISION_STATES } from "./workflow-states";
+import { REVISION_STATES } from "./enums";
 export type RevisionState = (typeof REVISION_STATES)[number];
 export type WorkflowAction = "submit" | "approve" | "return" | "release" | "archive";
 

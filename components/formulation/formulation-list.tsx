@@ -8,7 +8,7 @@ import { ServerListTable } from "@/components/ui/server-list-table";
 import { useServerList } from "@/components/ui/use-server-list";
 import { fmtDateTime } from "@/lib/format";
 import { STATE_LABELS, type RevisionState } from "@/lib/workflow";
-import { REVISION_STATES } from "@/lib/workflow-states";
+import { REVISION_STATES } from "@/lib/enums";
 
 export interface FormulationRow {
   id: string;

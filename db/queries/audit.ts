@@ -1,3 +1,4 @@
+import type { AuditAction } from "@/lib/enums";
 import { and, desc, eq, gte, lte, sql, type SQL } from "drizzle-orm";
 import { db } from "@/db";
 import type { DbOrTx } from "@/db/client";
@@ -12,7 +13,7 @@ export interface AuditFilter {
   entityId?: string;
   entityType?: string;
   actorId?: string;
-  action?: string;
+  action?: AuditAction;
   from?: Date;
   to?: Date;
   page?: number;

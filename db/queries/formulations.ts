@@ -1,3 +1,4 @@
+import type { AuditAction } from "@/lib/enums";
 import { and, asc, desc, eq, exists, inArray, like, or, sql, type SQL } from "drizzle-orm";
 import { db } from "@/db";
 import type { DbOrTx } from "@/db/client";
@@ -260,7 +261,7 @@ async function authorsOf(tx: DbOrTx, teamId: string, rev: RevisionRow): Promise<
 }
 
 /** Audit actions on a revision that change or vouch for its content. */
-const AUTHORING_ACTIONS = ["revision.started", "revision.saved", "revision.submitted", "revision.seeded"];
+const AUTHORING_ACTIONS: AuditAction[] = ["revision.started", "revision.saved", "revision.submitted", "revision.seeded"];
 
 async function touchFormulation(tx: DbOrTx, formulationId: string, number: number, state: RevisionState) {
   // The list shows the newest revision's state; older revisions changing state do not move it.

@@ -14,9 +14,9 @@ import { organization, user } from "./auth";
 import { createdAt, teamRef, updatedAt, userRef, uuidPk } from "./columns";
 
 /** The life of a revision, in the order it normally moves. */
-import { REVISION_STATES } from "../../lib/workflow-states";
-export { REVISION_STATES };
-export type RevisionState = (typeof REVISION_STATES)[number];
+import { REVIEW_DECISIONS, REVISION_STATES } from "../../lib/enums";
+export { REVIEW_DECISIONS, REVISION_STATES };
+export type { RevisionState } from "../../lib/enums";
 
 export const formulations = mysqlTable(
   "formulations",
@@ -72,7 +72,6 @@ export const revisions = mysqlTable(
   ],
 );
 
-export const REVIEW_DECISIONS = ["approved", "returned"] as const;
 
 export const reviews = mysqlTable(
   "reviews",

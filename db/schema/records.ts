@@ -1,4 +1,6 @@
 import { bigint, double, index, json, mysqlEnum, mysqlTable, text, timestamp, varchar } from "drizzle-orm/mysql-core";
+import { BATCH_STATES, IMPORT_KINDS, IMPORT_STATES, type AuditAction } from "../../lib/enums";
+export { BATCH_STATES, IMPORT_KINDS, IMPORT_STATES };
 import { organization, user } from "./auth";
 import { createdAt, teamRef, updatedAt, userRef, uuidPk } from "./columns";
 import { revisions } from "./formulations";
@@ -10,7 +12,7 @@ export const auditEvents = mysqlTable(
     id: uuidPk(),
     teamId: teamRef().references(() => organization.id, { onDelete: "cascade" }),
     actorId: userRef("actor_id").references(() => user.id, { onDelete: "set null" }),
-    action: varchar("action", { length: 64 }).notNull(),
+    action: varchar("action", { length: 64 }).$type<AuditAction>().notNull(),
     entityType: varchar("entity_type", { length: 32 }).notNull(),
     entityId: varchar("entity_id", { length: 36 }).notNull(),
     summary: json("summary").$type<{ before?: unknown; after?: unknown; note?: string }>(),
@@ -22,7 +24,6 @@ export const auditEvents = mysqlTable(
   ],
 );
 
-export const BATCH_STATES = ["open", "closed"] as const;
 
 /** One line of a batch record: target from the released revision, actual values from production. */
 export interface BatchLine {
@@ -98,8 +99,6 @@ export const attachments = mysqlTable(
   (t) => [index("attachments_owner_idx").on(t.teamId, t.ownerType, t.ownerId)],
 );
 
-export const IMPORT_KINDS = ["formulation", "materials"] as const;
-export const IMPORT_STATES = ["ready", "confirmed"] as const;
 
 /**
  * An import between upload and confirmation: the parsed preview, kept on the

@@ -2,7 +2,7 @@ import { z } from "zod";
 import { formulationInputSchema, materialSchema } from "@/lib/formulation";
 import { ROLE_NAMES } from "@/lib/permissions";
 import { batchNotesSchema, recordLineSchema, startBatchSchema } from "@/lib/spreadsheet/api-schemas";
-import { REVISION_STATES } from "@/lib/workflow-states";
+import { AUDIT_ACTIONS, REVISION_STATES } from "@/lib/enums";
 import { lineTextField, nameField, notesField } from "./text";
 
 const page = z.coerce.number().int().min(1).max(100_000).optional();
@@ -74,7 +74,7 @@ export const auditQuerySchema = z.object({
   entityId: z.string().max(36).optional(),
   entityType: z.string().max(32).optional(),
   actorId: z.string().max(36).optional(),
-  action: z.string().max(64).optional(),
+  action: z.enum(AUDIT_ACTIONS, { error: "action is not one of the recorded events" }).optional(),
   from: z.coerce.date().optional(),
   to: z.coerce.date().optional(),
   page,
