@@ -1,5 +1,5 @@
 import "server-only";
-import { ApiError, errorResponse } from "./api";
+import { ApiError, errorResponse } from "./http/errors";
 
 /**
  * The sign-in library's HTTP endpoints (under /api/auth) that Gelwright offers,

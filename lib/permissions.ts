@@ -7,6 +7,8 @@
  */
 import { createAccessControl } from "better-auth/plugins/access";
 import { defaultStatements } from "better-auth/plugins/organization/access";
+import type { ImportKind } from "./enums";
+import type { WorkflowAction } from "./workflow";
 
 export const statements = {
   ...defaultStatements,
@@ -66,3 +68,30 @@ export function can(role: string | null | undefined, permission: Permission): bo
   const result = roles[role as RoleName].authorize({ [resource]: [action] } as never);
   return result.success;
 }
+
+/*
+ * Permissions that depend on what a request is about. Each map exists once
+ * here; the route layer (lib/http/route.ts) picks the entry once it knows the
+ * kind, and the role × route test reads the same maps.
+ */
+
+/** Moving a revision through its life, by action (the path's last segment). */
+export const REVISION_ACTION_PERMISSIONS = {
+  submit: "formulation:submit",
+  approve: "formulation:review",
+  return: "formulation:review",
+  release: "formulation:release",
+  archive: "formulation:archive",
+} as const satisfies Readonly<Record<WorkflowAction, Permission>>;
+
+/** Reading and changing the documents attached to a material or a batch record, by owner type. */
+export const ATTACHMENT_PERMISSIONS = {
+  read: { material: "material:read", batch: "batch:read" },
+  write: { material: "material:update", batch: "batch:update" },
+} as const satisfies Readonly<Record<"read" | "write", Readonly<Record<string, Permission>>>>;
+
+/** Importing a spreadsheet creates formulations or materials, by import kind. */
+export const IMPORT_PERMISSIONS = {
+  formulation: "formulation:create",
+  materials: "material:create",
+} as const satisfies Readonly<Record<ImportKind, Permission>>;

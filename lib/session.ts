@@ -4,9 +4,8 @@ import { LRUCache } from "lru-cache";
 import { headers as nextHeaders } from "next/headers";
 import { db } from "@/db";
 import { member, organization } from "@/db/schema";
-import { forbidden, unauthorized } from "./api";
 import { auth } from "./auth";
-import { can, type Permission, type RoleName } from "./permissions";
+import type { RoleName } from "./permissions";
 
 /** Who is asking, in which team, with which role. */
 export interface TeamContext {
@@ -18,8 +17,19 @@ export interface TeamContext {
   role: RoleName;
 }
 
-/** The signed-in user and their current team, or null when not signed in. */
-export async function getContext(reqHeaders?: Headers): Promise<TeamContext | { userId: string; email: string; userName: string; teamId: null } | null> {
+/** A signed-in user who is not (or no longer) a member of any team. */
+export interface TeamlessContext {
+  userId: string;
+  userName: string;
+  email: string;
+  teamId: null;
+}
+
+/**
+ * The signed-in user and their current team, or null when not signed in.
+ * Pages call it; route handlers get it through route() (lib/http/route.ts).
+ */
+export async function getContext(reqHeaders?: Headers): Promise<TeamContext | TeamlessContext | null> {
   const h = reqHeaders ?? (await nextHeaders());
   const session = await auth.api.getSession({ headers: h });
   if (!session) return null;
@@ -55,50 +65,25 @@ export async function getContext(reqHeaders?: Headers): Promise<TeamContext | { 
   };
 }
 
-/**
- * For route handlers and server actions: 401 when not signed in, 403 when the
- * user has no team or their role lacks `permission`.
- */
-export async function requireContext(reqHeaders: Headers | undefined, permission?: Permission): Promise<TeamContext> {
-  const ctx = await getContext(reqHeaders);
-  if (!ctx) throw unauthorized();
-  if (!ctx.teamId) throw forbidden("use a team's data before joining a team");
-  if (permission && !can(ctx.role, permission)) {
-    throw forbidden(describe(permission));
-  }
-  return ctx;
-}
-
-/** How long requireContextBriefly trusts an answer: less than the session cookie cache (60 s). */
+/** How long getContextBriefly trusts an answer: less than the session cookie cache (60 s). */
 export const BRIEF_CONTEXT_TTL_MS = 30_000;
 const briefContexts = new LRUCache<string, TeamContext>({ max: 10_000, ttl: BRIEF_CONTEXT_TTL_MS });
 const SESSION_TOKEN = /(?:^|;\s*)(?:__Secure-)?gelwright\.session_token=([^;]+)/;
 
 /**
- * requireContext for routes that read and change nothing stored (the
- * calculator): who a session cookie belongs to is remembered in this
- * process for BRIEF_CONTEXT_TTL_MS, so a run of requests pays for one
- * session check and one membership query. Only answers that passed the
- * full check are remembered, keyed by the signed session cookie; a sign-out,
- * a removal from the team or a role change reaches these routes within that
- * time. Routes that touch team data use requireContext.
+ * getContext for routes that read and change nothing stored (the
+ * calculator; declared with `brief: true`, see lib/http/route.ts): who a
+ * session cookie belongs to is remembered in this process for
+ * BRIEF_CONTEXT_TTL_MS, so a run of requests pays for one session check and
+ * one membership query. Only members of a team are remembered, keyed by the
+ * signed session cookie; a sign-out, a removal from the team or a role
+ * change reaches these routes within that time.
  */
-export async function requireContextBriefly(reqHeaders: Headers, permission?: Permission): Promise<TeamContext> {
+export async function getContextBriefly(reqHeaders: Headers): Promise<Awaited<ReturnType<typeof getContext>>> {
   const token = SESSION_TOKEN.exec(reqHeaders.get("cookie") ?? "")?.[1];
-  let ctx = token ? briefContexts.get(token) : undefined;
-  if (!ctx) {
-    ctx = await requireContext(reqHeaders);
-    if (token) briefContexts.set(token, ctx);
-  }
-  if (permission && !can(ctx.role, permission)) throw forbidden(describe(permission));
+  const known = token ? briefContexts.get(token) : undefined;
+  if (known) return known;
+  const ctx = await getContext(reqHeaders);
+  if (token && ctx?.teamId) briefContexts.set(token, ctx);
   return ctx;
-}
-
-function describe(permission: Permission): string {
-  const [resource, action] = permission.split(":");
-  const words: Record<string, string> = {
-    readUnreleased: "see work that is not released",
-    review: "review revisions",
-  };
-  return words[action ?? ""] ?? `${action} ${resource === "formulation" ? "formulations" : resource}`;
 }

@@ -6,8 +6,9 @@
  *             └─ returned (back to draft, with a comment)
  */
 import type { FormulationResult } from "@/lib/formulation";
-
 import { REVISION_STATES } from "./enums";
+import { ConflictError, RuleError } from "./errors";
+
 export type RevisionState = (typeof REVISION_STATES)[number];
 export type WorkflowAction = "submit" | "approve" | "return" | "release" | "archive";
 
@@ -36,22 +37,23 @@ const TO: Record<WorkflowAction, RevisionState> = {
   archive: "archived",
 };
 
-/** A workflow rule that the request broke; mapped to 409 or 422 by the route. */
-export class WorkflowError extends Error {
-  constructor(
-    readonly code: "wrong_state" | "has_errors" | "own_revision" | "thermal_fail" | "comment_required",
-    message: string,
-    readonly field?: string,
-  ) {
-    super(message);
+/** A review or submission rule that the request broke (a RuleError: 422). */
+export class WorkflowError extends RuleError {
+  declare readonly code: "has_errors" | "own_revision" | "thermal_fail" | "comment_required";
+
+  constructor(code: WorkflowError["code"], message: string, field?: string) {
+    super(code, message, field);
     this.name = "WorkflowError";
   }
 }
 
-/** The state after `action`, or a WorkflowError when `action` is not possible from `state`. */
+/**
+ * The state after `action`; a ConflictError with code "wrong_state" (409)
+ * when `action` is not possible from `state`.
+ */
 export function nextState(state: RevisionState, action: WorkflowAction): RevisionState {
   if (!FROM[action].includes(state)) {
-    throw new WorkflowError(
+    throw new ConflictError(
       "wrong_state",
       `This revision is ${STATE_LABELS[state].toLowerCase()}; it cannot be ${ACTION_PAST[action]} now.`,
     );

@@ -1,8 +1,9 @@
 import { and, desc, eq } from "drizzle-orm";
 import { db } from "@/db";
 import { attachments, batchRecords, materials, user, type AttachmentRow } from "@/db/schema";
-import { conflict, notFound } from "@/lib/api";
+import { ConflictError, NotFoundError } from "@/lib/errors";
 import { deleteObject, putObject, signedDownloadUrl } from "@/lib/storage";
+import { ATTACHMENT_KINDS, ATTACHMENT_OWNER_TYPES } from "@/lib/validations/uploads";
 import { recordEvent } from "./audit";
 
 export interface Actor {
@@ -10,8 +11,8 @@ export interface Actor {
   teamId: string;
 }
 
-export type OwnerType = "material" | "batch";
-export type AttachmentKind = "sds" | "coa" | "other";
+export type OwnerType = (typeof ATTACHMENT_OWNER_TYPES)[number];
+export type AttachmentKind = (typeof ATTACHMENT_KINDS)[number];
 
 /**
  * Whether the owner exists in the team; for a batch also whether it is still
@@ -29,6 +30,8 @@ export async function findOwner(teamId: string, ownerType: OwnerType, ownerId: s
     .limit(1);
   return b ? { open: b.state === "open" } : null;
 }
+
+const closed = () => new ConflictError("conflict", "This batch record is closed and can no longer change.");
 
 function view(row: AttachmentRow & { uploadedByName?: string | null }) {
   return {
@@ -51,8 +54,8 @@ export async function createAttachment(
   data: { ownerType: OwnerType; ownerId: string; kind: AttachmentKind; fileName: string; contentType: string; bytes: Uint8Array },
 ) {
   const owner = await findOwner(actor.teamId, data.ownerType, data.ownerId);
-  if (!owner) throw notFound(data.ownerType === "material" ? "material" : "batch record");
-  if (!owner.open) throw conflict("This batch record is closed and can no longer change.");
+  if (!owner) throw new NotFoundError(data.ownerType === "material" ? "material" : "batch record");
+  if (!owner.open) throw closed();
   const id = crypto.randomUUID();
   // The key never contains anything the user typed.
   const storageKey = `teams/${actor.teamId}/${data.ownerType}/${data.ownerId}/${id}.pdf`;
@@ -122,7 +125,7 @@ export async function deleteAttachment(actor: Actor, id: string): Promise<boolea
   const a = await getAttachment(actor.teamId, id);
   if (!a) return false;
   const owner = await findOwner(actor.teamId, a.ownerType, a.ownerId);
-  if (owner && !owner.open) throw conflict("This batch record is closed and can no longer change.");
+  if (owner && !owner.open) throw closed();
   await db.transaction(async (tx) => {
     await tx.delete(attachments).where(and(eq(attachments.teamId, actor.teamId), eq(attachments.id, id)));
     await recordEvent(tx, {

@@ -1,7 +1,7 @@
 import { and, desc, eq, type SQL } from "drizzle-orm";
 import { db } from "@/db";
 import { batchRecords, batchSettings, formulations, revisions, user, type BatchLine, type BatchRecordRow } from "@/db/schema";
-import { ApiError, conflict, notFound } from "@/lib/api";
+import { ConflictError, NotFoundError, RuleError } from "@/lib/errors";
 import type { FormulationInput, FormulationResult } from "@/lib/formulation";
 import {
   actualComposition,
@@ -184,11 +184,11 @@ export async function startBatch(
       .for("update")
       .limit(1);
     // Roles that never see unreleased work get the same 404 as for a missing revision.
-    if (!rev || (opts.releasedOnly && rev.state !== "released")) throw notFound("revision");
+    if (!rev || (opts.releasedOnly && rev.state !== "released")) throw new NotFoundError("revision");
     if (rev.state !== "released") {
-      throw conflict(`Revision ${rev.number} is ${rev.state.replace("_", " ")}: batches are made from released revisions only.`);
+      throw new ConflictError("conflict", `Revision ${rev.number} is ${rev.state.replace("_", " ")}: batches are made from released revisions only.`);
     }
-    if (!rev.result) throw new ApiError(422, "not_computed", "This revision has no computed recipe, so no batch can be made from it.");
+    if (!rev.result) throw new RuleError("not_computed", "This revision has no computed recipe, so no batch can be made from it.");
     const lines = batchLinesFrom(rev.input, rev.result) as BatchLine[];
     await tx.insert(batchRecords).values({
       id,
@@ -219,8 +219,8 @@ async function lockOpenBatch(tx: Parameters<Parameters<typeof db.transaction>[0]
     .where(and(eq(batchRecords.teamId, teamId), eq(batchRecords.id, id)))
     .for("update")
     .limit(1);
-  if (!row) throw notFound("batch record");
-  if (row.state === "closed") throw conflict("This batch record is closed and can no longer change.");
+  if (!row) throw new NotFoundError("batch record");
+  if (row.state === "closed") throw new ConflictError("conflict", "This batch record is closed and can no longer change.");
   return row;
 }
 
@@ -234,7 +234,7 @@ export async function recordLine(
   await db.transaction(async (tx) => {
     const row = await lockOpenBatch(tx, actor.teamId, id);
     const line = row.lines[index];
-    if (!line) throw new ApiError(404, "not_found", `This batch has no line ${index + 1}.`);
+    if (!line) throw new NotFoundError("line", `This batch has no line ${index + 1}.`);
     const next: BatchLine = {
       ...line,
       actualGrams: values.actualGrams !== undefined ? values.actualGrams : line.actualGrams,
@@ -288,14 +288,14 @@ export async function saveBatchNotes(actor: Actor, id: string, notes: string | n
 export async function closeBatch(actor: Actor, id: string) {
   await db.transaction(async (tx) => {
     const row = await lockOpenBatch(tx, actor.teamId, id);
-    const fields: Record<string, string> = {};
+    const missing: { field: string; message: string }[] = [];
     row.lines.forEach((line, i) => {
-      if (line.actualGrams === null) fields[`lines.${i}.actualGrams`] = `Line ${i + 1} (${line.name ?? line.materialId}) has no actual mass.`;
-      else if (!line.lotNumber && line.role !== "water") fields[`lines.${i}.lotNumber`] = `Line ${i + 1} (${line.name ?? line.materialId}) has no lot number.`;
+      const label = `Line ${i + 1} (${line.name ?? line.materialId})`;
+      if (line.actualGrams === null) missing.push({ field: `lines.${i}.actualGrams`, message: `${label} has no actual mass.` });
+      else if (!line.lotNumber && line.role !== "water") missing.push({ field: `lines.${i}.lotNumber`, message: `${label} has no lot number.` });
     });
-    const missing = Object.values(fields);
     if (missing.length > 0) {
-      throw new ApiError(422, "incomplete", `The batch cannot be closed yet: ${missing.join(" ")}`, fields);
+      throw new RuleError("incomplete", `The batch cannot be closed yet: ${missing.map((m) => m.message).join(" ")}`, undefined, missing);
     }
     const now = new Date();
     await tx.update(batchRecords).set({ state: "closed", closedAt: now, closedBy: actor.userId }).where(eq(batchRecords.id, id));

@@ -3,10 +3,12 @@ import { and, asc, desc, eq, exists, inArray, like, or, sql, type SQL } from "dr
 import { db } from "@/db";
 import type { DbOrTx } from "@/db/client";
 import { auditEvents, formulations, reviews, revisions, user, REVISION_STATES, type RevisionRow } from "@/db/schema";
-import { conflict, duplicateKey, notFound } from "@/lib/api";
+import { ConflictError, NotFoundError } from "@/lib/errors";
 import { diffRevisions } from "@/lib/diff";
 import { computeFormulation, ENGINE_VERSION, type FormulationInput, type FormulationResult } from "@/lib/formulation";
+import { FormulationError } from "@/lib/formulation/errors";
 import { assertReviewable, assertSubmittable, nextState, type RevisionState, type WorkflowAction } from "@/lib/workflow";
+import { onDuplicate } from "../errors";
 import { recordEvent } from "./audit";
 
 export interface Actor {
@@ -19,7 +21,7 @@ export function evaluate(input: FormulationInput): { result: FormulationResult |
   try {
     return { result: computeFormulation(input), computeError: null };
   } catch (err) {
-    if (err instanceof Error && err.name === "FormulationError") return { result: null, computeError: err.message };
+    if (err instanceof FormulationError) return { result: null, computeError: err.message };
     throw err;
   }
 }
@@ -142,7 +144,7 @@ export async function getRevision(teamId: string, revisionId: string, opts: { re
 
 /**
  * Inserts a formulation with its first draft revision and an audit event,
- * inside the caller's transaction. 409 when the team already has the name.
+ * inside the caller's transaction. A ConflictError naming `name` when the team already has the name.
  */
 export async function insertFormulation(
   tx: DbOrTx,
@@ -164,11 +166,7 @@ export async function insertFormulation(
       description: data.description ?? null,
       createdBy: actor.userId,
     })
-    .catch((err: unknown) => {
-      if (duplicateKey(err) !== "formulations_team_name_uq") throw err;
-      const message = opts.duplicateMessage ?? `A formulation named "${data.name}" already exists in this team.`;
-      throw conflict(message, { name: message });
-    });
+    .catch(onDuplicate("formulations_team_name_uq", opts.duplicateMessage ?? `A formulation named "${data.name}" already exists in this team.`));
   await tx.insert(revisions).values({
     id: revisionId,
     teamId: actor.teamId,
@@ -208,7 +206,7 @@ async function formulationOfRevision(teamId: string, revisionId: string): Promis
     .from(revisions)
     .where(and(eq(revisions.teamId, teamId), eq(revisions.id, revisionId)))
     .limit(1);
-  if (!owner) throw notFound("revision");
+  if (!owner) throw new NotFoundError("revision");
   return owner.formulationId;
 }
 
@@ -234,7 +232,7 @@ async function lockRevision(tx: DbOrTx, teamId: string, revisionId: string, form
     .where(and(eq(revisions.teamId, teamId), eq(revisions.id, revisionId), eq(revisions.formulationId, formulationId)))
     .for("update")
     .limit(1);
-  if (!row) throw notFound("revision");
+  if (!row) throw new NotFoundError("revision");
   return row;
 }
 
@@ -281,12 +279,14 @@ export async function saveDraft(actor: Actor, revisionId: string, data: { input:
   return db.transaction(async (tx) => {
     const current = await lockRevision(tx, actor.teamId, revisionId, formulationId);
     if (current.state !== "draft") {
-      throw conflict(
+      throw new ConflictError(
+        "conflict",
         `Revision ${current.number} is ${current.state.replace("_", " ")} and can no longer change. Start a new revision to edit it.`,
       );
     }
     if (current.version !== data.version) {
-      throw conflict(
+      throw new ConflictError(
+        "conflict",
         `Someone saved this draft after you opened it (your copy is version ${data.version}, the saved one is ${current.version}). Nothing was overwritten: reload to see their changes, then apply yours again.`,
       );
     }
@@ -294,7 +294,7 @@ export async function saveDraft(actor: Actor, revisionId: string, data: { input:
       .update(revisions)
       .set({ input: data.input, result, computeError, engineVersion: ENGINE_VERSION, version: current.version + 1 })
       .where(and(eq(revisions.id, revisionId), eq(revisions.version, data.version), eq(revisions.state, "draft")));
-    if (res[0].affectedRows !== 1) throw conflict("This draft changed while saving; reload and try again.");
+    if (res[0].affectedRows !== 1) throw new ConflictError("conflict", "This draft changed while saving; reload and try again.");
     await touchFormulation(tx, current.formulationId, current.number, "draft");
     await recordEvent(tx, {
       teamId: actor.teamId,
@@ -320,21 +320,21 @@ export async function startRevision(actor: Actor, formulationId: string) {
       .where(and(eq(formulations.teamId, actor.teamId), eq(formulations.id, formulationId)))
       .for("update")
       .limit(1);
-    if (!f) throw notFound("formulation");
+    if (!f) throw new NotFoundError("formulation");
     const [latest] = await tx
       .select()
       .from(revisions)
       .where(eq(revisions.formulationId, formulationId))
       .orderBy(desc(revisions.number))
       .limit(1);
-    if (!latest) throw notFound("revision");
+    if (!latest) throw new NotFoundError("revision");
     const open = await tx
       .select({ number: revisions.number, state: revisions.state })
       .from(revisions)
       .where(and(eq(revisions.formulationId, formulationId), inArray(revisions.state, ["draft", "in_review"])))
       .limit(1);
     if (open[0]) {
-      throw conflict(`Revision ${open[0].number} is still ${open[0].state === "draft" ? "a draft" : "in review"}: edit that one instead.`);
+      throw new ConflictError("conflict", `Revision ${open[0].number} is still ${open[0].state === "draft" ? "a draft" : "in review"}: edit that one instead.`);
     }
     const id = crypto.randomUUID();
     const number = latest.number + 1;

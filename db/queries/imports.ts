@@ -1,11 +1,12 @@
 import { and, eq, lt } from "drizzle-orm";
 import { db } from "@/db";
 import { formulations, importPreviews, materials, type ImportPreviewRow } from "@/db/schema";
-import { ApiError, conflict, notFound } from "@/lib/api";
+import { ConflictError, ExpiredError, NotFoundError, RuleError, type FieldProblem } from "@/lib/errors";
 import type { Material } from "@/lib/formulation";
 import type { FormulationPreview } from "@/lib/spreadsheet/import-formulation";
 import type { LibraryEntry, MaterialsPreview } from "@/lib/spreadsheet/import-materials";
 import type { ImportKind } from "@/lib/spreadsheet/types";
+import { onDuplicate } from "../errors";
 import { recordEvent } from "./audit";
 import { insertFormulation } from "./formulations";
 
@@ -81,19 +82,18 @@ export async function discardImportPreview(actor: Actor, id: string): Promise<bo
   return res[0].affectedRows === 1;
 }
 
-function problemFields(preview: ImportPreview, level: "error" | "warning"): Record<string, string> {
-  const fields: Record<string, string> = {};
-  for (const p of preview.problems.filter((x) => x.level === level)) {
-    const key = `${p.sheet}${p.row !== null ? ` row ${p.row}` : ""}${p.column ? `, ${p.column}` : ""}`;
-    fields[key] ??= p.message;
-  }
-  return fields;
+/** The preview's problems of one level, each keyed by where it is ("Input row 2, Value"). */
+function problemIssues(preview: ImportPreview, level: "error" | "warning"): FieldProblem[] {
+  return preview.problems
+    .filter((x) => x.level === level)
+    .map((p) => ({ field: `${p.sheet}${p.row !== null ? ` row ${p.row}` : ""}${p.column ? `, ${p.column}` : ""}`, message: p.message }));
 }
 
 /**
  * Saves a confirmed import in one transaction: the materials to create, and
  * for a formulation its first draft revision. Nothing is saved while any
- * error remains (422), nor while warnings are not accepted (422).
+ * error remains, nor while warnings are not accepted (RuleError); a name
+ * taken since the preview was made is refused by the unique keys (ConflictError).
  */
 export async function confirmImport(actor: Actor, id: string, opts: { acceptWarnings: boolean }) {
   return db.transaction(async (tx) => {
@@ -103,47 +103,51 @@ export async function confirmImport(actor: Actor, id: string, opts: { acceptWarn
       .where(and(eq(importPreviews.teamId, actor.teamId), eq(importPreviews.userId, actor.userId), eq(importPreviews.id, id)))
       .for("update")
       .limit(1);
-    if (!row) throw notFound("import");
-    if (row.state === "confirmed") throw conflict("This import was already saved.");
-    if (row.expiresAt.getTime() < Date.now()) throw new ApiError(410, "expired", "This preview has expired; upload the file again.");
+    if (!row) throw new NotFoundError("import");
+    if (row.state === "confirmed") throw new ConflictError("conflict", "This import was already saved.");
+    if (row.expiresAt.getTime() < Date.now()) throw new ExpiredError("This preview has expired; upload the file again.");
     const preview = row.preview as unknown as ImportPreview;
     const errors = preview.problems.filter((p) => p.level === "error");
     if (errors.length > 0) {
-      throw new ApiError(
-        422,
+      throw new RuleError(
         "import_has_errors",
         `Nothing was saved: the file still has ${errors.length} error${errors.length === 1 ? "" : "s"}. Fix ${errors.length === 1 ? "it" : "them"} and upload the file again.`,
-        problemFields(preview, "error"),
+        undefined,
+        problemIssues(preview, "error"),
       );
     }
     const warnings = preview.problems.filter((p) => p.level === "warning");
     if (warnings.length > 0 && !opts.acceptWarnings) {
-      throw new ApiError(
-        422,
+      throw new RuleError(
         "warnings_not_accepted",
         `The file has ${warnings.length} warning${warnings.length === 1 ? "" : "s"}; accept ${warnings.length === 1 ? "it" : "them"} to save.`,
-        problemFields(preview, "warning"),
+        undefined,
+        problemIssues(preview, "warning"),
       );
     }
 
     const toCreate = preview.materials.filter((m) => m.action === "create");
     if (toCreate.length > 0) {
-      const existing = await tx.select({ name: materials.name }).from(materials).where(eq(materials.teamId, actor.teamId));
-      const names = new Set(existing.map((e) => e.name.toLowerCase()));
-      const clash = toCreate.find((m) => names.has(m.name.toLowerCase()));
-      if (clash) throw conflict(`“${clash.name}” was added to the library after this preview was made. Upload the file again to link to it.`);
+      // A name added to the library since the preview was made is refused by the unique key.
+      const taken = onDuplicate(
+        "materials_team_name_uq",
+        "A material of this file was added to the library after this preview was made. Upload the file again to link to it.",
+      );
       for (let i = 0; i < toCreate.length; i += 200) {
-        await tx.insert(materials).values(
-          toCreate.slice(i, i + 200).map((m) => ({
-            id: m.id,
-            teamId: actor.teamId,
-            name: m.material.name,
-            kind: m.material.kind,
-            casNumber: m.material.casNumber ?? null,
-            data: { ...m.material, id: m.id },
-            createdBy: actor.userId,
-          })),
-        );
+        await tx
+          .insert(materials)
+          .values(
+            toCreate.slice(i, i + 200).map((m) => ({
+              id: m.id,
+              teamId: actor.teamId,
+              name: m.material.name,
+              kind: m.material.kind,
+              casNumber: m.material.casNumber ?? null,
+              data: { ...m.material, id: m.id },
+              createdBy: actor.userId,
+            })),
+          )
+          .catch(taken);
       }
       for (const m of toCreate) {
         await recordEvent(tx, {
@@ -164,7 +168,7 @@ export async function confirmImport(actor: Actor, id: string, opts: { acceptWarn
 
     if (preview.kind === "formulation") {
       const { input, formulation } = preview;
-      if (!input || !formulation.name) throw new ApiError(422, "import_has_errors", "Nothing was saved: the file has no complete formulation.");
+      if (!input || !formulation.name) throw new RuleError("import_has_errors", "Nothing was saved: the file has no complete formulation.");
       const { formulationId, revisionId } = await insertFormulation(
         tx,
         actor,

@@ -2,22 +2,14 @@ import { and, asc, desc, eq, inArray, like, or, sql, type SQL } from "drizzle-or
 import { db } from "@/db";
 import { materials, MATERIAL_KINDS, type MaterialRow } from "@/db/schema";
 import type { Material } from "@/lib/formulation";
-import { conflict, duplicateKey } from "@/lib/api";
+import { onDuplicate } from "../errors";
 import { recordEvent } from "./audit";
 
 /**
- * Turns the unique-key clash of two materials with one name (also when two
- * people save at the same moment) into a 409 that names the field.
+ * The unique key refuses a name the library has, also when two people save
+ * at the same moment: a ConflictError naming material.name.
  */
-function nameTaken(name: string) {
-  return (err: unknown): never => {
-    if (duplicateKey(err) === "materials_team_name_uq") {
-      const message = `The library already has a material named "${name}".`;
-      throw conflict(message, { "material.name": message });
-    }
-    throw err;
-  };
-}
+const nameTaken = (name: string) => onDuplicate("materials_team_name_uq", `The library already has a material named "${name}".`);
 
 export type MaterialKind = (typeof MATERIAL_KINDS)[number];
 
@@ -70,11 +62,6 @@ export async function getMaterialsByIds(teamId: string, ids: string[]) {
   if (ids.length === 0) return [];
   const rows = await db.select().from(materials).where(and(eq(materials.teamId, teamId), inArray(materials.id, ids)));
   return rows.map(toMaterial);
-}
-
-export async function getMaterialByName(teamId: string, name: string) {
-  const [row] = await db.select().from(materials).where(and(eq(materials.teamId, teamId), eq(materials.name, name))).limit(1);
-  return row ? toMaterial(row) : null;
 }
 
 function stripId(m: Material): Material {

@@ -2,7 +2,7 @@ import { and, asc, eq } from "drizzle-orm";
 import { db } from "@/db";
 import type { Tx } from "@/db/client";
 import { invitation, member, organization, user } from "@/db/schema";
-import { conflict, notFound } from "@/lib/api";
+import { ConflictError, NotFoundError } from "@/lib/errors";
 import type { RoleName } from "@/lib/permissions";
 import { recordEvent } from "./audit";
 
@@ -47,9 +47,9 @@ export async function listInvitations(teamId: string) {
  */
 async function lockMember(tx: Tx, teamId: string, memberId: string) {
   const [team] = await tx.select({ id: organization.id }).from(organization).where(eq(organization.id, teamId)).for("update");
-  if (!team) throw notFound("member");
+  if (!team) throw new NotFoundError("member");
   const [m] = await tx.select().from(member).where(and(eq(member.organizationId, teamId), eq(member.id, memberId))).for("update").limit(1);
-  if (!m) throw notFound("member");
+  if (!m) throw new NotFoundError("member");
   const admins = await tx
     .select({ id: member.id })
     .from(member)
@@ -63,7 +63,7 @@ export async function changeRole(teamId: string, actorId: string, memberId: stri
   return db.transaction(async (tx) => {
     const { m, adminCount } = await lockMember(tx, teamId, memberId);
     if (m.role === "admin" && role !== "admin" && adminCount <= 1) {
-      throw conflict("This is the team's last admin. Make someone else admin first.");
+      throw new ConflictError("conflict", "This is the team's last admin. Make someone else admin first.");
     }
     await tx.update(member).set({ role }).where(eq(member.id, memberId));
     await recordEvent(tx, {
@@ -83,7 +83,7 @@ export async function removeMember(teamId: string, actorId: string, memberId: st
   return db.transaction(async (tx) => {
     const { m, adminCount } = await lockMember(tx, teamId, memberId);
     if (m.role === "admin" && adminCount <= 1) {
-      throw conflict("This is the team's last admin and cannot be removed.");
+      throw new ConflictError("conflict", "This is the team's last admin and cannot be removed.");
     }
     await tx.delete(member).where(eq(member.id, memberId));
     await recordEvent(tx, {

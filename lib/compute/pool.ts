@@ -1,7 +1,7 @@
 import "server-only";
 import { availableParallelism } from "node:os";
 import { Worker } from "node:worker_threads";
-import { ApiError, malformedJson } from "@/lib/api";
+import { ApiError, malformedJson } from "@/lib/http/errors";
 import { FormulationError } from "@/lib/formulation/errors";
 import { computeFromText, type EngineReply } from "./from-text";
 

@@ -7,7 +7,7 @@
  */
 import type { IncomingMessage, ServerResponse } from "node:http";
 import { sendRefusal } from "./refusal";
-import { MAX_PDF_BYTES } from "@/lib/spreadsheet/pdf";
+import { MAX_PDF_BYTES } from "@/lib/uploads/pdf";
 import { IMPORT_LIMITS } from "@/lib/spreadsheet/template";
 
 /** Room for the multipart boundaries and the other fields beside an uploaded file. */

@@ -6,7 +6,7 @@
 import { csvToSheets, CsvError } from "./csv";
 import { IMPORT_LIMITS, type ImportLimits } from "./template";
 import type { ParsedFile } from "./types";
-import { UploadError } from "./upload-error";
+import { UploadError } from "@/lib/uploads/upload-error";
 import { readWorkbookInWorker } from "./worker";
 
 export { UploadError };

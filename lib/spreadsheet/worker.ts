@@ -26,7 +26,7 @@ import { join } from "node:path";
 import { Worker } from "node:worker_threads";
 import { IMPORT_LIMITS, type ImportLimits } from "./template";
 import type { Cell, SheetGrid } from "./types";
-import { UploadError } from "./upload-error";
+import { UploadError } from "@/lib/uploads/upload-error";
 import { unpackWorkbook, ZIP_LIMITS, type ZipLimits } from "./zip-guard";
 
 export { UploadError };

@@ -27,7 +27,7 @@
  */
 import { promisify } from "node:util";
 import { crc32, inflateRaw, type InputType, type ZlibOptions } from "node:zlib";
-import { UploadError } from "./upload-error";
+import { UploadError } from "@/lib/uploads/upload-error";
 
 const inflateRawAsync = promisify(inflateRaw) as (buffer: InputType, options: ZlibOptions) => Promise<Buffer>;
 

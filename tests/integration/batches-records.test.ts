@@ -4,6 +4,7 @@
  */
 import { and, eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { ConflictError, NotFoundError, RuleError } from "@/lib/errors";
 import { seedDemo } from "@/db/seed";
 import { auditEvents, formulations, revisions } from "@/db/schema";
 import { createTestDatabase, type TestDatabase } from "../helpers/db";
@@ -51,8 +52,8 @@ describe("batch records", () => {
   });
 
   it("refuses a draft revision (409) and another team's or an unknown revision (404)", async () => {
-    await expect(q.startBatch(actor, draftId)).rejects.toMatchObject({ status: 409 });
-    await expect(q.startBatch({ ...actor, teamId: crypto.randomUUID() }, releasedId)).rejects.toMatchObject({ status: 404 });
+    await expect(q.startBatch(actor, draftId)).rejects.toBeInstanceOf(ConflictError);
+    await expect(q.startBatch({ ...actor, teamId: crypto.randomUUID() }, releasedId)).rejects.toBeInstanceOf(NotFoundError);
   });
 
   it("records lines one after another, flags a line beyond tolerance, closes, and then refuses every change", async () => {
@@ -72,9 +73,9 @@ describe("batch records", () => {
     const closed = await q.closeBatch(actor, batch.id);
     expect(closed.state).toBe("closed");
     expect(closed.closedBy).toBe(actor.userId);
-    await expect(q.recordLine(actor, batch.id, 0, { actualGrams: 1 })).rejects.toMatchObject({ status: 409 });
-    await expect(q.saveBatchNotes(actor, batch.id, "changed")).rejects.toMatchObject({ status: 409 });
-    await expect(q.closeBatch(actor, batch.id)).rejects.toMatchObject({ status: 409 });
+    await expect(q.recordLine(actor, batch.id, 0, { actualGrams: 1 })).rejects.toBeInstanceOf(ConflictError);
+    await expect(q.saveBatchNotes(actor, batch.id, "changed")).rejects.toBeInstanceOf(ConflictError);
+    await expect(q.closeBatch(actor, batch.id)).rejects.toBeInstanceOf(ConflictError);
     expect((await q.getBatch(actor.teamId, batch.id))!.lines[0]!.actualGrams).toBe(view.lines[0]!.actualGrams);
 
     const events = await t.db.select({ action: auditEvents.action }).from(auditEvents).where(eq(auditEvents.entityId, batch.id));
@@ -85,7 +86,8 @@ describe("batch records", () => {
     const batch = await q.startBatch(actor, releasedId);
     await q.recordLine(actor, batch.id, 0, { actualGrams: batch.lines[0]!.targetGrams! });
     const err = await q.closeBatch(actor, batch.id).catch((e: unknown) => e);
-    expect(err).toMatchObject({ status: 422, code: "incomplete" });
+    expect(err).toBeInstanceOf(RuleError);
+    expect(err).toMatchObject({ code: "incomplete" });
     expect((err as { fields: Record<string, string> }).fields["lines.0.lotNumber"]).toMatch(/no lot number/);
     expect((err as { fields: Record<string, string> }).fields["lines.1.actualGrams"]).toMatch(/no actual mass/);
     expect((await q.getBatch(actor.teamId, batch.id))!.state).toBe("open");

@@ -7,6 +7,7 @@
  */
 import { and, eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { ConflictError } from "@/lib/errors";
 import { seedDemo } from "@/db/seed";
 import { auditEvents, member, organization, revisions, user } from "@/db/schema";
 import type { FormulationInput, Material } from "@/lib/formulation";
@@ -108,7 +109,7 @@ describe("two admins demoting or removing each other at the same moment", () => 
       expect(await adminsOf(team), `round ${round}`).toBe(1);
       const refused = outcomes.filter((o) => o.status === "rejected");
       expect(refused, `round ${round}`).toHaveLength(1);
-      expect((refused[0] as PromiseRejectedResult).reason).toMatchObject({ status: 409 });
+      expect((refused[0] as PromiseRejectedResult).reason).toBeInstanceOf(ConflictError);
     }
   });
 
@@ -142,7 +143,8 @@ describe("two creates of one name at the same moment", () => {
       ]);
       const refused = outcomes.filter((o) => o.status === "rejected") as PromiseRejectedResult[];
       expect(refused, `round ${round}`).toHaveLength(1);
-      expect(refused[0]!.reason).toMatchObject({ status: 409, fields: { "material.name": expect.stringContaining(name) } });
+      expect(refused[0]!.reason).toBeInstanceOf(ConflictError);
+      expect(refused[0]!.reason).toMatchObject({ code: "duplicate", fields: { "material.name": expect.stringContaining(name) } });
     }
   });
 
@@ -155,14 +157,15 @@ describe("two creates of one name at the same moment", () => {
       ]);
       const refused = outcomes.filter((o) => o.status === "rejected") as PromiseRejectedResult[];
       expect(refused, `round ${round}`).toHaveLength(1);
-      expect(refused[0]!.reason).toMatchObject({ status: 409, fields: { name: expect.stringContaining(name) } });
+      expect(refused[0]!.reason).toBeInstanceOf(ConflictError);
+      expect(refused[0]!.reason).toMatchObject({ code: "duplicate", fields: { name: expect.stringContaining(name) } });
     }
   });
 
   it("returns 409 when a material is renamed to a name the library has", async () => {
     const a = await matq.createMaterial(teamId, users.admin!, material("Rename race A"));
     await matq.createMaterial(teamId, users.admin!, material("Rename race B"));
-    await expect(matq.updateMaterial(teamId, users.admin!, a.id, material("Rename race B"))).rejects.toMatchObject({ status: 409 });
+    await expect(matq.updateMaterial(teamId, users.admin!, a.id, material("Rename race B"))).rejects.toBeInstanceOf(ConflictError);
   });
 });
 

@@ -5,6 +5,7 @@
  */
 import { count, eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { ConflictError } from "@/lib/errors";
 import { seedDemo } from "@/db/seed";
 import { formulations, materials, revisions } from "@/db/schema";
 import { demoInputs } from "@/lib/spreadsheet/example";
@@ -54,7 +55,7 @@ describe("confirmImport", () => {
     });
     expect(preview.counts.errors).toBe(1);
     const saved = await q.createImportPreview(actor, "formulation", "broken.xlsx", preview);
-    await expect(q.confirmImport(actor, saved.id, { acceptWarnings: true })).rejects.toMatchObject({ status: 422, code: "import_has_errors" });
+    await expect(q.confirmImport(actor, saved.id, { acceptWarnings: true })).rejects.toThrow(expect.objectContaining({ name: "RuleError", code: "import_has_errors" }));
     expect([await n(materials), await n(formulations)]).toEqual(before);
     expect((await q.getImportPreview(actor, saved.id))!.state).toBe("ready");
   });
@@ -66,7 +67,7 @@ describe("confirmImport", () => {
     expect(preview.counts).toMatchObject({ errors: 0, toCreate: 1 });
     expect(preview.counts.warnings).toBeGreaterThan(0);
     const saved = await q.createImportPreview(actor, "formulation", "visor.xlsx", preview);
-    await expect(q.confirmImport(actor, saved.id, { acceptWarnings: false })).rejects.toMatchObject({ status: 422, code: "warnings_not_accepted" });
+    await expect(q.confirmImport(actor, saved.id, { acceptWarnings: false })).rejects.toThrow(expect.objectContaining({ name: "RuleError", code: "warnings_not_accepted" }));
     const done = await q.confirmImport(actor, saved.id, { acceptWarnings: true });
     const [rev] = await t.db.select().from(revisions).where(eq(revisions.id, done.outcome.revisionId as string));
     expect(rev!.state).toBe("draft");
@@ -75,7 +76,7 @@ describe("confirmImport", () => {
     const [row] = await t.db.select().from(materials).where(eq(materials.id, created.id));
     expect(row!.name).toBe("Epoxy resin for Imported visor coat");
     expect(rev!.input.materials.some((m) => m.id === created.id)).toBe(true);
-    await expect(q.confirmImport(actor, saved.id, { acceptWarnings: true })).rejects.toMatchObject({ status: 409 });
+    await expect(q.confirmImport(actor, saved.id, { acceptWarnings: true })).rejects.toBeInstanceOf(ConflictError);
   });
 
   it("rolls back the new materials when the formulation cannot be saved (one transaction)", async () => {
@@ -84,7 +85,7 @@ describe("confirmImport", () => {
     // Someone else takes the name between preview and confirmation.
     await t.db.insert(formulations).values({ teamId: actor.teamId, name: "Raced import" });
     const before = await n(materials);
-    await expect(q.confirmImport(actor, saved.id, { acceptWarnings: true })).rejects.toMatchObject({ status: 409 });
+    await expect(q.confirmImport(actor, saved.id, { acceptWarnings: true })).rejects.toThrow(expect.objectContaining({ code: "duplicate", fields: { name: expect.stringContaining("Raced import") } }));
     expect(await n(materials)).toBe(before);
     const epoxy = await t.db.select().from(materials).where(eq(materials.name, "Epoxy resin for Raced import"));
     expect(epoxy).toEqual([]);

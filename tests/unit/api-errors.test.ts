@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { z } from "zod";
-import { ApiError, errorResponse, isDbUnavailable } from "@/lib/api";
+import { isDbUnavailable } from "@/db/errors";
+import { ApiError, errorResponse } from "@/lib/http/errors";
 import { computeFormulation } from "@/lib/formulation";
 import { ApiRequestError, apiErrorFrom } from "@/lib/client/fetcher";
 

@@ -1,7 +1,7 @@
 import { availableParallelism } from "node:os";
 import { Worker } from "node:worker_threads";
 import { afterEach, describe, expect, it } from "vitest";
-import { ApiError, errorResponse } from "@/lib/api";
+import { ApiError, errorResponse } from "@/lib/http/errors";
 import { computeFromText, type EngineReply } from "@/lib/compute/from-text";
 import { computeWorkerCount, EnginePool, unwrap } from "@/lib/compute/pool";
 import { computeFormulation } from "@/lib/formulation";

@@ -4,8 +4,8 @@
  * must not be buffered whole before its size is known.
  */
 import { describe, expect, it } from "vitest";
-import { ApiError } from "@/lib/api";
-import { readUploadedFile } from "@/lib/spreadsheet/upload";
+import { ApiError } from "@/lib/http/errors";
+import { readUploadedFile } from "@/lib/uploads/multipart";
 
 const MiB = 1024 * 1024;
 const BOUNDARY = "----gelwright-test";

@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
 import type { FormulationResult } from "@/lib/formulation";
+import { ConflictError, RuleError } from "@/lib/errors";
 import { assertReviewable, assertSubmittable, nextState, WorkflowError } from "@/lib/workflow";
 
 // The lifecycle rules are the product's own (DEVELOPERS.md, "Lifecycle"); no external source.
@@ -21,7 +22,8 @@ describe("nextState", () => {
         ["archived", "archive"],
         ["in_review", "release"],
       ] as const) {
-        expect(() => nextState(state, action)).toThrow(WorkflowError);
+        expect(() => nextState(state, action)).toThrow(ConflictError);
+        expect(() => nextState(state, action)).toThrow(expect.objectContaining({ code: "wrong_state" }));
       }
     });
   });
@@ -33,6 +35,17 @@ const withNotices = (levels: ("info" | "caution" | "error")[]) =>
 describe("assertSubmittable", () => {
   it("accepts a result with only info and caution notices", () => {
     expect(() => assertSubmittable(withNotices(["info", "caution"]), null)).not.toThrow();
+  });
+  it("refuses with a WorkflowError, a RuleError (422) with code has_errors", () => {
+    let thrown: unknown;
+    try {
+      assertSubmittable(null, "no result");
+    } catch (err) {
+      thrown = err;
+    }
+    expect(thrown).toBeInstanceOf(WorkflowError);
+    expect(thrown).toBeInstanceOf(RuleError);
+    expect(thrown).toMatchObject({ code: "has_errors" });
   });
   it("refuses a result with an error notice or no result", () => {
     expect(() => assertSubmittable(withNotices(["info", "error"]), null)).toThrow(/error notice/);

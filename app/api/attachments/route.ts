@@ -1,45 +1,51 @@
-import { createAttachment, findOwner, listAttachments } from "@/db/queries/attachments";
-import { ApiError, notFound, route } from "@/lib/api";
-import type { Permission } from "@/lib/permissions";
-import { requireContext } from "@/lib/session";
-import { attachmentKindSchema, attachmentOwnerSchema } from "@/lib/spreadsheet/api-schemas";
-import { MAX_PDF_BYTES, pdfProblem } from "@/lib/spreadsheet/pdf";
-import { readUploadedFile } from "@/lib/spreadsheet/upload";
-import { parseQuery } from "@/lib/validations/api";
+import { z } from "zod";
+import { createAttachment, findOwner, listAttachments, type OwnerType } from "@/db/queries/attachments";
+import { NotFoundError } from "@/lib/errors";
+import { readQuery } from "@/lib/http/body";
+import { ApiError } from "@/lib/http/errors";
+import { route } from "@/lib/http/route";
+import { ATTACHMENT_PERMISSIONS } from "@/lib/permissions";
+import { readUploadedFile, type UploadedFile } from "@/lib/uploads/multipart";
+import { MAX_PDF_BYTES, pdfProblem } from "@/lib/uploads/pdf";
+import { attachmentKindSchema, attachmentOwnerSchema, attachmentOwnerTypeSchema } from "@/lib/validations/uploads";
 
-const READ: Record<"material" | "batch", Permission> = { material: "material:read", batch: "batch:read" };
-const WRITE: Record<"material" | "batch", Permission> = { material: "material:update", batch: "batch:update" };
+/** The owner named by ?ownerType=&ownerId= (422 naming the parameter when missing or wrong). */
+async function queriedOwner(req: Request) {
+  const { ownerType, ownerId } = readQuery(req, attachmentOwnerSchema);
+  return { kind: ownerType, ownerId };
+}
 
-/** GET /api/attachments?ownerType=material|batch&ownerId=… : the owner's attachments. */
-export const GET = route(async (req) => {
-  await requireContext(req.headers);
-  const { ownerType, ownerId } = parseQuery(req.url, attachmentOwnerSchema);
-  const ctx = await requireContext(req.headers, READ[ownerType]);
-  if (!(await findOwner(ctx.teamId, ownerType, ownerId))) throw notFound(ownerType === "material" ? "material" : "batch record");
-  return Response.json(await listAttachments(ctx.teamId, ownerType, ownerId));
+/** GET /api/attachments?ownerType=material|batch&ownerId=… : the owner's attachments (read permission on the owner). */
+export const GET = route({ permission: ATTACHMENT_PERMISSIONS.read, subject: queriedOwner }, async (_req, { team, subject }) => {
+  if (!(await findOwner(team.id, subject.kind, subject.ownerId))) throw new NotFoundError(subject.kind === "material" ? "material" : "batch record");
+  return Response.json(await listAttachments(team.id, subject.kind, subject.ownerId));
 });
+
+/**
+ * The owner type of an upload: from ?ownerType= when given, so that who may
+ * upload is known before the body is read; otherwise from the form, read here.
+ */
+async function uploadOwner(req: Request): Promise<{ kind: OwnerType; upload: UploadedFile | null }> {
+  const fromQuery = attachmentOwnerTypeSchema.safeParse(new URL(req.url).searchParams.get("ownerType"));
+  if (fromQuery.success) return { kind: fromQuery.data, upload: null };
+  const upload = await readUploadedFile(req, MAX_PDF_BYTES);
+  const { ownerType } = z.object({ ownerType: attachmentOwnerTypeSchema }).parse(upload.fields);
+  return { kind: ownerType, upload };
+}
+
+const uploadFieldsSchema = z.object({ ownerId: attachmentOwnerSchema.shape.ownerId, kind: attachmentKindSchema.default("other") });
 
 /**
  * POST /api/attachments (multipart: file, ownerType, ownerId, kind = sds | coa | other; the three may also be query parameters):
  * stores a PDF (checked by content, at most 10 MB) for a material or an open batch record.
  */
-export const POST = route(async (req) => {
-  // ownerType may come as ?ownerType= too, so the permission is checked before the body is read.
-  const early = attachmentOwnerSchema.shape.ownerType.safeParse(new URL(req.url).searchParams.get("ownerType"));
-  await requireContext(req.headers, early.success ? WRITE[early.data] : undefined);
-  const upload = await readUploadedFile(req, MAX_PDF_BYTES);
+export const POST = route({ permission: ATTACHMENT_PERMISSIONS.write, subject: uploadOwner }, async (req, { actor, subject }) => {
+  const upload = subject.upload ?? (await readUploadedFile(req, MAX_PDF_BYTES));
   const query = Object.fromEntries(new URL(req.url).searchParams.entries());
-  const owner = attachmentOwnerSchema.safeParse({ ...query, ...upload.fields });
-  if (!owner.success) {
-    const issue = owner.error.issues[0]!;
-    throw new ApiError(422, "invalid_input", issue.message, { [String(issue.path[0] ?? "ownerType")]: issue.message });
-  }
-  const kind = attachmentKindSchema.safeParse(upload.fields.kind ?? query.kind ?? "other");
-  if (!kind.success) throw new ApiError(422, "invalid_input", kind.error.issues[0]!.message, { kind: kind.error.issues[0]!.message });
-  const ctx = await requireContext(req.headers, WRITE[owner.data.ownerType]);
+  const { ownerId, kind } = uploadFieldsSchema.parse({ ...query, ...upload.fields });
   const problem = pdfProblem(upload.bytes);
   if (problem) throw new ApiError(415, "not_a_pdf", problem, { file: problem });
   const fileName = /\.pdf$/i.test(upload.fileName) ? upload.fileName : `${upload.fileName}.pdf`;
-  const created = await createAttachment(ctx, { ...owner.data, kind: kind.data, fileName, contentType: "application/pdf", bytes: upload.bytes });
+  const created = await createAttachment(actor, { ownerType: subject.kind, ownerId, kind, fileName, contentType: "application/pdf", bytes: upload.bytes });
   return Response.json(created, { status: 201 });
 });

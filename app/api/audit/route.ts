@@ -1,10 +1,9 @@
 import { listAuditEvents } from "@/db/queries/audit";
-import { route } from "@/lib/api";
-import { requireContext } from "@/lib/session";
-import { auditQuerySchema, parseQuery } from "@/lib/validations/api";
+import { readQuery } from "@/lib/http/body";
+import { route } from "@/lib/http/route";
+import { auditQuerySchema } from "@/lib/validations/team";
 
 /** The team's audit trail, newest first, filterable by record, person, action and dates. */
-export const GET = route(async (req) => {
-  const ctx = await requireContext(req.headers, "audit:read");
-  return Response.json(await listAuditEvents(ctx.teamId, parseQuery(req.url, auditQuerySchema)));
+export const GET = route({ permission: "audit:read" }, async (req, { team }) => {
+  return Response.json(await listAuditEvents(team.id, readQuery(req, auditQuerySchema)));
 });

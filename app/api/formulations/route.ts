@@ -1,21 +1,16 @@
 import { createFormulation, listFormulations } from "@/db/queries/formulations";
-import { readJson, route } from "@/lib/api";
-import { can } from "@/lib/permissions";
-import { requireContext } from "@/lib/session";
-import { createFormulationSchema, formulationListQuerySchema, parseQuery } from "@/lib/validations/api";
+import { readJson, readQuery } from "@/lib/http/body";
+import { route } from "@/lib/http/route";
+import { createFormulationSchema, formulationListQuerySchema } from "@/lib/validations/formulations";
 
 /** The team's formulations, paged, sorted and filtered in SQL. */
-export const GET = route(async (req) => {
-  const ctx = await requireContext(req.headers, "formulation:read");
-  const query = parseQuery(req.url, formulationListQuerySchema);
-  const releasedOnly = !can(ctx.role, "formulation:readUnreleased");
-  return Response.json(await listFormulations(ctx.teamId, { ...query, releasedOnly }));
+export const GET = route({ permission: "formulation:read" }, async (req, { team, releasedOnly }) => {
+  const query = readQuery(req, formulationListQuerySchema);
+  return Response.json(await listFormulations(team.id, { ...query, releasedOnly }));
 });
 
-/** A new formulation with its first draft revision. */
-export const POST = route(async (req) => {
-  const ctx = await requireContext(req.headers, "formulation:create");
+/** A new formulation with its first draft revision (409 naming `name` when the team has the name). */
+export const POST = route({ permission: "formulation:create" }, async (req, { actor }) => {
   const body = await readJson(req, createFormulationSchema);
-  const created = await createFormulation(ctx, body);
-  return Response.json(created, { status: 201 });
+  return Response.json(await createFormulation(actor, body), { status: 201 });
 });

@@ -1,10 +1,11 @@
 import { sql } from "drizzle-orm";
 import { db } from "@/db";
+import { route } from "@/lib/http/route";
 
 export const dynamic = "force-dynamic";
 
-/** Liveness and database reachability, for load balancers and the start script. */
-export async function GET(): Promise<Response> {
+/** Liveness and database reachability, for load balancers and the start script. Public: no session is read. */
+export const GET = route({ access: "public" }, async () => {
   try {
     await db.execute(sql`SELECT 1`);
     return Response.json({ status: "ok", db: "up" }, { headers: { "Cache-Control": "no-store" } });
@@ -15,4 +16,4 @@ export async function GET(): Promise<Response> {
       { status: 503, headers: { "Cache-Control": "no-store", "Retry-After": "5" } },
     );
   }
-}
+});

@@ -1,16 +1,14 @@
 import { createMaterial, listMaterials } from "@/db/queries/materials";
-import { readJson, route } from "@/lib/api";
-import { requireContext } from "@/lib/session";
-import { materialBodySchema, materialListQuerySchema, parseQuery } from "@/lib/validations/api";
+import { readJson, readQuery } from "@/lib/http/body";
+import { route } from "@/lib/http/route";
+import { materialBodySchema, materialListQuerySchema } from "@/lib/validations/materials";
 
-export const GET = route(async (req) => {
-  const ctx = await requireContext(req.headers, "material:read");
-  return Response.json(await listMaterials(ctx.teamId, parseQuery(req.url, materialListQuerySchema)));
+export const GET = route({ permission: "material:read" }, async (req, { team }) => {
+  return Response.json(await listMaterials(team.id, readQuery(req, materialListQuerySchema)));
 });
 
-export const POST = route(async (req) => {
-  const ctx = await requireContext(req.headers, "material:create");
+/** A new material; a name the library has is refused by the unique key (409 naming material.name), also when two people save at once. */
+export const POST = route({ permission: "material:create" }, async (req, { actor }) => {
   const { material, casNumber } = await readJson(req, materialBodySchema);
-  // A name the team already has is refused by the unique key (409), also when two people save at once.
-  return Response.json(await createMaterial(ctx.teamId, ctx.userId, material, casNumber), { status: 201 });
+  return Response.json(await createMaterial(actor.teamId, actor.userId, material, casNumber), { status: 201 });
 });

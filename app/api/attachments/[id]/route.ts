@@ -1,24 +1,23 @@
 import { attachmentLink, deleteAttachment, getAttachment } from "@/db/queries/attachments";
-import { notFound, route } from "@/lib/api";
-import type { Permission } from "@/lib/permissions";
-import { requireContext } from "@/lib/session";
+import { NotFoundError } from "@/lib/errors";
+import { route, type MemberContext } from "@/lib/http/route";
+import { ATTACHMENT_PERMISSIONS } from "@/lib/permissions";
 
-const READ: Record<string, Permission> = { material: "material:read", batch: "batch:read" };
-const WRITE: Record<string, Permission> = { material: "material:update", batch: "batch:update" };
+/** The attachment the path names, in the caller's team (404 otherwise); its owner type picks the permission. */
+async function storedAttachment(_req: Request, { team, params }: MemberContext<{ id: string }>) {
+  const found = await getAttachment(team.id, params.id);
+  if (!found) throw new NotFoundError("attachment");
+  return { kind: found.ownerType, id: found.id };
+}
 
 /**
  * GET /api/attachments/:id : metadata with a signed download link valid for
  * a few minutes ({ …, url, expiresInSeconds }); with ?download=1 a 303
  * redirect to that link. Only the owning team, with read permission on the owner.
  */
-export const GET = route<{ id: string }>(async (req, { params }) => {
-  const signedIn = await requireContext(req.headers);
-  const { id } = await params;
-  const found = await getAttachment(signedIn.teamId, id);
-  if (!found) throw notFound("attachment");
-  const ctx = await requireContext(req.headers, READ[found.ownerType] ?? "material:read");
-  const link = await attachmentLink(ctx.teamId, id);
-  if (!link) throw notFound("attachment");
+export const GET = route({ permission: ATTACHMENT_PERMISSIONS.read, subject: storedAttachment }, async (req, { team, subject }) => {
+  const link = await attachmentLink(team.id, subject.id);
+  if (!link) throw new NotFoundError("attachment");
   if (new URL(req.url).searchParams.get("download") === "1") {
     return new Response(null, { status: 303, headers: { Location: link.url, "Cache-Control": "private, no-store" } });
   }
@@ -26,12 +25,7 @@ export const GET = route<{ id: string }>(async (req, { params }) => {
 });
 
 /** DELETE /api/attachments/:id : material:update (materials) or batch:update (open batch records only). */
-export const DELETE = route<{ id: string }>(async (req, { params }) => {
-  const signedIn = await requireContext(req.headers);
-  const { id } = await params;
-  const found = await getAttachment(signedIn.teamId, id);
-  if (!found) throw notFound("attachment");
-  const ctx = await requireContext(req.headers, WRITE[found.ownerType] ?? "material:update");
-  if (!(await deleteAttachment(ctx, id))) throw notFound("attachment");
+export const DELETE = route({ permission: ATTACHMENT_PERMISSIONS.write, subject: storedAttachment }, async (_req, { actor, subject }) => {
+  if (!(await deleteAttachment(actor, subject.id))) throw new NotFoundError("attachment");
   return new Response(null, { status: 204 });
 });

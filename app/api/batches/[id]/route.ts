@@ -1,21 +1,18 @@
 import { getBatch, saveBatchNotes } from "@/db/queries/batches";
-import { notFound, readJson, route } from "@/lib/api";
-import { batchNotesBodySchema } from "@/lib/validations/api";
-import { requireContext } from "@/lib/session";
+import { NotFoundError } from "@/lib/errors";
+import { readJson } from "@/lib/http/body";
+import { route } from "@/lib/http/route";
+import { batchNotesSchema } from "@/lib/validations/batches";
 
 /** GET /api/batches/:id : the record with each line's deviation and the composition made. */
-export const GET = route<{ id: string }>(async (req, { params }) => {
-  const ctx = await requireContext(req.headers, "batch:read");
-  const { id } = await params;
-  const batch = await getBatch(ctx.teamId, id);
-  if (!batch) throw notFound("batch record");
+export const GET = route<{ id: string }>({ permission: "batch:read" }, async (_req, { team, params }) => {
+  const batch = await getBatch(team.id, params.id);
+  if (!batch) throw new NotFoundError("batch record");
   return Response.json(batch);
 });
 
 /** PATCH /api/batches/:id { notes } : notes of an open batch (409 once closed). */
-export const PATCH = route<{ id: string }>(async (req, { params }) => {
-  const ctx = await requireContext(req.headers, "batch:update");
-  const { id } = await params;
-  const { notes } = await readJson(req, batchNotesBodySchema);
-  return Response.json(await saveBatchNotes(ctx, id, notes));
+export const PATCH = route<{ id: string }>({ permission: "batch:update" }, async (req, { actor, params }) => {
+  const { notes } = await readJson(req, batchNotesSchema);
+  return Response.json(await saveBatchNotes(actor, params.id, notes));
 });

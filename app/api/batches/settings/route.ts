@@ -1,17 +1,14 @@
 import { getBatchSettings, saveBatchSettings } from "@/db/queries/batches";
-import { readJson, route } from "@/lib/api";
-import { batchSettingsSchema } from "@/lib/spreadsheet/api-schemas";
-import { requireContext } from "@/lib/session";
+import { readJson } from "@/lib/http/body";
+import { route } from "@/lib/http/route";
+import { batchSettingsSchema } from "@/lib/validations/batches";
 
 /** GET /api/batches/settings : { toleranceFraction, balanceResolutionGrams, isDefault }. */
-export const GET = route(async (req) => {
-  const ctx = await requireContext(req.headers, "batch:read");
-  return Response.json(await getBatchSettings(ctx.teamId));
+export const GET = route({ permission: "batch:read" }, async (_req, { team }) => {
+  return Response.json(await getBatchSettings(team.id));
 });
 
 /** PUT /api/batches/settings { toleranceFraction, balanceResolutionGrams } : team admins only; applies to batches started afterwards. */
-export const PUT = route(async (req) => {
-  const ctx = await requireContext(req.headers, "organization:update");
-  const body = await readJson(req, batchSettingsSchema);
-  return Response.json(await saveBatchSettings(ctx, body));
+export const PUT = route({ permission: "organization:update" }, async (req, { actor }) => {
+  return Response.json(await saveBatchSettings(actor, await readJson(req, batchSettingsSchema)));
 });

@@ -1,12 +1,10 @@
 import { getFormulation } from "@/db/queries/formulations";
-import { notFound, route } from "@/lib/api";
-import { can } from "@/lib/permissions";
-import { requireContext } from "@/lib/session";
+import { NotFoundError } from "@/lib/errors";
+import { route } from "@/lib/http/route";
 
-export const GET = route<{ id: string }>(async (req, { params }) => {
-  const ctx = await requireContext(req.headers, "formulation:read");
-  const { id } = await params;
-  const f = await getFormulation(ctx.teamId, id, { releasedOnly: !can(ctx.role, "formulation:readUnreleased") });
-  if (!f) throw notFound("formulation");
+/** A formulation with its revisions; production sees it only with a released revision. */
+export const GET = route<{ id: string }>({ permission: "formulation:read" }, async (_req, { team, params, releasedOnly }) => {
+  const f = await getFormulation(team.id, params.id, { releasedOnly });
+  if (!f) throw new NotFoundError("formulation");
   return Response.json(f);
 });

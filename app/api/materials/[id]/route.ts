@@ -1,27 +1,24 @@
 import { deleteMaterial, getMaterial, updateMaterial } from "@/db/queries/materials";
-import { notFound, readJson, route } from "@/lib/api";
-import { requireContext } from "@/lib/session";
-import { materialBodySchema } from "@/lib/validations/api";
+import { NotFoundError } from "@/lib/errors";
+import { readJson } from "@/lib/http/body";
+import { route } from "@/lib/http/route";
+import { materialBodySchema } from "@/lib/validations/materials";
 
-export const GET = route<{ id: string }>(async (req, { params }) => {
-  const ctx = await requireContext(req.headers, "material:read");
-  const m = await getMaterial(ctx.teamId, (await params).id);
-  if (!m) throw notFound("material");
+export const GET = route<{ id: string }>({ permission: "material:read" }, async (_req, { team, params }) => {
+  const m = await getMaterial(team.id, params.id);
+  if (!m) throw new NotFoundError("material");
   return Response.json(m);
 });
 
-export const PUT = route<{ id: string }>(async (req, { params }) => {
-  const ctx = await requireContext(req.headers, "material:update");
-  const { id } = await params;
-  if (!(await getMaterial(ctx.teamId, id))) throw notFound("material");
+/** Replaces a material (409 naming material.name when the library has the new name). */
+export const PUT = route<{ id: string }>({ permission: "material:update" }, async (req, { actor, params }) => {
   const { material, casNumber } = await readJson(req, materialBodySchema);
-  const updated = await updateMaterial(ctx.teamId, ctx.userId, id, material, casNumber);
-  if (!updated) throw notFound("material");
+  const updated = await updateMaterial(actor.teamId, actor.userId, params.id, material, casNumber);
+  if (!updated) throw new NotFoundError("material");
   return Response.json(updated);
 });
 
-export const DELETE = route<{ id: string }>(async (req, { params }) => {
-  const ctx = await requireContext(req.headers, "material:delete");
-  if (!(await deleteMaterial(ctx.teamId, ctx.userId, (await params).id))) throw notFound("material");
+export const DELETE = route<{ id: string }>({ permission: "material:delete" }, async (_req, { actor, params }) => {
+  if (!(await deleteMaterial(actor.teamId, actor.userId, params.id))) throw new NotFoundError("material");
   return new Response(null, { status: 204 });
 });

@@ -1,17 +1,16 @@
 import { changeRole, removeMember } from "@/db/queries/members";
-import { readJson, route } from "@/lib/api";
-import type { RoleName } from "@/lib/permissions";
-import { requireContext } from "@/lib/session";
-import { changeRoleSchema } from "@/lib/validations/api";
+import { readJson } from "@/lib/http/body";
+import { route } from "@/lib/http/route";
+import { changeRoleSchema } from "@/lib/validations/team";
 
-export const PATCH = route<{ id: string }>(async (req, { params }) => {
-  const ctx = await requireContext(req.headers, "member:update");
+/** Changes a member's role (409 for the team's last admin). */
+export const PATCH = route<{ id: string }>({ permission: "member:update" }, async (req, { actor, params }) => {
   const { role } = await readJson(req, changeRoleSchema);
-  return Response.json(await changeRole(ctx.teamId, ctx.userId, (await params).id, role as RoleName));
+  return Response.json(await changeRole(actor.teamId, actor.userId, params.id, role));
 });
 
-export const DELETE = route<{ id: string }>(async (req, { params }) => {
-  const ctx = await requireContext(req.headers, "member:delete");
-  await removeMember(ctx.teamId, ctx.userId, (await params).id);
+/** Removes a member (409 for the team's last admin). */
+export const DELETE = route<{ id: string }>({ permission: "member:delete" }, async (_req, { actor, params }) => {
+  await removeMember(actor.teamId, actor.userId, params.id);
   return new Response(null, { status: 204 });
 });

@@ -1,21 +1,18 @@
 import { getRevision, saveDraft } from "@/db/queries/formulations";
-import { notFound, readJson, route } from "@/lib/api";
-import { can } from "@/lib/permissions";
-import { requireContext } from "@/lib/session";
-import { saveDraftSchema } from "@/lib/validations/api";
+import { NotFoundError } from "@/lib/errors";
+import { readJson } from "@/lib/http/body";
+import { route } from "@/lib/http/route";
+import { saveDraftSchema } from "@/lib/validations/formulations";
 
-export const GET = route<{ id: string }>(async (req, { params }) => {
-  const ctx = await requireContext(req.headers, "formulation:read");
-  const { id } = await params;
-  const rev = await getRevision(ctx.teamId, id, { releasedOnly: !can(ctx.role, "formulation:readUnreleased") });
-  if (!rev) throw notFound("revision");
+/** A revision with its result and reviews; production sees released revisions only. */
+export const GET = route<{ id: string }>({ permission: "formulation:read" }, async (_req, { team, params, releasedOnly }) => {
+  const rev = await getRevision(team.id, params.id, { releasedOnly });
+  if (!rev) throw new NotFoundError("revision");
   return Response.json(rev);
 });
 
 /** Saves a draft; the body carries the version it was read at (409 when stale). */
-export const PUT = route<{ id: string }>(async (req, { params }) => {
-  const ctx = await requireContext(req.headers, "formulation:update");
-  const { id } = await params;
+export const PUT = route<{ id: string }>({ permission: "formulation:update" }, async (req, { actor, params }) => {
   const body = await readJson(req, saveDraftSchema);
-  return Response.json(await saveDraft(ctx, id, body));
+  return Response.json(await saveDraft(actor, params.id, body));
 });

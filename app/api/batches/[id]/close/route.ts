@@ -1,10 +1,7 @@
 import { closeBatch } from "@/db/queries/batches";
-import { route } from "@/lib/api";
-import { requireContext } from "@/lib/session";
+import { route } from "@/lib/http/route";
 
 /** POST /api/batches/:id/close : closes the record (422 with the missing lines; 409 when already closed). */
-export const POST = route<{ id: string }>(async (req, { params }) => {
-  const ctx = await requireContext(req.headers, "batch:update");
-  const { id } = await params;
-  return Response.json(await closeBatch(ctx, id));
+export const POST = route<{ id: string }>({ permission: "batch:update" }, async (_req, { actor, params }) => {
+  return Response.json(await closeBatch(actor, params.id));
 });

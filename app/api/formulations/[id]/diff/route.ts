@@ -1,14 +1,13 @@
 import { diffFormulationRevisions } from "@/db/queries/formulations";
-import { notFound, route } from "@/lib/api";
-import { requireContext } from "@/lib/session";
-import { diffQuerySchema, parseQuery } from "@/lib/validations/api";
+import { NotFoundError } from "@/lib/errors";
+import { readQuery } from "@/lib/http/body";
+import { route } from "@/lib/http/route";
+import { diffQuerySchema } from "@/lib/validations/formulations";
 
 /** What changed between two revisions (?from=1&to=2): inputs and key results. */
-export const GET = route<{ id: string }>(async (req, { params }) => {
-  const ctx = await requireContext(req.headers, "formulation:readUnreleased");
-  const { id } = await params;
-  const { from, to } = parseQuery(req.url, diffQuerySchema);
-  const diff = await diffFormulationRevisions(ctx.teamId, id, from, to);
-  if (!diff) throw notFound("revision");
+export const GET = route<{ id: string }>({ permission: "formulation:readUnreleased" }, async (req, { team, params }) => {
+  const { from, to } = readQuery(req, diffQuerySchema);
+  const diff = await diffFormulationRevisions(team.id, params.id, from, to);
+  if (!diff) throw new NotFoundError("revision");
   return Response.json(diff);
 });

@@ -1,10 +1,7 @@
 import { startRevision } from "@/db/queries/formulations";
-import { route } from "@/lib/api";
-import { requireContext } from "@/lib/session";
+import { route } from "@/lib/http/route";
 
 /** Starts a new draft revision from the newest one. */
-export const POST = route<{ id: string }>(async (req, { params }) => {
-  const ctx = await requireContext(req.headers, "formulation:update");
-  const { id } = await params;
-  return Response.json(await startRevision(ctx, id), { status: 201 });
+export const POST = route<{ id: string }>({ permission: "formulation:update" }, async (_req, { actor, params }) => {
+  return Response.json(await startRevision(actor, params.id), { status: 201 });
 });

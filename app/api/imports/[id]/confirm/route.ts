@@ -1,21 +1,25 @@
 import { z } from "zod";
 import { confirmImport, getImportPreview } from "@/db/queries/imports";
-import { notFound, readJson, route } from "@/lib/api";
-import { requireContext } from "@/lib/session";
+import { NotFoundError } from "@/lib/errors";
+import { readJson } from "@/lib/http/body";
+import { route, type MemberContext } from "@/lib/http/route";
+import { IMPORT_PERMISSIONS } from "@/lib/permissions";
 
 const bodySchema = z.strictObject({ acceptWarnings: z.boolean().optional() });
+
+/** The caller's own preview the path names (404 otherwise); its kind picks the permission. */
+async function ownPreview(_req: Request, { actor, params }: MemberContext<{ id: string }>) {
+  const preview = await getImportPreview(actor, params.id);
+  if (!preview) throw new NotFoundError("import");
+  return { kind: preview.kind, id: preview.id };
+}
 
 /**
  * POST /api/imports/:id/confirm { acceptWarnings?: boolean } : saves the
  * import in one transaction. 422 while any error remains (or warnings are
  * not accepted), 409 when already saved or a name was taken meanwhile.
  */
-export const POST = route<{ id: string }>(async (req, { params }) => {
-  const signedIn = await requireContext(req.headers);
-  const { id } = await params;
-  const preview = await getImportPreview(signedIn, id);
-  if (!preview) throw notFound("import");
-  const ctx = await requireContext(req.headers, preview.kind === "formulation" ? "formulation:create" : "material:create");
+export const POST = route({ permission: IMPORT_PERMISSIONS, subject: ownPreview }, async (req, { actor, subject }) => {
   const { acceptWarnings } = await readJson(req, bodySchema);
-  return Response.json(await confirmImport(ctx, id, { acceptWarnings: acceptWarnings === true }));
+  return Response.json(await confirmImport(actor, subject.id, { acceptWarnings: acceptWarnings === true }));
 });

@@ -1,29 +1,22 @@
 import { transition } from "@/db/queries/formulations";
-import { notFound, readJson, route } from "@/lib/api";
+import { readJson } from "@/lib/http/body";
+import { byParam, route } from "@/lib/http/route";
 import { notifyTransition } from "@/lib/notify";
-import type { Permission } from "@/lib/permissions";
-import { requireContext } from "@/lib/session";
-import { reviewCommentSchema } from "@/lib/validations/api";
+import { REVISION_ACTION_PERMISSIONS } from "@/lib/permissions";
+import { reviewCommentSchema } from "@/lib/validations/formulations";
 import type { WorkflowAction } from "@/lib/workflow";
 
-const PERMISSION: Record<WorkflowAction, Permission> = {
-  submit: "formulation:submit",
-  approve: "formulation:review",
-  return: "formulation:review",
-  release: "formulation:release",
-  archive: "formulation:archive",
-};
-
-/** POST /api/revisions/:id/(submit|approve|return|release|archive) with an optional { comment }. */
-export const POST = route<{ id: string; action: string }>(async (req, { params }) => {
-  const { id, action } = await params;
-  if (!(action in PERMISSION)) {
-    await requireContext(req.headers);
-    throw notFound("action");
-  }
-  const ctx = await requireContext(req.headers, PERMISSION[action as WorkflowAction]);
-  const { comment } = await readJson(req, reviewCommentSchema);
-  const outcome = await transition(ctx, id, action as WorkflowAction, { comment });
-  await notifyTransition(ctx.teamId, outcome, comment);
-  return Response.json(outcome);
-});
+/**
+ * POST /api/revisions/:id/(submit|approve|return|release|archive) with an
+ * optional { comment }. The permission is the action's
+ * (REVISION_ACTION_PERMISSIONS); another action is 404.
+ */
+export const POST = route<{ id: string; action: string }, { kind: WorkflowAction }>(
+  { permission: REVISION_ACTION_PERMISSIONS, subject: byParam<WorkflowAction>("action") },
+  async (req, { actor, params, subject }) => {
+    const { comment } = await readJson(req, reviewCommentSchema);
+    const outcome = await transition(actor, params.id, subject.kind, { comment });
+    await notifyTransition(actor.teamId, outcome, comment);
+    return Response.json(outcome);
+  },
+);

@@ -1,5 +1,6 @@
 /** Reading a multipart/form-data upload with a size limit checked before the body is read. */
-import { ApiError, readBodyBytes } from "@/lib/api";
+import { readBodyBytes } from "@/lib/http/body";
+import { ApiError } from "@/lib/http/errors";
 import { FORM_OVERHEAD_BYTES } from "@/lib/server/body-limit";
 
 export interface UploadedFile {

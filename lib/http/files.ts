@@ -1,5 +1,5 @@
 /** Responses that carry a file: .xlsx or CSV, never cached, always downloaded. */
-import { safeFileName } from "./export-formulation";
+import { safeFileName } from "@/lib/spreadsheet/export-formulation";
 
 export const XLSX_TYPE = "application/vnd.openxmlformats-officedocument.spreadsheetml.sheet";
 
