@@ -1,6 +1,6 @@
 import "server-only";
 import { emailOfUser, emailsByRole } from "@/db/queries/members";
-import type { TransitionOutcome } from "@/db/queries/formulations";
+import type { TransitionOutcome } from "@/db/queries/revisions";
 import { config } from "./config";
 import { sendMail } from "./mail";
 

@@ -19,6 +19,7 @@ const OK = { comment: "Cure schedule checked." };
 
 let t: TestDatabase;
 let fq: typeof import("@/db/queries/formulations");
+let rq: typeof import("@/db/queries/revisions");
 let mq: typeof import("@/db/queries/members");
 let matq: typeof import("@/db/queries/materials");
 let bq: typeof import("@/db/queries/batches");
@@ -31,6 +32,7 @@ beforeAll(async () => {
   process.env.DATABASE_URL = t.url;
   delete (globalThis as { gelwrightDb?: unknown }).gelwrightDb;
   fq = await import("@/db/queries/formulations");
+  rq = await import("@/db/queries/revisions");
   mq = await import("@/db/queries/members");
   matq = await import("@/db/queries/materials");
   bq = await import("@/db/queries/batches");
@@ -61,11 +63,11 @@ async function twoApprovedRevisions(name: string): Promise<{ formulationId: stri
   const author = { userId: users.formulator!, teamId };
   const reviewer = { userId: users.reviewer!, teamId };
   const { formulationId, revisionId: first } = await fq.createFormulation(author, { name, input });
-  await fq.transition(author, first, "submit");
-  await fq.transition(reviewer, first, "approve", OK);
-  const { revisionId: second } = await fq.startRevision(author, formulationId);
-  await fq.transition(author, second, "submit");
-  await fq.transition(reviewer, second, "approve", OK);
+  await rq.transition(author, first, "submit");
+  await rq.transition(reviewer, first, "approve", OK);
+  const { revisionId: second } = await rq.startRevision(author, formulationId);
+  await rq.transition(author, second, "submit");
+  await rq.transition(reviewer, second, "approve", OK);
   return { formulationId, ids: [first, second] };
 }
 
@@ -74,7 +76,7 @@ describe("two releases of one formulation at the same moment", () => {
     const reviewer = { userId: users.reviewer!, teamId };
     for (let round = 0; round < ROUNDS; round++) {
       const { formulationId, ids } = await twoApprovedRevisions(`Release race ${round}`);
-      const outcomes = await Promise.allSettled(ids.map((id) => fq.transition(reviewer, id, "release")));
+      const outcomes = await Promise.allSettled(ids.map((id) => rq.transition(reviewer, id, "release")));
       for (const o of outcomes) if (o.status === "rejected") throw o.reason;
       const states = await t.db
         .select({ number: revisions.number, state: revisions.state })
@@ -175,13 +177,13 @@ describe("a second person approves", () => {
     const editor = await addMember("formulator");
     const asEditor = { userId: editor.userId, teamId };
     const { revisionId } = await fq.createFormulation(creator, { name: "Co-author approval", input });
-    const saved = await fq.saveDraft(asEditor, revisionId, { input, version: 1 });
+    const saved = await rq.saveDraft(asEditor, revisionId, { input, version: 1 });
     expect(saved.version).toBe(2);
-    await fq.transition(asEditor, revisionId, "submit");
+    await rq.transition(asEditor, revisionId, "submit");
     await mq.changeRole(teamId, users.admin!, editor.memberId, "reviewer");
-    await expect(fq.transition(asEditor, revisionId, "approve", OK)).rejects.toMatchObject({ name: "WorkflowError", code: "own_revision" });
-    await expect(fq.transition(creator, revisionId, "approve", OK)).rejects.toMatchObject({ code: "own_revision" });
-    const done = await fq.transition({ userId: users.reviewer!, teamId }, revisionId, "approve", OK);
+    await expect(rq.transition(asEditor, revisionId, "approve", OK)).rejects.toMatchObject({ name: "WorkflowError", code: "own_revision" });
+    await expect(rq.transition(creator, revisionId, "approve", OK)).rejects.toMatchObject({ code: "own_revision" });
+    const done = await rq.transition({ userId: users.reviewer!, teamId }, revisionId, "approve", OK);
     expect(done.to).toBe("approved");
   });
 
@@ -191,8 +193,8 @@ describe("a second person approves", () => {
     for (let round = 0; round < ROUNDS; round++) {
       const { revisionId } = await fq.createFormulation(creator, { name: `Submit and approve race ${round}`, input });
       const [submit, approve] = await Promise.allSettled([
-        fq.transition(submitter, revisionId, "submit"),
-        fq.transition(submitter, revisionId, "approve", OK),
+        rq.transition(submitter, revisionId, "submit"),
+        rq.transition(submitter, revisionId, "approve", OK),
       ]);
       expect(submit.status, `round ${round}`).toBe("fulfilled");
       expect(approve.status, `round ${round}`).toBe("rejected");
@@ -205,8 +207,8 @@ describe("a second person approves", () => {
     const creator = { userId: users.formulator!, teamId };
     const submitter = await addMember("formulator");
     const { revisionId } = await fq.createFormulation(creator, { name: "Submitter approval", input });
-    await fq.transition({ userId: submitter.userId, teamId }, revisionId, "submit");
-    await expect(fq.transition({ userId: submitter.userId, teamId }, revisionId, "approve", OK)).rejects.toMatchObject({ code: "own_revision" });
+    await rq.transition({ userId: submitter.userId, teamId }, revisionId, "submit");
+    await expect(rq.transition({ userId: submitter.userId, teamId }, revisionId, "approve", OK)).rejects.toMatchObject({ code: "own_revision" });
   });
 });
 

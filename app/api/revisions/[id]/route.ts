@@ -1,4 +1,5 @@
-import { getRevision, saveDraft } from "@/db/queries/formulations";
+import { getRevision } from "@/db/queries/formulations";
+import { saveDraft } from "@/db/queries/revisions";
 import { NotFoundError } from "@/lib/errors";
 import { readJson } from "@/lib/http/body";
 import { route } from "@/lib/http/route";

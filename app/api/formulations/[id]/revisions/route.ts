@@ -1,4 +1,4 @@
-import { startRevision } from "@/db/queries/formulations";
+import { startRevision } from "@/db/queries/revisions";
 import { route } from "@/lib/http/route";
 
 /** Starts a new draft revision from the newest one. */

@@ -1,4 +1,4 @@
-import { transition } from "@/db/queries/formulations";
+import { transition } from "@/db/queries/revisions";
 import { readJson } from "@/lib/http/body";
 import { byParam, route } from "@/lib/http/route";
 import { notifyTransition } from "@/lib/notify";
