@@ -3,6 +3,7 @@ import Link from "next/link";
 import { pageContext } from "@/components/layout/page-context";
 import { BatchList } from "@/components/batches/batch-list";
 import { BATCH_STATE_LABELS } from "@/components/batches/batch-words";
+import { Button } from "@/components/ui/button";
 import { inputClass } from "@/components/ui/field";
 import { NotAllowed, PageHeader } from "@/components/ui/panel";
 import { getFormulation } from "@/db/queries/formulations";
@@ -47,9 +48,7 @@ export default async function BatchesPage({ searchParams }: { searchParams: Prom
             ))}
           </select>
         </label>
-        <button type="submit" className="rounded border border-rule bg-panel px-3 py-1.5 text-sm">
-          Show
-        </button>
+        <Button type="submit">Show</Button>
       </form>
       <BatchList
         formulationId={formulation?.id}
