@@ -53,48 +53,28 @@ export function EntryLine({ index: i, line, draft, problem, saving, batch, entry
           {line.targetMl !== undefined ? ` (≈ ${fmtVolume(line.targetMl)})` : ""}
         </p>
       </div>
-      <div className="flex flex-col gap-1">
-        <label htmlFor={`mass-${i}`} className="text-[13px] font-medium md:sr-only">
-          Actual mass (g)<span className="sr-only">, line {i + 1}: {name}</span>
-        </label>
-        <input
-          id={`mass-${i}`}
-          ref={keys.inputRef("mass", i)}
-          type="text"
-          inputMode="decimal"
-          autoComplete="off"
-          enterKeyHint="next"
-          className={inputClass(problem?.field === "mass", "num text-right")}
-          value={draft.mass}
-          placeholder={line.targetGrams !== undefined ? fmtMass(line.targetGrams, res).replace(/\s*g$/, "") : ""}
-          aria-invalid={problem?.field === "mass" ? true : undefined}
-          aria-describedby={`line-${i}-error entry-help`}
-          onChange={(e) => entry.setDraft(i, { mass: e.target.value })}
-          onKeyDown={(e) => keys.onKey("mass", i, e)}
-          onBlur={() => entry.saveIfChanged(i)}
-        />
-      </div>
-      <div className="flex flex-col gap-1">
-        <label htmlFor={`lot-${i}`} className="text-[13px] font-medium md:sr-only">
-          Lot number<span className="sr-only">, line {i + 1}: {name}</span>
-        </label>
-        <input
-          id={`lot-${i}`}
-          ref={keys.inputRef("lot", i)}
-          type="text"
-          autoComplete="off"
-          enterKeyHint="next"
-          maxLength={100}
-          className={inputClass(problem?.field === "lot", "font-mono")}
-          value={draft.lot}
-          placeholder={line.role === "water" ? "not needed" : ""}
-          aria-invalid={problem?.field === "lot" ? true : undefined}
-          aria-describedby={`line-${i}-error`}
-          onChange={(e) => entry.setDraft(i, { lot: e.target.value })}
-          onKeyDown={(e) => keys.onKey("lot", i, e)}
-          onBlur={() => entry.saveIfChanged(i)}
-        />
-      </div>
+      <LineInput
+        field="mass"
+        index={i}
+        label="Actual mass (g)"
+        name={name}
+        value={draft.mass}
+        invalid={problem?.field === "mass"}
+        placeholder={line.targetGrams !== undefined ? fmtMass(line.targetGrams, res).replace(/\s*g$/, "") : ""}
+        entry={entry}
+        keys={keys}
+      />
+      <LineInput
+        field="lot"
+        index={i}
+        label="Lot number"
+        name={name}
+        value={draft.lot}
+        invalid={problem?.field === "lot"}
+        placeholder={line.role === "water" ? "not needed" : ""}
+        entry={entry}
+        keys={keys}
+      />
       <div className="col-span-2 flex min-w-0 flex-col gap-0.5 text-sm md:col-span-1" data-testid={`line-status-${i}`}>
         <span className="flex flex-wrap items-center gap-1.5">
           <ToleranceBadge deviation={deviation} toleranceFraction={batch.toleranceFraction} resolution={res} />
@@ -106,5 +86,50 @@ export function EntryLine({ index: i, line, draft, problem, saving, batch, entry
         <FieldError id={`line-${i}-error`} message={problem?.message} />
       </div>
     </li>
+  );
+}
+
+interface LineInputProps {
+  field: "mass" | "lot";
+  index: number;
+  label: string;
+  /** The line's material, for the label screen readers hear. */
+  name: string;
+  value: string;
+  invalid: boolean;
+  placeholder: string;
+  entry: Pick<BatchEntryState, "setDraft" | "saveIfChanged">;
+  keys: Pick<EntryKeys, "inputRef" | "onKey">;
+}
+
+/** The mass or lot-number field of a line: saved when left, moved through with the keys. */
+function LineInput({ field, index: i, label, name, value, invalid, placeholder, entry, keys }: LineInputProps) {
+  const mass = field === "mass";
+  return (
+    <div className="flex flex-col gap-1">
+      <label htmlFor={`${field}-${i}`} className="text-[13px] font-medium md:sr-only">
+        {label}
+        <span className="sr-only">
+          , line {i + 1}: {name}
+        </span>
+      </label>
+      <input
+        id={`${field}-${i}`}
+        ref={keys.inputRef(field, i)}
+        type="text"
+        inputMode={mass ? "decimal" : undefined}
+        autoComplete="off"
+        enterKeyHint="next"
+        maxLength={mass ? undefined : 100}
+        className={inputClass(invalid, mass ? "num text-right" : "font-mono")}
+        value={value}
+        placeholder={placeholder}
+        aria-invalid={invalid ? true : undefined}
+        aria-describedby={mass ? `line-${i}-error entry-help` : `line-${i}-error`}
+        onChange={(e) => entry.setDraft(i, { [field]: e.target.value })}
+        onKeyDown={(e) => keys.onKey(field, i, e)}
+        onBlur={() => entry.saveIfChanged(i)}
+      />
+    </div>
   );
 }
