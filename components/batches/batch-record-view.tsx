@@ -18,7 +18,7 @@ interface BatchRecordViewProps {
 
 /** A batch record as read by anyone in the team: lines with deviations, composition made, documents, download. */
 export function BatchRecordView({ initial, canRecord }: BatchRecordViewProps) {
-  const { data, error, mutate } = useBatch(initial);
+  const { data, error, mutate } = useBatch(initial.id, { initial });
   const batch = data ?? initial;
   const res = batch.balanceResolutionGrams;
   const open = batch.state === "open";

@@ -14,7 +14,7 @@ import { draftOf, isDirty, lineChanges, type Draft, type LineProblem } from "./l
  * newest; what the user typed is never thrown away on a failed save.
  */
 export function useBatchEntry(initial: Batch, defaultInitials: string) {
-  const { data, mutate } = useBatch(initial, { revalidateOnFocus: false });
+  const { data, mutate } = useBatch(initial.id, { initial, revalidateOnFocus: false });
   const batch = data ?? initial;
   const [drafts, setDrafts] = useState<Draft[]>(() => initial.lines.map(draftOf));
   const [problems, setProblems] = useState<Record<number, LineProblem | undefined>>({});

@@ -33,9 +33,9 @@ export const batchUrls = {
   export: (id: string) => `/api/batches/${encodeURIComponent(id)}/export`,
 };
 
-/** One batch record, starting from the copy the page was rendered with. */
-export function useBatch(initial: Batch, options: Pick<SWRConfiguration, "revalidateOnFocus"> = {}) {
-  return useSWR<Batch>(batchUrls.one(initial.id), fetcher, { fallbackData: initial, ...options });
+/** One batch record; `initial` is the copy the page was rendered with, shown until the first answer. */
+export function useBatch(id: string, { initial, ...options }: { initial?: Batch } & Pick<SWRConfiguration, "revalidateOnFocus"> = {}) {
+  return useSWR<Batch>(batchUrls.one(id), fetcher, { fallbackData: initial, ...options });
 }
 
 /** The team's batch records, newest first, filtered by formulation, revision or state. */
