@@ -1,4 +1,4 @@
-import { TableHead, TD, TDN } from "@/components/ui/table-head";
+import { TableHead, TD } from "@/components/ui/table-head";
 import { ToneBadge } from "@/components/ui/tone-badge";
 import type { ImportPreviewProblem } from "@/lib/client/imports";
 
@@ -29,7 +29,7 @@ export function ProblemsTable({ problems }: ProblemsTableProps) {
                 )}
               </td>
               <td className={`${TD} whitespace-nowrap`}>{p.sheet}</td>
-              <td className={`${TDN} text-left`}>{p.row ?? "–"}</td>
+              <td className={`${TD} num`}>{p.row ?? "–"}</td>
               <td className={TD}>
                 {p.column ? (
                   <>
