@@ -1,16 +1,52 @@
-import { TD, TDN, TH, THN } from "@/components/results/table";
+import type { ReactNode } from "react";
 import { Panel } from "@/components/ui/panel";
+import { TableHead, TD, TDN } from "@/components/ui/table-head";
+import type { Batch } from "@/lib/client/batches";
 import { fmtMass, fmtPercent, fmtRatio } from "@/lib/format";
-import type { BatchDto } from "./types";
 
 interface CompositionPanelProps {
-  batch: BatchDto;
+  batch: Batch;
 }
 
 /** The dry composite actually made, beside the target, once every line is weighed. */
 export function CompositionPanel({ batch }: CompositionPanelProps) {
   const c = batch.composition;
   const res = batch.balanceResolutionGrams;
+  const rows: { key: string; figure: ReactNode; target: string; made: string }[] = c
+    ? [
+        ...c.components.map((k) => ({
+          key: `m-${k.materialId}`,
+          figure: (
+            <>
+              {k.name} <span className="text-xs text-muted">weight fraction</span>
+            </>
+          ),
+          target: fmtPercent(k.targetWeightFraction, 2),
+          made: fmtPercent(k.actualWeightFraction, 2),
+        })),
+        { key: "solid", figure: "Dry composite mass", target: fmtMass(c.solidGrams.target, res), made: fmtMass(c.solidGrams.actual, res) },
+        {
+          key: "R",
+          figure: (
+            <>
+              Effective water ratio R <span className="text-xs text-muted">mol H₂O per mol network atom</span>
+            </>
+          ),
+          target: fmtRatio(c.effectiveR.target),
+          made: fmtRatio(c.effectiveR.actual),
+        },
+        {
+          key: "h",
+          figure: (
+            <>
+              Effective water ratio h <span className="text-xs text-muted">mol H₂O per mol hydrolysable group</span>
+            </>
+          ),
+          target: fmtRatio(c.effectiveH.target),
+          made: fmtRatio(c.effectiveH.actual),
+        },
+      ]
+    : [];
   return (
     <Panel title="Composition made" id="composition">
       {!c ? (
@@ -21,50 +57,17 @@ export function CompositionPanel({ batch }: CompositionPanelProps) {
         <div className="overflow-x-auto">
           <table className="w-full text-sm" data-testid="composition-made">
             <caption className="sr-only">Composition made compared with the target</caption>
-            <thead>
-              <tr className="border-b border-rule">
-                <th scope="col" className={TH}>
-                  Figure
-                </th>
-                <th scope="col" className={THN}>
-                  Target
-                </th>
-                <th scope="col" className={THN}>
-                  Made
-                </th>
-              </tr>
-            </thead>
+            <TableHead columns={["Figure", { label: "Target", numeric: true }, { label: "Made", numeric: true }]} />
             <tbody>
-              {c.components.map((k) => (
-                <tr key={k.materialId} className="border-b border-rule/60">
+              {rows.map((r) => (
+                <tr key={r.key} className="border-b border-rule/60 last:border-0">
                   <th scope="row" className={`${TD} text-left font-normal`}>
-                    {k.name} <span className="text-xs text-muted">weight fraction</span>
+                    {r.figure}
                   </th>
-                  <td className={TDN}>{fmtPercent(k.targetWeightFraction, 2)}</td>
-                  <td className={TDN}>{fmtPercent(k.actualWeightFraction, 2)}</td>
+                  <td className={TDN}>{r.target}</td>
+                  <td className={TDN}>{r.made}</td>
                 </tr>
               ))}
-              <tr className="border-b border-rule/60">
-                <th scope="row" className={`${TD} text-left font-normal`}>
-                  Dry composite mass
-                </th>
-                <td className={TDN}>{fmtMass(c.solidGrams.target, res)}</td>
-                <td className={TDN}>{fmtMass(c.solidGrams.actual, res)}</td>
-              </tr>
-              <tr className="border-b border-rule/60">
-                <th scope="row" className={`${TD} text-left font-normal`}>
-                  Effective water ratio R <span className="text-xs text-muted">mol H₂O per mol network atom</span>
-                </th>
-                <td className={TDN}>{fmtRatio(c.effectiveR.target)}</td>
-                <td className={TDN}>{fmtRatio(c.effectiveR.actual)}</td>
-              </tr>
-              <tr>
-                <th scope="row" className={`${TD} text-left font-normal`}>
-                  Effective water ratio h <span className="text-xs text-muted">mol H₂O per mol hydrolysable group</span>
-                </th>
-                <td className={TDN}>{fmtRatio(c.effectiveH.target)}</td>
-                <td className={TDN}>{fmtRatio(c.effectiveH.actual)}</td>
-              </tr>
             </tbody>
           </table>
         </div>

@@ -3,11 +3,15 @@
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { BalanceSelect } from "@/components/results/balance-select";
+import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { Field, inputClass } from "@/components/ui/field";
 import { Panel } from "@/components/ui/panel";
-import { apiSend, errorMessage } from "@/lib/client/fetcher";
-import { BALANCE_RESOLUTIONS, fmtPercent } from "@/lib/format";
+import { startBatch } from "@/lib/client/batches";
+import { errorMessage } from "@/lib/client/fetcher";
+import { useInvalidate } from "@/lib/client/invalidate";
+import { BALANCE_RESOLUTIONS, DEFAULT_BALANCE_RESOLUTION } from "@/lib/format";
+import { toleranceWords } from "./batch-deviation";
 import { BatchList } from "./batch-list";
 
 interface StartBatchPanelProps {
@@ -22,7 +26,8 @@ interface StartBatchPanelProps {
 /** Starts a batch record from a released revision, and lists the revision's records. */
 export function StartBatchPanel({ revisionId, revisionNumber, toleranceFraction, balanceResolutionGrams, canStart }: StartBatchPanelProps) {
   const router = useRouter();
-  const initialResolution = (BALANCE_RESOLUTIONS as readonly number[]).includes(balanceResolutionGrams) ? balanceResolutionGrams : 0.01;
+  const invalidate = useInvalidate();
+  const initialResolution = (BALANCE_RESOLUTIONS as readonly number[]).includes(balanceResolutionGrams) ? balanceResolutionGrams : DEFAULT_BALANCE_RESOLUTION;
   const [resolution, setResolution] = useState(initialResolution);
   const [notes, setNotes] = useState("");
   const [busy, setBusy] = useState(false);
@@ -32,11 +37,8 @@ export function StartBatchPanel({ revisionId, revisionNumber, toleranceFraction,
     setBusy(true);
     setMessage(null);
     try {
-      const created = await apiSend<{ id: string }>("POST", "/api/batches", {
-        revisionId,
-        notes: notes.trim() || null,
-        balanceResolutionGrams: resolution,
-      });
+      const created = await startBatch({ revisionId, notes: notes.trim() || null, balanceResolutionGrams: resolution });
+      void invalidate("batches");
       router.push(`/batches/${created.id}/weigh`);
     } catch (err) {
       setMessage(`Not started: ${errorMessage(err)}`);
@@ -51,8 +53,7 @@ export function StartBatchPanel({ revisionId, revisionNumber, toleranceFraction,
         {canStart ? (
           <div className="flex flex-col gap-2 border-t border-rule pt-3">
             <p className="text-sm text-muted">
-              Record a batch as you make it: actual masses and lot numbers line by line, checked against a tolerance of ±
-              {fmtPercent(toleranceFraction, toleranceFraction * 100 < 1 ? 1 : 0)} of each target.
+              Record a batch as you make it: actual masses and lot numbers line by line, checked against a tolerance of {toleranceWords(toleranceFraction)} of each target.
             </p>
             <div className="flex flex-wrap items-end gap-3">
               <BalanceSelect value={resolution} onChange={setResolution} />
@@ -63,9 +64,7 @@ export function StartBatchPanel({ revisionId, revisionNumber, toleranceFraction,
                 Start a batch record
               </Button>
             </div>
-            <p aria-live="assertive" role={message ? "alert" : undefined} className="text-sm text-fail empty:hidden">
-              {message}
-            </p>
+            <div aria-live="assertive">{message ? <Alert tone="fail">{message}</Alert> : null}</div>
           </div>
         ) : null}
       </div>

@@ -3,8 +3,10 @@
 import { useBalanceResolution } from "@/components/results/balance";
 import { BalanceSelect } from "@/components/results/balance-select";
 import { materialsById, ROLE_WORDS } from "@/components/results/words";
+import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { SAFETY_REMINDER } from "@/components/ui/hazards";
+import { TableHead } from "@/components/ui/table-head";
 import type { FormulationInput, FormulationResult } from "@/lib/formulation";
 import { fmtDateTime, fmtHours, fmtMass, fmtPercent, fmtTemp, fmtVolume } from "@/lib/format";
 
@@ -29,6 +31,18 @@ const PRINT_CSS = `
   .batch-sheet .write-in { height: 9mm; }
 }
 `;
+
+const DISPENSING_COLUMNS = [
+  "#",
+  "Material",
+  "Lot number",
+  { label: "Target mass", numeric: true },
+  { label: "Target volume", numeric: true },
+  "Actual mass (g)",
+  "Time",
+  "Initials",
+];
+const STEP_COLUMNS = ["#", "Step", { label: "Temperature", numeric: true }, { label: "Duration", numeric: true }, "Started", "Ended", "Initials"];
 
 function basisWords(input: FormulationInput): string {
   const b = input.basis;
@@ -56,9 +70,7 @@ export function BatchSheet({ formulationName, project, revisionNumber, released,
         </Button>
       </div>
       {!released ? (
-        <p role="note" className="mb-3 rounded border border-fail/50 bg-fail-soft px-3 py-2 text-sm font-semibold text-fail">
-          Preview only: this revision is not released to production. Do not use it to make a batch.
-        </p>
+        <Alert tone="fail" role="status" className="mb-3" title="Preview only: this revision is not released to production. Do not use it to make a batch." />
       ) : null}
       <header className="flex flex-wrap items-start justify-between gap-3 border-b border-ink/60 pb-2">
         <div>
@@ -108,34 +120,7 @@ export function BatchSheet({ formulationName, project, revisionNumber, released,
       <div className="overflow-x-auto">
         <table className="w-full border-collapse text-sm">
           <caption className="sr-only">Dispensing, in order of addition</caption>
-          <thead>
-            <tr>
-              <th scope="col" className={head}>
-                #
-              </th>
-              <th scope="col" className={head}>
-                Material
-              </th>
-              <th scope="col" className={head}>
-                Lot number
-              </th>
-              <th scope="col" className={`${head} text-right`}>
-                Target mass
-              </th>
-              <th scope="col" className={`${head} text-right`}>
-                Target volume
-              </th>
-              <th scope="col" className={head}>
-                Actual mass (g)
-              </th>
-              <th scope="col" className={head}>
-                Time
-              </th>
-              <th scope="col" className={head}>
-                Initials
-              </th>
-            </tr>
-          </thead>
+          <TableHead columns={DISPENSING_COLUMNS} cellClassName={head} />
           <tbody>
             {result.lines.map((l, i) => {
               const m = byId.get(l.materialId);
@@ -166,31 +151,7 @@ export function BatchSheet({ formulationName, project, revisionNumber, released,
       <div className="overflow-x-auto">
         <table className="w-full border-collapse text-sm">
           <caption className="sr-only">Process steps</caption>
-          <thead>
-            <tr>
-              <th scope="col" className={head}>
-                #
-              </th>
-              <th scope="col" className={head}>
-                Step
-              </th>
-              <th scope="col" className={`${head} text-right`}>
-                Temperature
-              </th>
-              <th scope="col" className={`${head} text-right`}>
-                Duration
-              </th>
-              <th scope="col" className={head}>
-                Started
-              </th>
-              <th scope="col" className={head}>
-                Ended
-              </th>
-              <th scope="col" className={head}>
-                Initials
-              </th>
-            </tr>
-          </thead>
+          <TableHead columns={STEP_COLUMNS} cellClassName={head} />
           <tbody>
             {input.steps.map((s, i) => (
               <tr key={i} className="write-in">

@@ -1,5 +1,6 @@
 import "server-only";
 import Link from "next/link";
+import { buttonClass } from "@/components/ui/button";
 import { getFormulation, listFormulations } from "@/db/queries/formulations";
 import { fmtDateTime } from "@/lib/format";
 
@@ -33,7 +34,7 @@ export async function ReleasedList({ teamId, q }: ReleasedListProps) {
             {r.released ? (
               <Link
                 href={`/revisions/${r.released.id}/batch-sheet`}
-                className="rounded border border-accent bg-accent px-3 py-1.5 text-sm font-medium whitespace-nowrap text-white"
+                className={buttonClass("primary")}
                 aria-label={`Batch sheet of ${r.name}, revision ${r.released.number}`}
               >
                 Batch sheet

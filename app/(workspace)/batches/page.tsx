@@ -2,9 +2,12 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { pageContext } from "@/components/layout/page-context";
 import { BatchList } from "@/components/batches/batch-list";
+import { BATCH_STATE_LABELS } from "@/components/batches/batch-words";
+import { Button } from "@/components/ui/button";
 import { inputClass } from "@/components/ui/field";
 import { NotAllowed, PageHeader } from "@/components/ui/panel";
 import { getFormulation } from "@/db/queries/formulations";
+import { BATCH_STATES, type BatchState } from "@/lib/enums";
 import { can } from "@/lib/permissions";
 
 export const metadata: Metadata = { title: "Batch records" };
@@ -14,7 +17,7 @@ export default async function BatchesPage({ searchParams }: { searchParams: Prom
   if (!can(ctx.role, "batch:read")) return <NotAllowed what="see batch records" />;
   const params = await searchParams;
   const formulationId = typeof params.formulationId === "string" && /^[0-9a-f-]{36}$/i.test(params.formulationId) ? params.formulationId : undefined;
-  const state = params.state === "open" || params.state === "closed" ? params.state : undefined;
+  const state = BATCH_STATES.find((s): s is BatchState => s === params.state);
   const formulation = formulationId
     ? await getFormulation(ctx.teamId, formulationId, { releasedOnly: !can(ctx.role, "formulation:readUnreleased") })
     : null;
@@ -38,13 +41,14 @@ export default async function BatchesPage({ searchParams }: { searchParams: Prom
           State
           <select name="state" defaultValue={state ?? ""} className={inputClass(false, "w-48")}>
             <option value="">Open and closed</option>
-            <option value="open">Open, being weighed</option>
-            <option value="closed">Closed</option>
+            {BATCH_STATES.map((s) => (
+              <option key={s} value={s}>
+                {BATCH_STATE_LABELS[s]}
+              </option>
+            ))}
           </select>
         </label>
-        <button type="submit" className="rounded border border-rule bg-panel px-3 py-1.5 text-sm">
-          Show
-        </button>
+        <Button type="submit">Show</Button>
       </form>
       <BatchList
         formulationId={formulation?.id}

@@ -1,7 +1,8 @@
 import type { Metadata } from "next";
-import { ImportWizard, type ImportKind } from "@/components/imports/import-wizard";
+import { ImportWizard } from "@/components/imports/import-wizard";
 import { pageContext } from "@/components/layout/page-context";
 import { NotAllowed, PageHeader } from "@/components/ui/panel";
+import { IMPORT_KINDS, type ImportKind } from "@/lib/enums";
 import { can } from "@/lib/permissions";
 
 export const metadata: Metadata = { title: "Import from a spreadsheet" };
@@ -13,8 +14,8 @@ export default async function ImportPage({ searchParams }: { searchParams: Promi
   if (can(ctx.role, "material:create")) kinds.push("materials");
   if (kinds.length === 0) return <NotAllowed what="import formulations or materials" />;
   const params = await searchParams;
-  const asked = params.kind === "materials" || params.kind === "formulation" ? params.kind : undefined;
-  const initialKind = asked && kinds.includes(asked) ? asked : kinds[0]!;
+  const asked = IMPORT_KINDS.find((k) => k === params.kind && kinds.includes(k));
+  const initialKind = asked ?? kinds[0]!;
   return (
     <>
       <PageHeader

@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import { Suspense } from "react";
 import { pageContext } from "@/components/layout/page-context";
 import { ReleasedList } from "@/components/production/released-list";
+import { Button } from "@/components/ui/button";
 import { inputClass } from "@/components/ui/field";
 import { NotAllowed, PageHeader } from "@/components/ui/panel";
 import { TableSkeleton } from "@/components/ui/skeleton";
@@ -22,9 +23,7 @@ export default async function ProductionPage({ searchParams }: { searchParams: P
           Search released formulations
           <input type="search" name="q" defaultValue={q} className={inputClass()} />
         </label>
-        <button type="submit" className="rounded border border-rule bg-panel px-3 py-1.5 text-sm">
-          Search
-        </button>
+        <Button type="submit">Search</Button>
       </form>
       <Suspense key={q} fallback={<TableSkeleton rows={4} label="Loading released formulations" />}>
         <ReleasedList teamId={ctx.teamId} q={q || undefined} />
