@@ -8,7 +8,7 @@
 import useSWR, { type SWRConfiguration } from "swr";
 import type { z } from "zod";
 import type { getBatch, listBatches } from "@/db/queries/batches";
-import type { batchNotesBodySchema, recordLineBodySchema, startBatchBodySchema } from "@/lib/validations/api";
+import type { batchNotesSchema, recordLineSchema, startBatchSchema } from "@/lib/validations/batches";
 import { apiSend, fetcher, query } from "./fetcher";
 import type { ApiData } from "./json";
 
@@ -44,17 +44,17 @@ export function useBatches(filter: BatchListQuery = {}) {
 }
 
 /** Starts a batch record from a released revision; answers the new record. */
-export function startBatch(body: z.input<typeof startBatchBodySchema>): Promise<Batch> {
+export function startBatch(body: z.input<typeof startBatchSchema>): Promise<Batch> {
   return apiSend<Batch>("POST", batchUrls.list(), body);
 }
 
 /** Records one line (0-based index): actual mass, lot number, initials. Answers the whole record. */
-export function recordLine(id: string, index: number, body: z.input<typeof recordLineBodySchema>): Promise<Batch> {
+export function recordLine(id: string, index: number, body: z.input<typeof recordLineSchema>): Promise<Batch> {
   return apiSend<Batch>("PATCH", batchUrls.line(id, index), body);
 }
 
 /** Changes the notes of an open record. Answers the whole record. */
-export function saveBatchNotes(id: string, notes: z.input<typeof batchNotesBodySchema>["notes"]): Promise<Batch> {
+export function saveBatchNotes(id: string, notes: z.input<typeof batchNotesSchema>["notes"]): Promise<Batch> {
   return apiSend<Batch>("PATCH", batchUrls.one(id), { notes });
 }
 
