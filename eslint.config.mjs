@@ -24,6 +24,30 @@ const config = [
       ],
     },
   },
+  {
+    // One module reads the environment (lib/settings.ts): every setting is checked
+    // at start and typed; nowhere else may a variable turn into NaN or a silent default.
+    files: ["**/*.{ts,tsx,js,mjs}"],
+    ignores: [
+      "lib/settings.ts",
+      // Tests set up environments for the app and child processes they start.
+      "tests/**",
+      "**/*.test.ts",
+      // Standalone development tools, never part of the app: the local stand-ins
+      // for hosted services, the benchmarks and the load run take their own
+      // options from the environment, and the backup passes it on to mariadb-dump.
+      "scripts/fake-*.ts",
+      "scripts/bench-*.ts",
+      "scripts/load.ts",
+      "scripts/db-backup.ts",
+    ],
+    rules: {
+      "no-restricted-properties": [
+        "error",
+        { object: "process", property: "env", message: "Read settings through settings() from lib/settings.ts (checked at start, typed)." },
+      ],
+    },
+  },
 ];
 
 export default config;

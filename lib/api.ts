@@ -1,6 +1,6 @@
 import "server-only";
 import { ZodError, type ZodType } from "zod";
-import { config } from "./config";
+import { settings } from "./settings";
 import { MAX_JSON_BODY_BYTES } from "./server/body-limit";
 
 /** The one error shape of every route: { error: { code, message, fields? } }. */
@@ -253,7 +253,7 @@ const SAFE_METHODS = new Set(["GET", "HEAD", "OPTIONS"]);
 function assertSameOrigin(req: Request): void {
   if (SAFE_METHODS.has(req.method)) return;
   const origin = req.headers.get("origin");
-  if (!origin || !config.trustedOrigins.has(origin)) {
+  if (!origin || !settings().server.trustedOrigins.has(origin)) {
     throw new ApiError(403, "bad_origin", origin ? "This request came from another site and was refused." : "Changes are accepted only from Gelwright's own pages (the request had no Origin header).");
   }
 }
