@@ -1,9 +1,9 @@
 import "server-only";
-import { Worker } from "node:worker_threads";
+import type { Worker } from "node:worker_threads";
 import { ApiError, malformedJson } from "@/lib/api";
 import { FormulationError } from "@/lib/formulation/errors";
 import { settings } from "@/lib/settings";
-import { workerOptions } from "@/lib/worker-threads";
+import { startTypeScriptWorker } from "@/lib/worker-threads";
 import { computeFromText, type EngineReply } from "./from-text";
 
 /**
@@ -137,7 +137,7 @@ export function computeWorkerCount(): number {
 }
 
 function spawnEngineWorker(): Worker {
-  return new Worker(new URL("./worker.ts", import.meta.url), workerOptions(import.meta.url, { resourceLimits: WORKER_LIMITS }));
+  return startTypeScriptWorker(import.meta.url, "./worker.ts", { resourceLimits: WORKER_LIMITS });
 }
 
 let pool: EnginePool | undefined;

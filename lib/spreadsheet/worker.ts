@@ -22,9 +22,9 @@
  * when it grew by more than GELWRIGHT_IMPORT_MEMORY_HEADROOM_MB (default
  * 768) since the parse began.
  */
-import { Worker } from "node:worker_threads";
+import type { Worker } from "node:worker_threads";
 import { settings } from "@/lib/settings";
-import { workerOptions } from "@/lib/worker-threads";
+import { startTypeScriptWorker } from "@/lib/worker-threads";
 import type { ParseLimits, ParseReply, ParseRequest, ParseWorkerData } from "./parse-worker";
 import { PARSE_WORKER } from "./parse-worker-role";
 import { IMPORT_LIMITS, type ImportLimits } from "./template";
@@ -39,10 +39,7 @@ const RESOURCE_LIMITS = { maxOldGenerationSizeMb: 256, maxYoungGenerationSizeMb:
 
 /** Starts a worker (lib/spreadsheet/parse-worker.ts) with `data`, handing `transfer` over. */
 function startWorker(data: ParseWorkerData, transfer: ArrayBuffer[] = []): Worker {
-  return new Worker(
-    new URL("./parse-worker.ts", import.meta.url),
-    workerOptions(import.meta.url, { workerData: data, resourceLimits: RESOURCE_LIMITS, transferList: transfer }),
-  );
+  return startTypeScriptWorker(import.meta.url, "./parse-worker.ts", { workerData: data, resourceLimits: RESOURCE_LIMITS, transferList: transfer });
 }
 
 /** The limits the worker applies (the time limit is the parent's). */

@@ -1,5 +1,4 @@
 import { availableParallelism } from "node:os";
-import { Worker } from "node:worker_threads";
 import { afterEach, describe, expect, it } from "vitest";
 import { ApiError, errorResponse } from "@/lib/api";
 import { computeFromText, type EngineReply } from "@/lib/compute/from-text";
@@ -9,7 +8,7 @@ import { FormulationError } from "@/lib/formulation/errors";
 import type { FormulationInput } from "@/lib/formulation/input-schema";
 import { ref } from "@/lib/formulation/test-support";
 import { parseSettings } from "@/lib/settings";
-import { workerOptions } from "@/lib/worker-threads";
+import { startTypeScriptWorker, typeScriptWorkerOptions } from "@/lib/worker-threads";
 
 // The pool's behaviour is our own design (lib/compute/pool.ts); the results it carries are
 // checked against the engine itself, in this process.
@@ -69,7 +68,7 @@ describe("unwrap", () => {
 const pools: EnginePool[] = [];
 /** A pool of stand-in workers (tests/helpers/fake-engine-worker.ts). */
 function fakePool(size: number, timeoutMs = 5_000): EnginePool {
-  const spawn = () => new Worker(new URL("../helpers/fake-engine-worker.ts", import.meta.url), workerOptions(import.meta.url));
+  const spawn = () => startTypeScriptWorker(import.meta.url, "../helpers/fake-engine-worker.ts");
   const pool = new EnginePool({ size, timeoutMs, spawn });
   pools.push(pool);
   return pool;
@@ -117,7 +116,7 @@ describe("EnginePool", () => {
 
 describe("the engine worker (lib/compute/worker.ts)", () => {
   it("runs from its TypeScript source and answers as the engine does in this thread", async () => {
-    const spawn = () => new Worker(new URL("../../lib/compute/worker.ts", import.meta.url), workerOptions(import.meta.url));
+    const spawn = () => startTypeScriptWorker(import.meta.url, "../../lib/compute/worker.ts");
     const pool = new EnginePool({ size: 1, timeoutMs: 20_000, spawn });
     pools.push(pool);
     const input = JSON.stringify(teosSilicaInput());
@@ -126,13 +125,12 @@ describe("the engine worker (lib/compute/worker.ts)", () => {
   });
 });
 
-describe("workerOptions", () => {
-  it("loads a TypeScript entry through tsx when run from source, and leaves a built entry alone", () => {
-    expect(workerOptions("file:///app/lib/compute/pool.ts", { resourceLimits: { maxOldGenerationSizeMb: 1 } })).toEqual({
+describe("typeScriptWorkerOptions", () => {
+  it("keeps the memory limits and adds tsx's require hook", () => {
+    expect(typeScriptWorkerOptions({ resourceLimits: { maxOldGenerationSizeMb: 1 } })).toEqual({
       resourceLimits: { maxOldGenerationSizeMb: 1 },
       execArgv: ["--require", "tsx/cjs"],
     });
-    expect(workerOptions("file:///app/.next/server/chunks/ssr/pool.js", {})).toEqual({});
   });
 });
 
