@@ -25,6 +25,22 @@ const config = [
     },
   },
   {
+    // Batch-record arithmetic is pure too: no framework, database, auth or spreadsheet.
+    files: ["lib/batches/**/*.ts"],
+    rules: {
+      "no-restricted-imports": [
+        "error",
+        {
+          patterns: [
+            { group: ["next", "next/*", "react", "react-dom", "react/*", "server-only"], message: "lib/batches is framework-free." },
+            { group: ["@/db", "@/db/*", "**/db/*", "drizzle-orm", "drizzle-orm/*", "mysql2", "mysql2/*"], message: "lib/batches never reads the database." },
+            { group: ["better-auth", "better-auth/*", "@/lib/auth*", "@/lib/api", "@/lib/spreadsheet/*", "xlsx"], message: "lib/batches knows nothing of auth, HTTP or sheets." },
+          ],
+        },
+      ],
+    },
+  },
+  {
     // One module reads the environment (lib/settings.ts): every setting is checked
     // at start and typed; nowhere else may a variable turn into NaN or a silent default.
     files: ["**/*.{ts,tsx,js,mjs}"],
