@@ -102,6 +102,19 @@ describe("revision workbook", () => {
     expect(cell.t).toBe("n");
   });
 
+  it("keeps each exact mass in its cell with a number format that shows the balance resolution", () => {
+    const formatted = XLSX.read(bytes, { type: "buffer", cellNF: true }).Sheets["Batch sheet"]!;
+    const lines = rev.result!.lines.filter((l) => l.massGrams > 0);
+    lines.forEach((line, i) => {
+      const mass = formatted[`E${i + 2}`] as XLSX.CellObject;
+      const volume = formatted[`F${i + 2}`] as XLSX.CellObject;
+      expect([mass.v, mass.z]).toEqual([line.massGrams, "0.00"]); // default balance: 0.01 g
+      expect([volume.v, volume.z]).toEqual([line.volumeMl, "0.00"]); // 0.01 mL
+    });
+    const milligram = XLSX.read(revisionWorkbook(rev, { balanceResolutionGrams: 0.001 }), { type: "buffer", cellNF: true }).Sheets["Batch sheet"]!;
+    expect((milligram.E2 as XLSX.CellObject).z).toBe("0.000");
+  });
+
   it("writes the dry composite's weight and volume fractions, densities, porosity and shrinkage", () => {
     const rows = grid(wb, "Dry composite");
     const c = rev.result!.composite;
@@ -134,13 +147,22 @@ describe("revision workbook", () => {
     }
   });
 
-  it("returns the batch sheet as CSV with the same lines", () => {
+  it("returns the batch sheet as CSV with the same lines, masses rounded to the balance and volumes to 0.01 mL", () => {
     const csv = batchSheetCsv(rev);
     expect(csv.startsWith('\uFEFF"Order","Material","Role","Lot number","Target mass as supplied (g)"')).toBe(true);
     const { rows } = parseCsv(csv);
     const lines = rev.result!.lines.filter((l) => l.massGrams > 0);
     expect(rows.length).toBe(lines.length + 1);
-    expect(Number(rows[1]![4])).toBe(lines[0]!.massGrams);
+    lines.forEach((line, i) => {
+      const [mass, volume] = [String(rows[i + 1]![4]), String(rows[i + 1]![5])];
+      // Two decimals for the default 0.01 g balance, within half a step of the exact figure.
+      expect(mass).toMatch(/^\d+\.\d{2}$/);
+      expect(Math.abs(Number(mass) - line.massGrams)).toBeLessThanOrEqual(0.005 + 1e-12);
+      expect(volume).toMatch(/^\d+\.\d{2}$/);
+      expect(Math.abs(Number(volume) - line.volumeMl)).toBeLessThanOrEqual(0.005 + 1e-12);
+    });
+    const tenth = parseCsv(batchSheetCsv(rev, { balanceResolutionGrams: 0.1 })).rows;
+    expect(String(tenth[1]![4])).toMatch(/^\d+\.\d$/);
   });
 });
 
