@@ -7,12 +7,14 @@
  */
 import * as XLSX from "xlsx";
 import { describe, expect, it } from "vitest";
+import { referenceMaterials } from "@/data/materials";
 import { computeFormulation, type FormulationInput } from "@/lib/formulation";
 import { demoInputs } from "@/lib/spreadsheet/example";
 import { batchSheetCsv, revisionWorkbook, safeFileName, type RevisionForExport } from "@/lib/spreadsheet/export-formulation";
 import { materialsCsv, materialsWorkbook } from "@/lib/spreadsheet/export-materials";
 import { neutraliseText, restoreText } from "@/lib/spreadsheet/neutralise";
 import { parseCsv } from "@/lib/spreadsheet/csv";
+import { sourcePropertyKey, sourcePropertyLabel } from "@/lib/spreadsheet/source-properties";
 import { toCsv } from "@/lib/spreadsheet/write";
 
 const released = demoInputs().find((d) => d.name === "Visor hard coat HC-3" && d.revision === 2)!;
@@ -304,5 +306,33 @@ describe("materials library export", () => {
       expect(safeFileName('Visor "HC-3" / r2', "xlsx")).toBe("Visor-HC-3-r2.xlsx");
       expect(safeFileName("", "csv")).toBe("export.csv");
     });
+  });
+});
+
+describe("words in the sheets", () => {
+  const engineName = /\b[a-z]+[A-Z][a-z]|[A-Za-z]\.[A-Za-z]/; // camelCase or a dotted path, e.g. precursor.leavingAlcohol
+
+  it("names every heading, label and source property in plain words, never an engine field name", () => {
+    const wb = open(revisionWorkbook(revision(released.input)));
+    const properties = grid(wb, "Material sources")
+      .slice(1)
+      .map((row) => String(row[1]));
+    expect(properties).toContain("Leaving alcohol (name and molar mass)");
+    expect(properties).toContain("Residue density (g/cm³)");
+    for (const property of properties) expect(property).not.toMatch(engineName);
+    for (const name of wb.SheetNames.filter((n) => n !== "Read me")) {
+      const rows = grid(wb, name);
+      const labels = [...(rows[0] ?? []), ...rows.map((row) => row[0])].filter((cell): cell is string => typeof cell === "string");
+      for (const label of labels) expect(label, `${name}: ${label}`).not.toMatch(engineName);
+    }
+  });
+
+  it("reads each property's words back to the same key on import", () => {
+    const keys = new Set(referenceMaterials.flatMap((m) => Object.keys(m.sources ?? {})));
+    expect(keys.has("precursor.leavingAlcohol")).toBe(true);
+    for (const key of [...keys, "storage.shelfLifeDays"]) expect(sourcePropertyKey(sourcePropertyLabel(key)), key).toBe(key);
+    // A property without words of its own keeps its key in brackets, after the words.
+    expect(sourcePropertyLabel("storage.shelfLifeDays")).toBe("Storage shelf life days [storage.shelfLifeDays]");
+    expect(sourcePropertyKey("density as supplied")).toBe("density");
   });
 });
