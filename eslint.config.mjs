@@ -24,6 +24,46 @@ const config = [
       ],
     },
   },
+  {
+    // Batch-record arithmetic is pure too: no framework, database, auth or spreadsheet.
+    files: ["lib/batches/**/*.ts"],
+    rules: {
+      "no-restricted-imports": [
+        "error",
+        {
+          patterns: [
+            { group: ["next", "next/*", "react", "react-dom", "react/*", "server-only"], message: "lib/batches is framework-free." },
+            { group: ["@/db", "@/db/*", "**/db/*", "drizzle-orm", "drizzle-orm/*", "mysql2", "mysql2/*"], message: "lib/batches never reads the database." },
+            { group: ["better-auth", "better-auth/*", "@/lib/auth*", "@/lib/api", "@/lib/spreadsheet/*", "xlsx"], message: "lib/batches knows nothing of auth, HTTP or sheets." },
+          ],
+        },
+      ],
+    },
+  },
+  {
+    // One module reads the environment (lib/settings.ts): every setting is checked
+    // at start and typed; nowhere else may a variable turn into NaN or a silent default.
+    files: ["**/*.{ts,tsx,js,mjs}"],
+    ignores: [
+      "lib/settings.ts",
+      // Tests set up environments for the app and child processes they start.
+      "tests/**",
+      "**/*.test.ts",
+      // Standalone development tools, never part of the app: the local stand-ins
+      // for hosted services, the benchmarks and the load run take their own
+      // options from the environment, and the backup passes it on to mariadb-dump.
+      "scripts/fake-*.ts",
+      "scripts/bench-*.ts",
+      "scripts/load.ts",
+      "scripts/db-backup.ts",
+    ],
+    rules: {
+      "no-restricted-properties": [
+        "error",
+        { object: "process", property: "env", message: "Read settings through settings() from lib/settings.ts (checked at start, typed)." },
+      ],
+    },
+  },
 ];
 
 export default config;

@@ -8,7 +8,7 @@ import { eq } from "drizzle-orm";
 import { db } from "@/db";
 import { recordEvent } from "@/db/queries/audit";
 import * as schema from "@/db/schema";
-import { config } from "./config";
+import { settings } from "./settings";
 import { textProblem } from "./formulation/text-rules";
 import { CLIENT_ADDRESS_HEADER } from "./server/client-address";
 import { sendMail } from "./mail";
@@ -22,13 +22,14 @@ function assertOurRole(role: string): void {
   }
 }
 
-const secure = config.baseUrl.startsWith("https://");
+const { server, auth: authSettings } = settings();
+const secure = server.baseUrl.startsWith("https://");
 
 export const auth = betterAuth({
   appName: "Gelwright",
-  baseURL: config.baseUrl,
-  secret: config.authSecret,
-  trustedOrigins: [config.baseUrl],
+  baseURL: server.baseUrl,
+  secret: authSettings.secret,
+  trustedOrigins: [server.baseUrl],
   telemetry: { enabled: false },
   database: drizzleAdapter(db, { provider: "mysql", schema }),
   emailAndPassword: {
@@ -73,11 +74,11 @@ export const auth = betterAuth({
     cookieCache: { enabled: true, maxAge: 60 },
   },
   rateLimit: {
-    enabled: process.env.GELWRIGHT_RATE_LIMIT !== "off",
+    enabled: authSettings.rateLimit,
     window: 60,
     max: 300,
     customRules: {
-      "/sign-in/email": { window: 10, max: config.signInRateLimit },
+      "/sign-in/email": { window: 10, max: authSettings.signInRateLimit },
       "/request-password-reset": { window: 60, max: 3 },
       "/sign-up/email": { window: 60, max: 5 },
       "/send-verification-email": { window: 60, max: 5 },
@@ -159,7 +160,7 @@ export const auth = betterAuth({
           teamId: team.id,
           to: email,
           subject: `You are invited to ${team.name} on Gelwright`,
-          text: `${inviter.user.name} (${inviter.user.email}) invites you to join ${team.name} as ${role}.\n\nAccept within 7 days:\n${config.baseUrl}/invitations/${id}\n`,
+          text: `${inviter.user.name} (${inviter.user.email}) invites you to join ${team.name} as ${role}.\n\nAccept within 7 days:\n${server.baseUrl}/invitations/${id}\n`,
         });
       },
     }),

@@ -1,12 +1,12 @@
 import "server-only";
 import nodemailer, { type Transporter } from "nodemailer";
-import { config } from "./config";
+import { settings } from "./settings";
 
 let transport: Transporter | undefined;
 
 function getTransport(): Transporter {
   if (!transport) {
-    const url = new URL(config.smtpUrl);
+    const url = new URL(settings().mail.smtpUrl);
     const loopback = url.hostname === "127.0.0.1" || url.hostname === "localhost";
     transport = nodemailer.createTransport({
       host: url.hostname,
@@ -47,7 +47,7 @@ export async function sendMail(message: MailMessage): Promise<boolean> {
   try {
     const headers: Record<string, string> = { [MAIL_KIND_HEADER]: message.kind };
     if (message.kind === "team") headers[MAIL_TEAM_HEADER] = message.teamId;
-    await getTransport().sendMail({ from: config.mailFrom, to, subject: message.subject, text: message.text, headers });
+    await getTransport().sendMail({ from: settings().mail.from, to, subject: message.subject, text: message.text, headers });
     return true;
   } catch (err) {
     console.error("[mail] could not send", message.subject, "to", to.join(", "), err instanceof Error ? err.message : err);

@@ -1,7 +1,7 @@
 import "server-only";
 import { readdir, readFile } from "node:fs/promises";
 import { join } from "node:path";
-import { config } from "./config";
+import { settings } from "./settings";
 
 export interface CapturedMail {
   id: string;
@@ -30,17 +30,18 @@ export function belongsToTeam(mail: { team?: string | null; kind?: string | null
 
 /** Mails captured by the local fake SMTP server for one team; null when a real provider is configured. */
 export async function readMailbox(teamId: string, limit = 200): Promise<CapturedMail[] | null> {
-  if (!config.mailboxDir) return null;
+  const { mailboxDir } = settings().mail;
+  if (!mailboxDir) return null;
   let files: string[];
   try {
-    files = (await readdir(config.mailboxDir)).filter((f) => f.endsWith(".json"));
+    files = (await readdir(mailboxDir)).filter((f) => f.endsWith(".json"));
   } catch {
     return [];
   }
   const mails: CapturedMail[] = [];
   for (const f of files) {
     try {
-      const { team, kind, ...m } = JSON.parse(await readFile(join(config.mailboxDir, f), "utf8")) as StoredMail;
+      const { team, kind, ...m } = JSON.parse(await readFile(join(mailboxDir, f), "utf8")) as StoredMail;
       if (belongsToTeam({ team, kind }, teamId)) mails.push(m);
     } catch {
       // A half-written file: skip it.

@@ -1,12 +1,12 @@
 import "server-only";
 import { emailOfUser, emailsByRole } from "@/db/queries/members";
 import type { TransitionOutcome } from "@/db/queries/revisions";
-import { config } from "./config";
+import { settings } from "./settings";
 import { sendMail } from "./mail";
 
 /** Tells the right people about a state change. Mail failures never undo the change. */
 export async function notifyTransition(teamId: string, t: TransitionOutcome, comment?: string | null): Promise<void> {
-  const link = `${config.baseUrl}/formulations/${t.formulationId}`;
+  const link = `${settings().server.baseUrl}/formulations/${t.formulationId}`;
   const title = `${t.formulationName}, revision ${t.number}`;
   if (t.to === "in_review") {
     const to = await emailsByRole(teamId, ["reviewer"]);

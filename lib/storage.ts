@@ -1,6 +1,7 @@
 import "server-only";
 import { DeleteObjectCommand, GetObjectCommand, PutObjectCommand, S3Client } from "@aws-sdk/client-s3";
 import { getSignedUrl } from "@aws-sdk/s3-request-presigner";
+import { settings, type Settings } from "./settings";
 
 /**
  * Object storage through the S3 API. By default it talks to the local fake
@@ -8,26 +9,19 @@ import { getSignedUrl } from "@aws-sdk/s3-request-presigner";
  * (scripts/fake-s3.ts); set S3_ENDPOINT (empty for AWS itself), S3_REGION,
  * S3_BUCKET and the two keys to use real object storage instead.
  */
-export const storageConfig = {
-  endpoint: process.env.S3_ENDPOINT === undefined ? "http://127.0.0.1:4569" : process.env.S3_ENDPOINT || undefined,
-  bucket: process.env.S3_BUCKET ?? "gelwright",
-  region: process.env.S3_REGION ?? "us-east-1",
-  // s3rver's fixed development keys; real storage needs real ones.
-  accessKeyId: process.env.S3_ACCESS_KEY_ID ?? "S3RVER",
-  secretAccessKey: process.env.S3_SECRET_ACCESS_KEY ?? "S3RVER",
-  forcePathStyle: (process.env.S3_FORCE_PATH_STYLE ?? (process.env.S3_ENDPOINT === "" ? "false" : "true")) === "true",
-  /** Lifetime of a download link, s. */
-  linkSeconds: Number(process.env.S3_LINK_SECONDS ?? 300),
-} as const;
+function storageConfig(): Settings["storage"] {
+  return settings().storage;
+}
 
 const globalForStorage = globalThis as unknown as { gelwrightS3?: S3Client };
 
 function client(): S3Client {
+  const config = storageConfig();
   globalForStorage.gelwrightS3 ??= new S3Client({
-    endpoint: storageConfig.endpoint,
-    region: storageConfig.region,
-    forcePathStyle: storageConfig.forcePathStyle,
-    credentials: { accessKeyId: storageConfig.accessKeyId, secretAccessKey: storageConfig.secretAccessKey },
+    endpoint: config.endpoint,
+    region: config.region,
+    forcePathStyle: config.forcePathStyle,
+    credentials: { accessKeyId: config.accessKeyId, secretAccessKey: config.secretAccessKey },
     // Plain checksums only when the API requires them, so S3-compatible servers of every age accept our requests.
     requestChecksumCalculation: "WHEN_REQUIRED",
     responseChecksumValidation: "WHEN_REQUIRED",
@@ -38,13 +32,13 @@ function client(): S3Client {
 /** Stores bytes under `key`. */
 export async function putObject(key: string, bytes: Uint8Array, contentType: string): Promise<void> {
   await client().send(
-    new PutObjectCommand({ Bucket: storageConfig.bucket, Key: key, Body: bytes, ContentType: contentType, ContentLength: bytes.byteLength }),
+    new PutObjectCommand({ Bucket: storageConfig().bucket, Key: key, Body: bytes, ContentType: contentType, ContentLength: bytes.byteLength }),
   );
 }
 
 /** Removes the object under `key` (no error when it is already gone). */
 export async function deleteObject(key: string): Promise<void> {
-  await client().send(new DeleteObjectCommand({ Bucket: storageConfig.bucket, Key: key }));
+  await client().send(new DeleteObjectCommand({ Bucket: storageConfig().bucket, Key: key }));
 }
 
 /** A signed, short-lived link that downloads the object as `fileName`. */
@@ -53,12 +47,12 @@ export async function signedDownloadUrl(key: string, fileName: string, contentTy
   const url = await getSignedUrl(
     client(),
     new GetObjectCommand({
-      Bucket: storageConfig.bucket,
+      Bucket: storageConfig().bucket,
       Key: key,
       ResponseContentDisposition: `attachment; filename="${ascii}"; filename*=UTF-8''${encodeURIComponent(fileName)}`,
       ResponseContentType: contentType,
     }),
-    { expiresIn: storageConfig.linkSeconds },
+    { expiresIn: storageConfig().linkSeconds },
   );
-  return { url, expiresInSeconds: storageConfig.linkSeconds };
+  return { url, expiresInSeconds: storageConfig().linkSeconds };
 }

@@ -10,36 +10,39 @@
 import { createServer } from "node:http";
 import { parseArgs } from "node:util";
 import { createFront } from "@/lib/server/front";
-import { readFrontSettings, SettingError } from "@/lib/server/settings";
+import { SettingsError, startSettings, type Settings } from "@/lib/settings";
 
 const { values } = parseArgs({
   options: {
     dev: { type: "boolean", default: false },
-    hostname: { type: "string", short: "H", default: process.env.HOSTNAME ?? "localhost" },
-    port: { type: "string", short: "p", default: process.env.PORT ?? "3000" },
+    // Without these, HOSTNAME and PORT from the environment (see lib/settings.ts).
+    hostname: { type: "string", short: "H" },
+    port: { type: "string", short: "p" },
   },
 });
 const dev = values.dev ?? false;
-const hostname = values.hostname ?? "localhost";
-const port = Number(values.port);
-if (!Number.isInteger(port) || port < 1 || port > 65535) {
+if (values.port !== undefined && !/^\d{1,5}$/.test(values.port)) {
   console.error(`[server] --port: “${values.port}” is not a port number (1–65535).`);
   process.exit(1);
 }
-(process.env as Record<string, string>).NODE_ENV = dev ? "development" : "production";
-process.env.PORT = String(port);
 
-async function main(): Promise<void> {
-  let prepare: ReturnType<typeof createFront>;
+/** Every setting is checked before anything listens; a bad one stops the start with all problems listed. */
+function checkedSettings(): Settings {
   try {
-    prepare = createFront(readFrontSettings(), { dev });
+    return startSettings({ NODE_ENV: dev ? "development" : "production", PORT: values.port, HOSTNAME: values.hostname });
   } catch (err) {
-    if (err instanceof SettingError) {
+    if (err instanceof SettingsError) {
       console.error(`[server] ${err.message}`);
       process.exit(1);
     }
     throw err;
   }
+}
+
+async function main(): Promise<void> {
+  const { server: serverSettings } = checkedSettings();
+  const { hostname, port } = serverSettings;
+  const prepare = createFront(serverSettings, { dev });
   const { default: next } = await import("next");
   const server = createServer();
   const app = next({ dev, hostname, port, httpServer: server });

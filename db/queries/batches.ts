@@ -9,7 +9,7 @@ import {
   DEFAULT_BALANCE_RESOLUTION_G,
   DEFAULT_TOLERANCE_FRACTION,
   lineDeviation,
-} from "@/lib/spreadsheet/batch-record";
+} from "@/lib/batches";
 import { recordEvent } from "./audit";
 
 export interface Actor {

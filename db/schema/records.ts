@@ -42,7 +42,7 @@ export interface BatchLine {
   initials?: string;
 }
 
-/** A team's batch settings; when absent, the defaults in lib/spreadsheet/batch-record.ts apply. */
+/** A team's batch settings; when absent, the defaults in lib/batches apply. */
 export const batchSettings = mysqlTable("batch_settings", {
   teamId: varchar("team_id", { length: 36 })
     .primaryKey()

@@ -1,8 +1,9 @@
 import "server-only";
-import { availableParallelism } from "node:os";
-import { Worker } from "node:worker_threads";
+import type { Worker } from "node:worker_threads";
 import { ApiError, malformedJson } from "@/lib/http/errors";
 import { FormulationError } from "@/lib/formulation/errors";
+import { settings } from "@/lib/settings";
+import { startTypeScriptWorker } from "@/lib/worker-threads";
 import { computeFromText, type EngineReply } from "./from-text";
 
 /**
@@ -129,19 +130,14 @@ export class EnginePool {
 
 /**
  * Engine threads for /api/compute: GELWRIGHT_COMPUTE_WORKERS (0 to 8; 0
- * computes in the request's thread). By default 1, or 0 on a one-core
- * machine, where a second thread could only take turns with the first.
+ * computes in the request's thread; see lib/settings.ts for the default).
  */
 export function computeWorkerCount(): number {
-  const fallback = availableParallelism() > 1 ? 1 : 0;
-  const setting = process.env.GELWRIGHT_COMPUTE_WORKERS;
-  if (setting === undefined || setting.trim() === "") return fallback;
-  const n = Number(setting);
-  return Number.isInteger(n) && n >= 0 && n <= 8 ? n : fallback;
+  return settings().workers.compute;
 }
 
 function spawnEngineWorker(): Worker {
-  return new Worker(new URL("./worker.ts", import.meta.url), { resourceLimits: WORKER_LIMITS });
+  return startTypeScriptWorker(import.meta.url, "./worker.ts", { resourceLimits: WORKER_LIMITS });
 }
 
 let pool: EnginePool | undefined;

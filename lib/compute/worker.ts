@@ -1,7 +1,7 @@
 /**
  * An engine worker thread: answers { id, text } messages with
- * { id, reply } (see computeFromText). Started by lib/compute/pool.ts; the
- * bundler builds it as its own entry point.
+ * { id, reply } (see computeFromText). Started by lib/compute/pool.ts from
+ * this source file (lib/worker-threads.ts).
  */
 import { parentPort } from "node:worker_threads";
 import { computeFromText } from "./from-text";

@@ -20,7 +20,7 @@
  * reads them from the route files for the role × route test.
  */
 import "server-only";
-import { config } from "@/lib/config";
+import { settings } from "@/lib/settings";
 import { NotFoundError } from "@/lib/errors";
 import { can, type Permission, type RoleName } from "@/lib/permissions";
 import { getContext, getContextBriefly, type TeamContext } from "@/lib/session";
@@ -91,7 +91,7 @@ const SAFE_METHODS = new Set(["GET", "HEAD", "OPTIONS"]);
 function assertSameOrigin(req: Request): void {
   if (SAFE_METHODS.has(req.method)) return;
   const origin = req.headers.get("origin");
-  if (!origin || !config.trustedOrigins.has(origin)) {
+  if (!origin || !settings().server.trustedOrigins.has(origin)) {
     throw new ApiError(
       403,
       "bad_origin",

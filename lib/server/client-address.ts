@@ -14,9 +14,9 @@ export const CLIENT_ADDRESS_HEADER = "x-gelwright-client-address";
 export type TrustFn = (address: string, index: number) => boolean;
 
 /** Compiles the trusted-proxy list once; an empty list trusts nobody. */
-export function compileTrust(trustedProxies: string[]): TrustFn {
+export function compileTrust(trustedProxies: readonly string[]): TrustFn {
   if (trustedProxies.length === 0) return () => false;
-  return proxyaddr.compile(trustedProxies);
+  return proxyaddr.compile([...trustedProxies]);
 }
 
 /**

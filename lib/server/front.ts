@@ -9,7 +9,7 @@ import type { IncomingMessage, ServerResponse } from "node:http";
 import { bodyLimitFor, limitBody } from "./body-limit";
 import { compileTrust, setClientAddress } from "./client-address";
 import { sendRefusal, type Refusal } from "./refusal";
-import type { FrontSettings } from "./settings";
+import type { Settings } from "@/lib/settings";
 
 const CHANGE_METHODS = new Set(["POST", "PUT", "PATCH", "DELETE"]);
 
@@ -61,7 +61,7 @@ function hasBody(req: IncomingMessage): boolean {
  * is refused too), and a body must be JSON (the upload routes answer a body
  * that is not multipart/form-data themselves, once they know who is asking).
  */
-export function changeRefusal(req: IncomingMessage, pathname: string, trustedOrigins: Set<string>): Refusal | null {
+export function changeRefusal(req: IncomingMessage, pathname: string, trustedOrigins: ReadonlySet<string>): Refusal | null {
   if (!CHANGE_METHODS.has(req.method ?? "")) return null;
   const origin = req.headers.origin;
   if (!origin || !trustedOrigins.has(origin)) {
@@ -136,7 +136,7 @@ export function routePath(url: string): string {
  * Builds the per-request step of the front. It returns false when it has
  * answered the request itself (refused), true when Next.js should handle it.
  */
-export function createFront(settings: FrontSettings, options: { dev: boolean }) {
+export function createFront(settings: Pick<Settings["server"], "trustedProxies" | "trustedOrigins">, options: { dev: boolean }) {
   const trust = compileTrust(settings.trustedProxies);
   return function prepare(req: IncomingMessage, res: ServerResponse): boolean {
     const pathname = routePath(req.url ?? "/");

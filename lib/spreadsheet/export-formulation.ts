@@ -3,6 +3,7 @@
  * composite, thermal check and the full input for re-import) and its batch
  * sheet as CSV.
  */
+import { DEFAULT_BALANCE_RESOLUTION_G, VOLUME_RESOLUTION_ML } from "@/lib/batches";
 import { hardLimit, type FormulationInput, type FormulationResult, type Material, type RecipeLine } from "@/lib/formulation";
 import { inputSheets } from "./input-sheets";
 import { SHEET, readMeRows } from "./template";
@@ -59,8 +60,22 @@ function materialNames(input: FormulationInput): Map<string, Material> {
   return new Map(input.materials.map((m) => [m.id, m]));
 }
 
-/** Batch sheet rows: order of addition, material, role, lot number (blank), target mass and volume as supplied, blank columns to fill in. */
-export function batchSheetTable(revision: RevisionForExport): { header: Cell[][]; rows: Cell[][] } {
+/** How the batch sheet shows its figures. */
+export interface BatchSheetOptions {
+  /** The balance's readability, g (the team's batch settings); masses are shown to it. Default 0.01 g. */
+  balanceResolutionGrams?: number;
+}
+
+/**
+ * Batch sheet rows: order of addition, material, role, lot number (blank),
+ * target mass and volume as supplied, blank columns to fill in. `steps`: the
+ * target mass is shown to the balance resolution, the volume to 0.01 mL.
+ */
+export function batchSheetTable(
+  revision: RevisionForExport,
+  options: BatchSheetOptions = {},
+): { header: Cell[][]; rows: Cell[][]; steps: (number | undefined)[] } {
+  const grams = options.balanceResolutionGrams ?? DEFAULT_BALANCE_RESOLUTION_G;
   const byId = materialNames(revision.input);
   const columns: Cell[] = [
     "Order",
@@ -76,6 +91,7 @@ export function batchSheetTable(revision: RevisionForExport): { header: Cell[][]
   const lines = (revision.result?.lines ?? []).filter((line) => line.massGrams > 0);
   return {
     header: [columns],
+    steps: [undefined, undefined, undefined, undefined, grams, VOLUME_RESOLUTION_ML, grams],
     rows: lines.map((line, index) => [
       index + 1,
       byId.get(line.materialId)?.name ?? line.materialId,
@@ -223,11 +239,11 @@ function thermalSheet(revision: RevisionForExport): SheetSpec {
 }
 
 /** Every sheet of a revision's workbook. */
-export function revisionSheets(revision: RevisionForExport): SheetSpec[] {
-  const batch = batchSheetTable(revision);
+export function revisionSheets(revision: RevisionForExport, options: BatchSheetOptions = {}): SheetSpec[] {
+  const batch = batchSheetTable(revision, options);
   return [
     { name: SHEET.overview, header: [["Item", "Value", "Unit"]], rows: overviewRows(revision), widths: [30, 90, 32] },
-    { name: SHEET.batchSheet, header: batch.header, rows: batch.rows, widths: [7, 34, 14, 16, 16, 16, 14, 12, 10] },
+    { name: SHEET.batchSheet, header: batch.header, rows: batch.rows, steps: batch.steps, widths: [7, 34, 14, 16, 16, 16, 14, 12, 10] },
     {
       name: SHEET.composite,
       header: [["Phase", "Residue formula", "Weight fraction (mass fraction)", "Volume fraction (fraction)", "Density (g/cm³)"]],
@@ -241,21 +257,22 @@ export function revisionSheets(revision: RevisionForExport): SheetSpec[] {
 }
 
 /**
- * The revision's workbook, as bytes.
+ * The revision's workbook, as bytes. Batch-sheet masses keep their exact
+ * value, with a number format that shows the balance resolution.
  *
  * @example
  * ```ts
- * const bytes = revisionWorkbook(await getRevision(teamId, id));
+ * const bytes = revisionWorkbook(await getRevision(teamId, id), await getBatchSettings(teamId));
  * ```
  */
-export function revisionWorkbook(revision: RevisionForExport): Buffer {
-  return buildWorkbook(revisionSheets(revision));
+export function revisionWorkbook(revision: RevisionForExport, options: BatchSheetOptions = {}): Buffer {
+  return buildWorkbook(revisionSheets(revision, options));
 }
 
-/** The batch sheet alone as CSV. */
-export function batchSheetCsv(revision: RevisionForExport): string {
-  const batch = batchSheetTable(revision);
-  return toCsv([{ name: SHEET.batchSheet, rows: [...batch.header, ...batch.rows] }]);
+/** The batch sheet alone as CSV, masses rounded to the balance resolution and volumes to 0.01 mL. */
+export function batchSheetCsv(revision: RevisionForExport, options: BatchSheetOptions = {}): string {
+  const batch = batchSheetTable(revision, options);
+  return toCsv([{ name: SHEET.batchSheet, rows: [...batch.header, ...batch.rows], steps: batch.steps }]);
 }
 
 /** A file name without characters that trouble file systems or headers. */

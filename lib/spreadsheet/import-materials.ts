@@ -10,6 +10,7 @@
 import { materialSchema, MATERIAL_KINDS, type Material, type MaterialKind } from "@/lib/formulation";
 import { headerKey, headerStem, isBlankRow, readNumber, readText, SheetProblems } from "./cells";
 import { MATERIAL_COLUMNS, NO_HAZARDS, SHEET, SOURCE_COLUMNS, type MaterialColumn } from "./template";
+import { sourcePropertyKey } from "./source-properties";
 import type { Cell, ImportProblem, SheetGrid } from "./types";
 
 /** A library material, as the import compares against it. */
@@ -227,11 +228,6 @@ function readSources(sheets: readonly SheetGrid[], drafts: MaterialDraft[], prob
     return;
   }
   const byName = new Map(drafts.map((d) => [d.material.name.toLowerCase(), d]));
-  const pathOfHeader = new Map<string, string>();
-  for (const column of MATERIAL_COLUMNS) {
-    pathOfHeader.set(headerKey(column.header), column.path);
-    pathOfHeader.set(headerStem(column.header), column.path);
-  }
   for (let r = 1; r < sheet.rows.length; r++) {
     const row = sheet.rows[r]!;
     if (isBlankRow(row)) continue;
@@ -247,7 +243,7 @@ function readSources(sheets: readonly SheetGrid[], drafts: MaterialDraft[], prob
       p.warning(r, { index: materialCol.index, header: materialCol.header }, `“${name}” is not on the Materials sheet; this source is ignored.`);
       continue;
     }
-    const key = pathOfHeader.get(headerKey(property)) ?? pathOfHeader.get(headerStem(property)) ?? property;
+    const key = sourcePropertyKey(property);
     if (!/^[A-Za-z][A-Za-z0-9]*(\.[A-Za-z][A-Za-z0-9]*)*$/.test(key) || ["__proto__", "constructor", "prototype"].includes(key)) {
       p.error(r, { index: propertyCol.index, header: propertyCol.header }, `“${property}” is not a property: use a column header of the Materials sheet.`);
       continue;

@@ -18,6 +18,7 @@ import {
   STEP_COLUMNS,
   type InputSettingKey,
 } from "./template";
+import { sourcePropertyLabel } from "./source-properties";
 import type { Cell } from "./types";
 import type { SheetSpec } from "./write";
 
@@ -52,11 +53,10 @@ export function materialRow(material: Material): Cell[] {
 
 /** The Materials and Material sources sheets for a list of materials. */
 export function materialSheets(materials: readonly Material[]): SheetSpec[] {
-  const headerOf = new Map(MATERIAL_COLUMNS.map((c) => [c.path, c.header]));
   const sources: Cell[][] = [];
   for (const material of materials) {
     for (const [property, source] of Object.entries(material.sources ?? {})) {
-      sources.push([material.name, headerOf.get(property) ?? property, source]);
+      sources.push([material.name, sourcePropertyLabel(property), source]);
     }
   }
   return [

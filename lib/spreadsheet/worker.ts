@@ -22,136 +22,34 @@
  * when it grew by more than GELWRIGHT_IMPORT_MEMORY_HEADROOM_MB (default
  * 768) since the parse began.
  */
-import { join } from "node:path";
-import { Worker } from "node:worker_threads";
+import type { Worker } from "node:worker_threads";
+import { settings } from "@/lib/settings";
+import { startTypeScriptWorker } from "@/lib/worker-threads";
+import type { ParseLimits, ParseReply, ParseRequest, ParseWorkerData } from "./parse-worker";
+import { PARSE_WORKER } from "./parse-worker-role";
 import { IMPORT_LIMITS, type ImportLimits } from "./template";
-import type { Cell, SheetGrid } from "./types";
+import type { SheetGrid } from "./types";
 import { UploadError } from "@/lib/uploads/upload-error";
 import { unpackWorkbook, ZIP_LIMITS, type ZipLimits } from "./zip-guard";
 
 export { UploadError };
 
-interface WorkerRequest {
-  bytes: Uint8Array;
-  wanted: string[];
-  firstSheetFallback: boolean;
-  limits: { maxRows: number; maxColumns: number; maxSheets: number; maxCellChars: number };
-  moduleRoot: string;
-}
-
-type WorkerReply =
-  | {
-      ok: true;
-      sheetNames: string[];
-      sheets: { name: string; rows: Cell[][]; truncatedRows: boolean; truncatedColumns: boolean }[];
-      threadId: number;
-      warmed: boolean;
-    }
-  | { ok: false; code: string; message: string };
-
-/**
- * The worker's source (CommonJS, run with `eval`), so no bundler has to find a
- * separate file. A worker reads exactly one upload and is then terminated.
- * A spare worker (workerData.warm) loads `xlsx` and reads a small workbook of
- * our own making before it says it is ready, so the upload that takes it does
- * not wait for module loading and a cold compiler; it has never seen anyone's
- * file before that upload.
- */
-const WORKER_SOURCE = String.raw`
-"use strict";
-const { parentPort, workerData, threadId } = require("node:worker_threads");
-const { createRequire } = require("node:module");
-const XLSX = createRequire(workerData.moduleRoot)("xlsx");
-const base = { type: "buffer", cellFormula: false, cellHTML: false, cellText: false, cellStyles: false, cellDates: false,
-  cellNF: false, bookVBA: false, bookDeps: false, bookFiles: false, bookProps: false, WTF: false, password: "" };
-function readSheet(ws, limits) {
-  const rows = [];
-  let truncatedRows = false, truncatedColumns = false;
-  if (ws && typeof ws["!ref"] === "string") {
-    const range = XLSX.utils.decode_range(ws["!ref"]);
-    const full = typeof ws["!fullref"] === "string" ? XLSX.utils.decode_range(ws["!fullref"]) : range;
-    if (full.e.r + 1 > limits.maxRows) truncatedRows = true;
-    if (range.e.c + 1 > limits.maxColumns) truncatedColumns = true;
-    const lastRow = Math.min(range.e.r, limits.maxRows - 1);
-    const lastCol = Math.min(range.e.c, limits.maxColumns - 1);
-    for (let r = 0; r <= lastRow; r++) {
-      const row = [];
-      const cells = Array.isArray(ws[r]) ? ws[r] : [];
-      for (let c = 0; c <= lastCol; c++) {
-        const cell = cells[c];
-        let v = null;
-        if (cell && (cell.t === "n" || cell.t === "b")) v = cell.v;
-        else if (cell && (cell.t === "s" || cell.t === "str") && typeof cell.v === "string") v = cell.v.slice(0, limits.maxCellChars + 1);
-        row.push(typeof v === "number" || typeof v === "boolean" || typeof v === "string" ? v : null);
-      }
-      while (row.length > 0 && row[row.length - 1] === null) row.pop();
-      rows.push(row);
-    }
-  }
-  return { rows, truncatedRows, truncatedColumns };
-}
-function read(req) {
-  const buffer = Buffer.from(req.bytes.buffer, req.bytes.byteOffset, req.bytes.byteLength);
-  let names;
-  try {
-    names = XLSX.read(buffer, Object.assign({}, base, { bookSheets: true })).SheetNames.map(String);
-  } catch (err) {
-    const text = String(err && err.message || err);
-    if (/password/i.test(text)) return { ok: false, code: "password_protected", message: text };
-    return { ok: false, code: "corrupt", message: text };
-  }
-  if (names.length > req.limits.maxSheets) return { ok: false, code: "too_many_sheets", message: String(names.length) };
-  const lower = new Map(names.map((n) => [n.trim().toLowerCase(), n]));
-  const selected = [];
-  for (const w of req.wanted) { const hit = lower.get(w.toLowerCase()); if (hit !== undefined && !selected.includes(hit)) selected.push(hit); }
-  if (selected.length === 0 && req.firstSheetFallback && names.length > 0) selected.push(names[0]);
-  // dense: each sheet is an array of rows of cells, faster to read and to walk.
-  const wb = XLSX.read(buffer, Object.assign({}, base, { sheets: selected, sheetRows: req.limits.maxRows + 1, dense: true }));
-  const sheets = [];
-  for (const name of selected) sheets.push(Object.assign({ name: String(name) }, readSheet(wb.Sheets[name], req.limits)));
-  return { ok: true, sheetNames: names, sheets, threadId, warmed: workerData.warm === true };
-}
-function handle(req) {
-  let reply;
-  try { reply = read(req); } catch (err) { reply = { ok: false, code: "corrupt", message: String(err && err.message || err) }; }
-  parentPort.postMessage(reply);
-}
-if (workerData.warm) {
-  // Warm-up on a workbook of our own: a few hundred rows of text and numbers.
-  const aoa = [["Name", "Kind", "Molar mass", "Density", "Note"]];
-  for (let i = 0; i < 600; i++) aoa.push(["warm-up " + i, i % 2 ? "precursor" : "organic", 100 + i / 7, 0.9 + i / 1000, i % 3 ? "" : "x"]);
-  const book = XLSX.utils.book_new();
-  XLSX.utils.book_append_sheet(book, XLSX.utils.aoa_to_sheet(aoa), "Warm-up");
-  const bytes = XLSX.write(book, { type: "buffer", bookType: "xlsx" });
-  const limits = workerData.limits;
-  for (let i = 0; i < 3; i++) read({ bytes, wanted: ["Warm-up"], firstSheetFallback: true, limits });
-  parentPort.once("message", handle);
-  parentPort.postMessage({ ready: true });
-} else {
-  handle(workerData.request);
-}
-`;
-
-interface WorkerData {
-  moduleRoot: string;
-  warm: boolean;
-  /** The limits a spare reads its warm-up workbook with. */
-  limits?: WorkerRequest["limits"];
-  request?: WorkerRequest;
-}
-
+/** The worker's memory: its JavaScript heap and stack (Buffers live outside; see above). */
 const RESOURCE_LIMITS = { maxOldGenerationSizeMb: 256, maxYoungGenerationSizeMb: 32, stackSizeMb: 4 };
-const defaultModuleRoot = () => join(process.cwd(), "package.json");
+
+/** Starts a worker (lib/spreadsheet/parse-worker.ts) with `data`, handing `transfer` over. */
+function startWorker(data: ParseWorkerData, transfer: ArrayBuffer[] = []): Worker {
+  return startTypeScriptWorker(import.meta.url, "./parse-worker.ts", { workerData: data, resourceLimits: RESOURCE_LIMITS, transferList: transfer });
+}
 
 /** The limits the worker applies (the time limit is the parent's). */
-function workerLimits(limits: ImportLimits): WorkerRequest["limits"] {
+function workerLimits(limits: ImportLimits): ParseLimits {
   return { maxRows: limits.maxRows, maxColumns: limits.maxColumns, maxSheets: limits.maxSheets, maxCellChars: limits.maxCellChars };
 }
 
 /** How many warmed workers wait for the next upload (GELWRIGHT_IMPORT_SPARE_WORKERS, default 1; 0 turns it off). */
 function spareTarget(): number {
-  const n = Number(process.env.GELWRIGHT_IMPORT_SPARE_WORKERS ?? 1);
-  return Number.isInteger(n) && n >= 0 && n <= 4 ? n : 1;
+  return settings().workers.importSpares;
 }
 
 interface Spare {
@@ -165,8 +63,7 @@ const spares: Spare[] = [];
 /** Starts warming spare workers until there are spareTarget() of them. They never keep the process alive. */
 function refillSpares(): void {
   while (spares.length < spareTarget()) {
-    const data: WorkerData = { moduleRoot: defaultModuleRoot(), warm: true, limits: workerLimits(IMPORT_LIMITS) };
-    const worker = new Worker(WORKER_SOURCE, { eval: true, workerData: data, resourceLimits: RESOURCE_LIMITS });
+    const worker = startWorker({ role: PARSE_WORKER, warm: true, limits: workerLimits(IMPORT_LIMITS) });
     worker.unref();
     let settle = () => {};
     const spare: Spare = { worker, ready: false, settled: new Promise<void>((resolve) => (settle = resolve)) };
@@ -196,8 +93,8 @@ export async function spareWorkersReady(): Promise<number> {
 }
 
 /** A worker that will read `request`: a warmed spare if one is ready, else a new one. */
-function workerFor(request: WorkerRequest): Worker {
-  const i = spareTarget() > 0 && request.moduleRoot === defaultModuleRoot() ? spares.findIndex((s) => s.ready) : -1;
+function workerFor(request: ParseRequest): Worker {
+  const i = spareTarget() > 0 ? spares.findIndex((s) => s.ready) : -1;
   if (i >= 0) {
     const [spare] = spares.splice(i, 1);
     spare!.worker.removeAllListeners();
@@ -206,8 +103,7 @@ function workerFor(request: WorkerRequest): Worker {
     spare!.worker.postMessage(request, [request.bytes.buffer as ArrayBuffer]);
     return spare!.worker;
   }
-  const data: WorkerData = { moduleRoot: request.moduleRoot, warm: false, request };
-  return new Worker(WORKER_SOURCE, { eval: true, workerData: data, resourceLimits: RESOURCE_LIMITS, transferList: [request.bytes.buffer as ArrayBuffer] });
+  return startWorker({ role: PARSE_WORKER, warm: false, request }, [request.bytes.buffer as ArrayBuffer]);
 }
 
 /** Result of reading a workbook: sheet names and the sheets asked for. */
@@ -226,11 +122,9 @@ export interface MemoryWatch {
   rss: () => number;
 }
 
-/** GELWRIGHT_IMPORT_MEMORY_HEADROOM_MB (default 768; a whole number from 64 to 65,536). */
+/** GELWRIGHT_IMPORT_MEMORY_HEADROOM_MB (default 768; a whole number from 64 to 65,536), in bytes. */
 export function memoryHeadroomBytes(): number {
-  const raw = process.env.GELWRIGHT_IMPORT_MEMORY_HEADROOM_MB;
-  const n = raw === undefined || raw === "" ? 768 : Number(raw);
-  return (Number.isInteger(n) && n >= 64 && n <= 65_536 ? n : 768) * 1024 * 1024;
+  return settings().workers.importMemoryHeadroomMb * 1024 * 1024;
 }
 
 /**
@@ -247,7 +141,7 @@ export function memoryHeadroomBytes(): number {
 export async function readWorkbookInWorker(
   bytes: Uint8Array,
   wanted: readonly string[],
-  opts: { firstSheetFallback?: boolean; limits?: ImportLimits; zipLimits?: ZipLimits; moduleRoot?: string; memory?: Partial<MemoryWatch> } = {},
+  opts: { firstSheetFallback?: boolean; limits?: ImportLimits; zipLimits?: ZipLimits; memory?: Partial<MemoryWatch> } = {},
 ): Promise<WorkbookRead> {
   const limits = opts.limits ?? IMPORT_LIMITS;
   const stored = await unpackWorkbook(bytes, opts.zipLimits ?? ZIP_LIMITS);
@@ -256,12 +150,11 @@ export async function readWorkbookInWorker(
     sampleMs: opts.memory?.sampleMs ?? 50,
     rss: opts.memory?.rss ?? (() => process.memoryUsage.rss()),
   };
-  const request: WorkerRequest = {
+  const request: ParseRequest = {
     bytes: stored,
     wanted: [...wanted],
     firstSheetFallback: opts.firstSheetFallback ?? false,
     limits: workerLimits(limits),
-    moduleRoot: opts.moduleRoot ?? defaultModuleRoot(),
   };
   return new Promise<WorkbookRead>((resolve, reject) => {
     const rssAtStart = watch.rss();
@@ -302,7 +195,7 @@ export async function readWorkbookInWorker(
       );
     }, watch.sampleMs);
     watchdog.unref();
-    worker.once("message", (message: WorkerReply) => {
+    worker.once("message", (message: ParseReply) => {
       finish(() => {
         if (message.ok) {
           resolve({

@@ -4,15 +4,46 @@
  * rows are frozen and columns get widths that fit their headers.
  */
 import * as XLSX from "xlsx";
+import { decimalPlaces, roundToResolution } from "@/lib/batches/resolution";
 import { neutraliseText } from "./neutralise";
 import type { Cell } from "./types";
 
-/** A sheet to write: `header` rows are frozen at the top; `widths` in characters. */
+/**
+ * A sheet to write: `header` rows are frozen at the top; `widths` in
+ * characters; `steps` per column: the resolution a numeric column is shown
+ * at (e.g. 0.01 for a balance reading to 0.01 g). A workbook keeps the exact
+ * value with a number format that shows that rounding; CSV writes the value
+ * rounded.
+ */
 export interface SheetSpec {
   name: string;
   header: Cell[][];
   rows: Cell[][];
   widths?: number[];
+  steps?: (number | undefined)[];
+}
+
+/**
+ * The number format that shows a value at `step`: "0.00" for 0.01.
+ *
+ * @example numberFormatFor(0.001) // "0.000"
+ */
+export function numberFormatFor(step: number): string {
+  const places = decimalPlaces(step);
+  return places === 0 ? "0" : `0.${"0".repeat(places)}`;
+}
+
+/** Gives the numeric cells of the columns with a step their number format (data rows only). */
+function formatColumns(ws: XLSX.WorkSheet, spec: SheetSpec): void {
+  if (!spec.steps) return;
+  spec.rows.forEach((row, index) => {
+    const r = spec.header.length + index;
+    row.forEach((_, c) => {
+      const step = spec.steps?.[c];
+      const cell = ws[XLSX.utils.encode_cell({ r, c })] as XLSX.CellObject | undefined;
+      if (step !== undefined && cell?.t === "n") cell.z = numberFormatFor(step);
+    });
+  });
 }
 
 function safeCell(value: Cell | undefined): Cell {
@@ -51,6 +82,7 @@ export function buildWorkbook(sheets: readonly SheetSpec[]): Buffer {
   const wb = XLSX.utils.book_new();
   for (const spec of sheets) {
     const ws = XLSX.utils.aoa_to_sheet(safeRows([...spec.header, ...spec.rows]));
+    formatColumns(ws, spec);
     const widths = spec.widths ?? autoWidths(spec);
     ws["!cols"] = widths.map((wch) => ({ wch }));
     XLSX.utils.book_append_sheet(wb, ws, spec.name);
@@ -94,7 +126,8 @@ function csvField(value: Cell): string {
  * A CSV file (RFC 4180, CRLF line ends, UTF-8 with a byte-order mark so
  * spreadsheet programs read the units' symbols right). Every text cell is
  * neutralised and every cell quoted; numbers are written in full precision
- * with a point.
+ * with a point, except in a column with a step (see SheetSpec), where they
+ * are rounded to it.
  * Further tables follow after a blank line and a "[Sheet name]" line.
  *
  * @example
@@ -102,11 +135,19 @@ function csvField(value: Cell): string {
  * toCsv([{ name: "Batch sheet", rows: [["Material", "Target mass (g)"], ["TEOS", 34.67]] }]);
  * ```
  */
-export function toCsv(tables: readonly { name: string; rows: readonly (readonly (Cell | undefined)[])[] }[]): string {
+export function toCsv(
+  tables: readonly { name: string; rows: readonly (readonly (Cell | undefined)[])[]; steps?: (number | undefined)[] }[],
+): string {
   const lines: string[] = [];
   tables.forEach((table, index) => {
     if (index > 0) lines.push("", csvField(`[${table.name}]`));
-    for (const row of safeRows(table.rows)) lines.push(row.map(csvField).join(","));
+    for (const row of safeRows(table.rows)) {
+      const shown = row.map((cell, c) => {
+        const step = table.steps?.[c];
+        return typeof cell === "number" && step !== undefined ? roundToResolution(cell, step) : cell;
+      });
+      lines.push(shown.map(csvField).join(","));
+    }
   });
   return `\uFEFF${lines.join("\r\n")}\r\n`;
 }

@@ -1,5 +1,4 @@
 import { availableParallelism } from "node:os";
-import { Worker } from "node:worker_threads";
 import { afterEach, describe, expect, it } from "vitest";
 import { ApiError, errorResponse } from "@/lib/http/errors";
 import { computeFromText, type EngineReply } from "@/lib/compute/from-text";
@@ -8,6 +7,8 @@ import { computeFormulation } from "@/lib/formulation";
 import { FormulationError } from "@/lib/formulation/errors";
 import type { FormulationInput } from "@/lib/formulation/input-schema";
 import { ref } from "@/lib/formulation/test-support";
+import { parseSettings } from "@/lib/settings";
+import { startTypeScriptWorker, typeScriptWorkerOptions } from "@/lib/worker-threads";
 
 // The pool's behaviour is our own design (lib/compute/pool.ts); the results it carries are
 // checked against the engine itself, in this process.
@@ -64,23 +65,11 @@ describe("unwrap", () => {
   });
 });
 
-/**
- * A stand-in engine worker that speaks the pool's protocol: "wait:N" answers
- * after N ms with its thread id, "exit" ends the thread, "hang" never answers.
- */
-const FAKE_WORKER = String.raw`
-const { parentPort, threadId } = require("node:worker_threads");
-parentPort.on("message", ({ id, text }) => {
-  if (text === "exit") process.exit(3);
-  if (text === "hang") return;
-  const ms = Number(text.split(":")[1] ?? 0);
-  setTimeout(() => parentPort.postMessage({ id, reply: { ok: true, json: JSON.stringify({ text, threadId }) } }), ms);
-});
-`;
-
 const pools: EnginePool[] = [];
+/** A pool of stand-in workers (tests/helpers/fake-engine-worker.ts). */
 function fakePool(size: number, timeoutMs = 5_000): EnginePool {
-  const pool = new EnginePool({ size, timeoutMs, spawn: () => new Worker(FAKE_WORKER, { eval: true }) });
+  const spawn = () => startTypeScriptWorker(import.meta.url, "../helpers/fake-engine-worker.ts");
+  const pool = new EnginePool({ size, timeoutMs, spawn });
   pools.push(pool);
   return pool;
 }
@@ -114,7 +103,7 @@ describe("EnginePool", () => {
   });
 
   it("stops a calculation that overruns its time, with 503, and carries on with a new worker", async () => {
-    const pool = fakePool(1, 1_500); // room for a slow worker start on a busy machine
+    const pool = fakePool(1, 3_000); // room for a slow worker start (from source, through tsx) on a busy machine
     const hung = pool.run("hang");
     const behind = pool.run("wait:10000"); // on the same worker: lost with it
     await expect(hung).rejects.toMatchObject({ status: 503, code: "compute_timeout" });
@@ -125,6 +114,26 @@ describe("EnginePool", () => {
   });
 });
 
+describe("the engine worker (lib/compute/worker.ts)", () => {
+  it("runs from its TypeScript source and answers as the engine does in this thread", async () => {
+    const spawn = () => startTypeScriptWorker(import.meta.url, "../../lib/compute/worker.ts");
+    const pool = new EnginePool({ size: 1, timeoutMs: 20_000, spawn });
+    pools.push(pool);
+    const input = JSON.stringify(teosSilicaInput());
+    expect(JSON.parse(unwrap(await pool.run(input)))).toEqual(JSON.parse(unwrap(computeFromText(input))));
+    await expect(pool.run("{not json")).resolves.toEqual({ ok: false, kind: "malformed_json" });
+  });
+});
+
+describe("typeScriptWorkerOptions", () => {
+  it("keeps the memory limits and adds tsx's require hook", () => {
+    expect(typeScriptWorkerOptions({ resourceLimits: { maxOldGenerationSizeMb: 1 } })).toEqual({
+      resourceLimits: { maxOldGenerationSizeMb: 1 },
+      execArgv: ["--require", "tsx/cjs"],
+    });
+  });
+});
+
 describe("computeWorkerCount", () => {
   const saved = process.env.GELWRIGHT_COMPUTE_WORKERS;
   afterEach(() => {
@@ -132,13 +141,19 @@ describe("computeWorkerCount", () => {
     else process.env.GELWRIGHT_COMPUTE_WORKERS = saved;
   });
 
-  it("takes 0 to 8 from the setting and falls back to the default for anything else", () => {
+  it("takes 0 to 8 from the setting, 1 by default (0 on a one-core machine), and refuses anything else", () => {
     delete process.env.GELWRIGHT_COMPUTE_WORKERS;
     const fallback = computeWorkerCount();
     expect(fallback).toBe(availableParallelism() > 1 ? 1 : 0);
-    for (const [setting, want] of [["0", 0], ["3", 3], ["8", 8], ["9", fallback], ["-1", fallback], ["two", fallback], ["1.5", fallback], ["", fallback]] as const) {
+    expect(parseSettings({}, { cpus: 1 }).workers.compute).toBe(0);
+    expect(parseSettings({}, { cpus: 4 }).workers.compute).toBe(1);
+    for (const [setting, want] of [["0", 0], ["3", 3], ["8", 8], ["", fallback]] as const) {
       process.env.GELWRIGHT_COMPUTE_WORKERS = setting;
       expect(computeWorkerCount(), setting).toBe(want);
+    }
+    for (const setting of ["9", "-1", "two", "1.5"]) {
+      process.env.GELWRIGHT_COMPUTE_WORKERS = setting;
+      expect(() => computeWorkerCount(), setting).toThrow(`GELWRIGHT_COMPUTE_WORKERS=“${setting}”: expected a whole number from 0 to 8`);
     }
   });
 });

@@ -11,7 +11,7 @@ import { bodyLimitFor, MAX_AUTH_BODY_BYTES, MAX_JSON_BODY_BYTES } from "@/lib/se
 import { CLIENT_ADDRESS_HEADER } from "@/lib/server/client-address";
 import { changeRefusal, createFront, pagePolicy, routePath } from "@/lib/server/front";
 import { rawRequest, type RawAnswer, type RawRequest } from "@/tests/helpers/raw-http";
-import { parseTrustedOrigins, parseTrustedProxies, readFrontSettings, SettingError } from "@/lib/server/settings";
+import { parseSettings, SettingsError } from "@/lib/settings";
 
 const ORIGIN = "http://localhost:3000";
 let server: Server | undefined;
@@ -33,7 +33,7 @@ interface Seen {
 
 /** A server with the front before a handler that reads the whole body, as a route would. */
 async function start(trustedProxies: string, handler?: (req: IncomingMessage, res: ServerResponse) => void) {
-  const prepare = createFront(readFrontSettings({ BETTER_AUTH_URL: ORIGIN, GELWRIGHT_TRUSTED_PROXIES: trustedProxies }), { dev: false });
+  const prepare = createFront(parseSettings({ BETTER_AUTH_URL: ORIGIN, GELWRIGHT_TRUSTED_PROXIES: trustedProxies }).server, { dev: false });
   const seen: Seen = { bodyBytes: 0 };
   server = createServer((req, res) => {
     if (!prepare(req, res)) return;
@@ -81,17 +81,21 @@ describe("client address", () => {
 });
 
 describe("settings", () => {
+  const proxies = (value: string | undefined) => parseSettings({ GELWRIGHT_TRUSTED_PROXIES: value }).server.trustedProxies;
+  const origins = (base: string, extra: string | undefined) => parseSettings({ BETTER_AUTH_URL: base, GELWRIGHT_TRUSTED_ORIGINS: extra }).server.trustedOrigins;
+
   it("accepts addresses, CIDR ranges and proxy-addr's named ranges", () => {
-    expect(parseTrustedProxies(" 10.0.0.5, 10.1.0.0/16 ,::1, fd00::/8, loopback")).toEqual(["10.0.0.5", "10.1.0.0/16", "::1", "fd00::/8", "loopback"]);
-    expect(parseTrustedProxies(undefined)).toEqual([]);
+    expect(proxies(" 10.0.0.5, 10.1.0.0/16 ,::1, fd00::/8, loopback")).toEqual(["10.0.0.5", "10.1.0.0/16", "::1", "fd00::/8", "loopback"]);
+    expect(proxies(undefined)).toEqual([]);
+    expect([...origins(ORIGIN, "https://lab.example/path")]).toEqual([ORIGIN, "https://lab.example"]);
   });
 
   describe("edge cases", () => {
     it("stops with a message naming the setting and the bad entry", () => {
-      expect(() => parseTrustedProxies("10.0.0.5, proxy.example")).toThrow(SettingError);
-      expect(() => parseTrustedProxies("10.0.0.0/33")).toThrow(/GELWRIGHT_TRUSTED_PROXIES: “10.0.0.0\/33”/);
-      expect(() => parseTrustedOrigins(ORIGIN, "not a url")).toThrow(/GELWRIGHT_TRUSTED_ORIGINS: “not a url” is not a URL/);
-      expect(() => parseTrustedOrigins("ftp://x.example", undefined)).toThrow(/BETTER_AUTH_URL/);
+      expect(() => proxies("10.0.0.5, proxy.example")).toThrow(SettingsError);
+      expect(() => proxies("10.0.0.0/33")).toThrow(/GELWRIGHT_TRUSTED_PROXIES=“10.0.0.0\/33”: expected IP addresses or CIDR ranges.*not “10.0.0.0\/33”/);
+      expect(() => origins(ORIGIN, "not a url")).toThrow(/GELWRIGHT_TRUSTED_ORIGINS=“not a url”: expected URLs starting with http:\/\/ or https:\/\//);
+      expect(() => origins("ftp://x.example", undefined)).toThrow(/BETTER_AUTH_URL=“ftp:\/\/x.example”/);
     });
   });
 });
@@ -162,7 +166,7 @@ describe("body limits", () => {
 
 describe("changes to the API", () => {
   const post = (headers: Record<string, string>) => ({ method: "POST", headers: { host: "localhost:3000", ...headers } }) as IncomingMessage;
-  const origins = parseTrustedOrigins(ORIGIN, undefined);
+  const origins = parseSettings({ BETTER_AUTH_URL: ORIGIN }).server.trustedOrigins;
 
   it("are refused without an Origin, from another origin, or with a body that is not JSON", () => {
     expect(changeRefusal(post({ "content-type": "application/json", "content-length": "2" }), "/api/formulations", origins)).toMatchObject({ status: 403 });

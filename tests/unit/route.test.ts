@@ -28,7 +28,7 @@ vi.mock("@/lib/session", () => ({
   },
 }));
 
-vi.mock("@/lib/config", () => ({ config: { trustedOrigins: new Set(["http://app.test"]) } }));
+vi.mock("@/lib/settings", () => ({ settings: () => ({ server: { trustedOrigins: new Set(["http://app.test"]) } }) }));
 
 const member = (role: RoleName): TeamContext => ({
   userId: "u-1",

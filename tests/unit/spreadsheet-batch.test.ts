@@ -1,54 +1,16 @@
 /**
- * Batch record arithmetic, worked by hand in the comments: deviation from
- * target, the tolerance check (±1 % or the balance resolution, whichever is
- * larger) and the composition actually made.
+ * The batch record workbook: deviations, the composition made, and masses
+ * shown to the balance resolution (the exact value stays in the cell).
+ * The arithmetic itself is tested in lib/batches.
  */
 import * as XLSX from "xlsx";
 import { describe, expect, it } from "vitest";
 import { referenceMaterials } from "@/data/materials";
+import { actualComposition, batchLinesFrom } from "@/lib/batches";
 import { computeFormulation, type FormulationInput } from "@/lib/formulation";
-import { actualComposition, batchLinesFrom, batchWorkbook, lineDeviation } from "@/lib/spreadsheet/batch-record";
+import { batchWorkbook } from "@/lib/spreadsheet/batch-record";
 
-describe("lineDeviation", () => {
-  it("returns the absolute and relative deviation and flags nothing inside ±1 %", () => {
-    // target 24.00 g, actual 24.20 g: +0.20 g; 0.20 / 24.00 = 0.0083333…; tolerance max(0.01 × 24 = 0.24 g, 0.01 g) = 0.24 g → inside.
-    const d = lineDeviation(24, 24.2, 0.01, 0.01);
-    expect(d.absoluteGrams).toBeCloseTo(0.2, 12);
-    expect(d.relative).toBeCloseTo(0.2 / 24, 12);
-    expect(d.toleranceGrams).toBe(0.24);
-    expect(d.outside).toBe(false);
-  });
-
-  it("flags a line beyond ±1 % of its target", () => {
-    // target 24.00 g, actual 23.70 g: −0.30 g; −0.30 / 24 = −0.0125 (−1.25 %); |−0.30| > 0.24 g → outside.
-    const d = lineDeviation(24, 23.7, 0.01, 0.01);
-    expect(d.absoluteGrams).toBeCloseTo(-0.3, 12);
-    expect(d.relative).toBeCloseTo(-0.0125, 12);
-    expect(d.outside).toBe(true);
-  });
-
-  it("uses the balance resolution when it is larger than 1 % of a small target", () => {
-    // target 0.500 g: 1 % = 0.005 g < resolution 0.01 g → tolerance 0.01 g.
-    // actual 0.508 g: +0.008 g → inside; actual 0.515 g: +0.015 g → outside.
-    expect(lineDeviation(0.5, 0.508, 0.01, 0.01)).toMatchObject({ toleranceGrams: 0.01, outside: false });
-    expect(lineDeviation(0.5, 0.515, 0.01, 0.01)).toMatchObject({ toleranceGrams: 0.01, outside: true });
-  });
-
-  describe("edge cases", () => {
-    it("treats a deviation exactly at the tolerance as inside (decimal arithmetic, no binary rounding)", () => {
-      // target 10 g, actual 10.1 g: deviation exactly 0.1 g = 1 % of 10 g. In binary floating point 10.1 − 10 = 0.0999999999999996.
-      const d = lineDeviation(10, 10.1, 0.01, 0.01);
-      expect(d.absoluteGrams).toBe(0.1);
-      expect(d.outside).toBe(false);
-    });
-
-    it("returns a null relative deviation for a zero target", () => {
-      expect(lineDeviation(0, 0.02, 0.01, 0.01)).toMatchObject({ relative: null, toleranceGrams: 0.01, outside: true });
-    });
-  });
-});
-
-describe("actualComposition", () => {
+describe("batchWorkbook", () => {
   const teos = referenceMaterials.find((m) => m.id === "teos")!;
   const pdms = referenceMaterials.find((m) => m.id === "pdms-silanol")!;
   const water = referenceMaterials.find((m) => m.id === "water-di")!;
@@ -66,34 +28,6 @@ describe("actualComposition", () => {
   const lines = batchLinesFrom(input, result);
   const weigh = (factor: Record<string, number>) =>
     lines.map((l) => ({ ...l, actualGrams: l.targetGrams! * (factor[l.materialId] ?? 1), lotNumber: "L1" }));
-
-  it("returns the target composition when every line is weighed exactly", () => {
-    const made = actualComposition(input, result, weigh({}))!;
-    expect(made.components.map((c) => c.actualWeightFraction)).toEqual([0.7, 0.3]);
-    expect(made.effectiveR.actual).toBeCloseTo(4, 12);
-    expect(made.solidGrams.actual).toBeCloseTo(10, 12);
-  });
-
-  it("recomputes weight fractions and the water ratio after a 10 % overdose of TEOS", () => {
-    // TEOS residue 7 g × 1.1 = 7.7 g; PDMS 3 g; dry composite 10.7 g.
-    // Weight fractions 7.7 / 10.7 = 0.719626…, 3 / 10.7 = 0.280374….
-    // Water W = 4 · n(Si) unchanged, Si atoms 1.1 · n(Si): R = 4 / 1.1 = 3.636364…; h = 4 / (4 × 1.1) = 0.909091….
-    // Theoretical density (rule of mixtures; SiO2 2.20 g/cm³ CRC, PDMS 0.97 g/cm³ supplier value in data/materials.ts):
-    // 1 / (0.719626 / 2.2 + 0.280374 / 0.97) = 1 / (0.327103 + 0.289045) = 1.622987 g/cm³.
-    const made = actualComposition(input, result, weigh({ teos: 1.1 }))!;
-    expect(made.solidGrams.actual).toBeCloseTo(10.7, 10);
-    expect(made.components[0]!.actualWeightFraction).toBeCloseTo(0.7196261682, 9);
-    expect(made.components[1]!.actualWeightFraction).toBeCloseTo(0.2803738318, 9);
-    expect(made.effectiveR.actual).toBeCloseTo(3.6363636364, 9);
-    expect(made.effectiveH.actual).toBeCloseTo(0.9090909091, 9);
-    expect(made.effectiveR.target).toBeCloseTo(4, 12);
-    expect("composite" in made.engine && made.engine.composite.theoreticalDensity).toBeCloseTo(1.6229867, 6);
-  });
-
-  it("returns null until every line has an actual mass", () => {
-    const partial = weigh({}).map((l, i) => (i === 0 ? { ...l, actualGrams: null } : l));
-    expect(actualComposition(input, result, partial)).toBeNull();
-  });
 
   it("exports the record with deviations and the composition made", () => {
     const weighed = weigh({ teos: 1.1 });
@@ -122,5 +56,38 @@ describe("actualComposition", () => {
     expect(teosRow[9]).toBe("outside tolerance");
     const overview = XLSX.utils.sheet_to_json<unknown[]>(wb.Sheets.Overview!, { header: 1, raw: true, defval: null });
     expect(overview.find((r) => r[0] === "Notes")?.[1]).toBe("'=not a formula");
+  });
+
+  it("keeps the exact masses in the cells, shown to the balance resolution, and volumes to 0.01 mL", () => {
+    const weighed = weigh({ teos: 1.1 });
+    const record = (balanceResolutionGrams: number) =>
+      XLSX.read(
+        batchWorkbook({
+          id: "b-2",
+          formulationName: "Monolith",
+          revisionNumber: 1,
+          state: "closed",
+          startedByName: null,
+          closedByName: null,
+          createdAt: new Date("2026-04-01T08:00:00Z"),
+          closedAt: null,
+          toleranceFraction: 0.01,
+          balanceResolutionGrams,
+          notes: null,
+          lines: weighed,
+          composition: null,
+        }),
+        { type: "buffer", cellNF: true },
+      ).Sheets["Batch record"]!;
+    const ws = record(0.1);
+    weighed.forEach((line, i) => {
+      const cell = (column: string) => ws[`${column}${i + 2}`] as XLSX.CellObject;
+      // Target (D), actual (F), deviation (G) and tolerance (I) in g at 0.1 g; target volume (E) at 0.01 mL.
+      expect([cell("D").v, cell("D").z]).toEqual([line.targetGrams, "0.0"]);
+      expect([cell("F").v, cell("F").z]).toEqual([line.actualGrams, "0.0"]);
+      expect([cell("G").z, cell("I").z, cell("E").z]).toEqual(["0.0", "0.0", "0.00"]);
+      expect(cell("E").v).toBe(line.targetMl);
+    });
+    expect((record(0.001).D2 as XLSX.CellObject).z).toBe("0.000");
   });
 });

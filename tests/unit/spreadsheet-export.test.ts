@@ -7,12 +7,14 @@
  */
 import * as XLSX from "xlsx";
 import { describe, expect, it } from "vitest";
+import { referenceMaterials } from "@/data/materials";
 import { computeFormulation, type FormulationInput } from "@/lib/formulation";
 import { demoInputs } from "@/lib/spreadsheet/example";
 import { batchSheetCsv, revisionWorkbook, safeFileName, type RevisionForExport } from "@/lib/spreadsheet/export-formulation";
 import { materialsCsv, materialsWorkbook } from "@/lib/spreadsheet/export-materials";
 import { neutraliseText, restoreText } from "@/lib/spreadsheet/neutralise";
 import { parseCsv } from "@/lib/spreadsheet/csv";
+import { sourcePropertyKey, sourcePropertyLabel } from "@/lib/spreadsheet/source-properties";
 import { toCsv } from "@/lib/spreadsheet/write";
 
 const released = demoInputs().find((d) => d.name === "Visor hard coat HC-3" && d.revision === 2)!;
@@ -102,6 +104,19 @@ describe("revision workbook", () => {
     expect(cell.t).toBe("n");
   });
 
+  it("keeps each exact mass in its cell with a number format that shows the balance resolution", () => {
+    const formatted = XLSX.read(bytes, { type: "buffer", cellNF: true }).Sheets["Batch sheet"]!;
+    const lines = rev.result!.lines.filter((l) => l.massGrams > 0);
+    lines.forEach((line, i) => {
+      const mass = formatted[`E${i + 2}`] as XLSX.CellObject;
+      const volume = formatted[`F${i + 2}`] as XLSX.CellObject;
+      expect([mass.v, mass.z]).toEqual([line.massGrams, "0.00"]); // default balance: 0.01 g
+      expect([volume.v, volume.z]).toEqual([line.volumeMl, "0.00"]); // 0.01 mL
+    });
+    const milligram = XLSX.read(revisionWorkbook(rev, { balanceResolutionGrams: 0.001 }), { type: "buffer", cellNF: true }).Sheets["Batch sheet"]!;
+    expect((milligram.E2 as XLSX.CellObject).z).toBe("0.000");
+  });
+
   it("writes the dry composite's weight and volume fractions, densities, porosity and shrinkage", () => {
     const rows = grid(wb, "Dry composite");
     const c = rev.result!.composite;
@@ -134,13 +149,22 @@ describe("revision workbook", () => {
     }
   });
 
-  it("returns the batch sheet as CSV with the same lines", () => {
+  it("returns the batch sheet as CSV with the same lines, masses rounded to the balance and volumes to 0.01 mL", () => {
     const csv = batchSheetCsv(rev);
     expect(csv.startsWith('\uFEFF"Order","Material","Role","Lot number","Target mass as supplied (g)"')).toBe(true);
     const { rows } = parseCsv(csv);
     const lines = rev.result!.lines.filter((l) => l.massGrams > 0);
     expect(rows.length).toBe(lines.length + 1);
-    expect(Number(rows[1]![4])).toBe(lines[0]!.massGrams);
+    lines.forEach((line, i) => {
+      const [mass, volume] = [String(rows[i + 1]![4]), String(rows[i + 1]![5])];
+      // Two decimals for the default 0.01 g balance, within half a step of the exact figure.
+      expect(mass).toMatch(/^\d+\.\d{2}$/);
+      expect(Math.abs(Number(mass) - line.massGrams)).toBeLessThanOrEqual(0.005 + 1e-12);
+      expect(volume).toMatch(/^\d+\.\d{2}$/);
+      expect(Math.abs(Number(volume) - line.volumeMl)).toBeLessThanOrEqual(0.005 + 1e-12);
+    });
+    const tenth = parseCsv(batchSheetCsv(rev, { balanceResolutionGrams: 0.1 })).rows;
+    expect(String(tenth[1]![4])).toMatch(/^\d+\.\d$/);
   });
 });
 
@@ -282,5 +306,33 @@ describe("materials library export", () => {
       expect(safeFileName('Visor "HC-3" / r2', "xlsx")).toBe("Visor-HC-3-r2.xlsx");
       expect(safeFileName("", "csv")).toBe("export.csv");
     });
+  });
+});
+
+describe("words in the sheets", () => {
+  const engineName = /\b[a-z]+[A-Z][a-z]|[A-Za-z]\.[A-Za-z]/; // camelCase or a dotted path, e.g. precursor.leavingAlcohol
+
+  it("names every heading, label and source property in plain words, never an engine field name", () => {
+    const wb = open(revisionWorkbook(revision(released.input)));
+    const properties = grid(wb, "Material sources")
+      .slice(1)
+      .map((row) => String(row[1]));
+    expect(properties).toContain("Leaving alcohol (name and molar mass)");
+    expect(properties).toContain("Residue density (g/cm³)");
+    for (const property of properties) expect(property).not.toMatch(engineName);
+    for (const name of wb.SheetNames.filter((n) => n !== "Read me")) {
+      const rows = grid(wb, name);
+      const labels = [...(rows[0] ?? []), ...rows.map((row) => row[0])].filter((cell): cell is string => typeof cell === "string");
+      for (const label of labels) expect(label, `${name}: ${label}`).not.toMatch(engineName);
+    }
+  });
+
+  it("reads each property's words back to the same key on import", () => {
+    const keys = new Set(referenceMaterials.flatMap((m) => Object.keys(m.sources ?? {})));
+    expect(keys.has("precursor.leavingAlcohol")).toBe(true);
+    for (const key of [...keys, "storage.shelfLifeDays"]) expect(sourcePropertyKey(sourcePropertyLabel(key)), key).toBe(key);
+    // A property without words of its own keeps its key in brackets, after the words.
+    expect(sourcePropertyLabel("storage.shelfLifeDays")).toBe("Storage shelf life days [storage.shelfLifeDays]");
+    expect(sourcePropertyKey("density as supplied")).toBe("density");
   });
 });

@@ -120,13 +120,17 @@ describe("zip bombs in .xlsx uploads", () => {
       }
     });
 
-    it("takes the watchdog's headroom from GELWRIGHT_IMPORT_MEMORY_HEADROOM_MB, and 768 MB for anything out of range", () => {
+    it("takes the watchdog's headroom from GELWRIGHT_IMPORT_MEMORY_HEADROOM_MB (768 MB unset), and refuses anything out of range", () => {
       const saved = process.env.GELWRIGHT_IMPORT_MEMORY_HEADROOM_MB;
       try {
-        for (const [setting, mb] of [[undefined, 768], ["", 768], ["1024", 1024], ["64", 64], ["63", 768], ["1.5", 768], ["lots", 768], ["70000", 768]] as const) {
+        for (const [setting, mb] of [[undefined, 768], ["", 768], ["1024", 1024], ["64", 64]] as const) {
           if (setting === undefined) delete process.env.GELWRIGHT_IMPORT_MEMORY_HEADROOM_MB;
           else process.env.GELWRIGHT_IMPORT_MEMORY_HEADROOM_MB = setting;
           expect(memoryHeadroomBytes(), String(setting)).toBe(mb * MiB);
+        }
+        for (const setting of ["63", "1.5", "lots", "70000"]) {
+          process.env.GELWRIGHT_IMPORT_MEMORY_HEADROOM_MB = setting;
+          expect(() => memoryHeadroomBytes(), setting).toThrow(`GELWRIGHT_IMPORT_MEMORY_HEADROOM_MB=“${setting}”: expected a whole number from 64 to 65,536`);
         }
       } finally {
         if (saved === undefined) delete process.env.GELWRIGHT_IMPORT_MEMORY_HEADROOM_MB;
