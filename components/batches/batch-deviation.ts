@@ -4,7 +4,7 @@ import { fmtMass, fmtPercent } from "@/lib/format";
 /**
  * Deviation of an actual mass from target, for the live display while typing:
  * |actual − target| beyond max(tolerance × target, balance resolution) is
- * outside. The server's figure (lib/spreadsheet/batch-record.ts, in decimal
+ * outside. The server's figure (lib/batches/deviation.ts, in decimal
  * arithmetic) replaces this one once the line is saved.
  */
 export function liveDeviation(targetGrams: number, actualGrams: number, toleranceFraction: number, resolutionGrams: number): LineDeviation {
