@@ -3,16 +3,16 @@
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { useForm, useWatch, type FieldErrors, type Resolver } from "react-hook-form";
-import { useSWRConfig } from "swr";
 import { KIND_WORDS } from "@/components/results/words";
 import { Button } from "@/components/ui/button";
 import { useConfirm } from "@/components/ui/confirm-dialog";
 import { Field, inputClass } from "@/components/ui/field";
 import { HazardCodes, SafetyNote } from "@/components/ui/hazards";
 import { MATERIAL_KINDS, materialSchema, type Material, type MaterialKind } from "@/lib/formulation";
-import { ApiRequestError, apiSend, errorMessage } from "@/lib/client/fetcher";
+import { ApiRequestError, errorMessage } from "@/lib/client/fetcher";
+import { useInvalidate } from "@/lib/client/invalidate";
+import { createMaterial, deleteMaterial, updateMaterial, type LibraryMaterial } from "@/lib/client/materials";
 import { ALL_FIELDS, formKey, PROPERTY_GROUPS } from "./material-fields";
-import type { LibraryMaterial } from "./types";
 
 type FormValues = Record<string, string>;
 
@@ -106,7 +106,7 @@ interface MaterialFormProps {
 /** Every property of a material with its unit and its source, validated by the shared schema. */
 export function MaterialForm({ material, canSave, canDelete }: MaterialFormProps) {
   const router = useRouter();
-  const { mutate } = useSWRConfig();
+  const invalidate = useInvalidate();
   const [message, setMessage] = useState<{ tone: "error" | "info"; text: string } | null>(null);
   const [confirmDialog, ask] = useConfirm();
   const form = useForm<FormValues>({ resolver, defaultValues: toForm(material ?? {}), mode: "onTouched" });
@@ -121,10 +121,8 @@ export function MaterialForm({ material, canSave, canDelete }: MaterialFormProps
       setMessage(null);
       const body = { material: toMaterial(values, material?.id ?? "new"), casNumber: values.casNumber?.trim() || null };
       try {
-        const saved = material
-          ? await apiSend<LibraryMaterial>("PUT", `/api/materials/${material.id}`, body)
-          : await apiSend<LibraryMaterial>("POST", "/api/materials", body);
-        await mutate((key) => typeof key === "string" && key.startsWith("/api/materials"));
+        const saved = material ? await updateMaterial(material.id, body) : await createMaterial(body);
+        await invalidate("materials");
         if (!material) router.push(`/materials/${saved.id}`);
         else {
           form.reset(toForm(saved));
@@ -150,8 +148,8 @@ export function MaterialForm({ material, canSave, canDelete }: MaterialFormProps
     });
     if (!confirmed) return;
     try {
-      await apiSend("DELETE", `/api/materials/${material.id}`);
-      await mutate((key) => typeof key === "string" && key.startsWith("/api/materials"));
+      await deleteMaterial(material.id);
+      await invalidate("materials");
       router.push("/materials");
       router.refresh();
     } catch (err) {

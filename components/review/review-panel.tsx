@@ -2,15 +2,16 @@
 
 import { useRouter } from "next/navigation";
 import { useId, useState } from "react";
-import { useSWRConfig } from "swr";
 import { Button } from "@/components/ui/button";
 import { FieldError, inputClass } from "@/components/ui/field";
 import { ThermalBadge } from "@/components/ui/status";
-import { ApiRequestError, apiSend, errorMessage } from "@/lib/client/fetcher";
-import type { Abilities, RevisionDto } from "./types";
+import { ApiRequestError, errorMessage } from "@/lib/client/fetcher";
+import { transitionRevision, type Revision } from "@/lib/client/formulations";
+import { useInvalidate } from "@/lib/client/invalidate";
+import type { Abilities } from "./abilities";
 
 interface ReviewPanelProps {
-  revision: RevisionDto;
+  revision: Revision;
   can: Abilities;
   onChanged: () => void;
 }
@@ -18,7 +19,7 @@ interface ReviewPanelProps {
 /** Approve or send back a revision that waits for review, with a comment. */
 export function ReviewPanel({ revision, can, onChanged }: ReviewPanelProps) {
   const router = useRouter();
-  const { mutate } = useSWRConfig();
+  const invalidate = useInvalidate();
   const id = useId();
   const [comment, setComment] = useState("");
   const [fieldError, setFieldError] = useState<string | null>(null);
@@ -54,10 +55,10 @@ export function ReviewPanel({ revision, can, onChanged }: ReviewPanelProps) {
       return;
     }
     try {
-      await apiSend("POST", `/api/revisions/${revision.id}/${action}`, { comment: comment.trim() || null });
+      await transitionRevision(revision.id, action, comment.trim() || null);
       setComment("");
       onChanged();
-      await mutate((key) => typeof key === "string" && key.startsWith("/api/formulations"));
+      await invalidate("formulations");
       router.refresh();
     } catch (err) {
       if (err instanceof ApiRequestError && err.fields.comment) setFieldError(err.fields.comment);
