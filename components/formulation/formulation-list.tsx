@@ -5,19 +5,10 @@ import { nameLinkColumn, type ServerColumn } from "@/components/ui/data-table";
 import { FilterSelect, SearchBox } from "@/components/ui/list-filters";
 import { StateBadge } from "@/components/ui/status";
 import { ServerListTable } from "@/components/ui/server-list-table";
-import { useServerList } from "@/components/ui/use-server-list";
+import { useFormulations, type FormulationRow } from "@/lib/client/formulations";
 import { fmtDateTime } from "@/lib/format";
 import { STATE_LABELS, type RevisionState } from "@/lib/workflow";
 import { REVISION_STATES } from "@/lib/enums";
-
-export interface FormulationRow {
-  id: string;
-  name: string;
-  project: string | null;
-  latestState: RevisionState;
-  latestRevision: number;
-  updatedAt: string;
-}
 
 const columns: ServerColumn<FormulationRow>[] = [
   nameLinkColumn((row) => `/formulations/${row.id}`),
@@ -48,7 +39,7 @@ interface FormulationListProps {
 /** The team's formulations: search, filter by state, sort and page, all on the server. */
 export function FormulationList({ releasedOnly = false, caption = "Formulations" }: FormulationListProps) {
   const [state, setState] = useState<RevisionState | "">("");
-  const list = useServerList<FormulationRow>("/api/formulations", { state: state || undefined }, [{ id: "updatedAt", desc: true }]);
+  const list = useFormulations({ state: state || undefined });
 
   return (
     <div className="flex flex-col gap-3">

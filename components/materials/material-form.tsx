@@ -8,6 +8,7 @@ import { Button } from "@/components/ui/button";
 import { useConfirm } from "@/components/ui/confirm-dialog";
 import { Field, inputClass } from "@/components/ui/field";
 import { HazardCodes, SafetyNote } from "@/components/ui/hazards";
+import { OutcomeMessage, type Outcome } from "@/components/ui/outcome";
 import { MATERIAL_KINDS, materialSchema, type Material, type MaterialKind } from "@/lib/formulation";
 import { ApiRequestError, errorMessage } from "@/lib/client/fetcher";
 import { useInvalidate } from "@/lib/client/invalidate";
@@ -107,7 +108,7 @@ interface MaterialFormProps {
 export function MaterialForm({ material, canSave, canDelete }: MaterialFormProps) {
   const router = useRouter();
   const invalidate = useInvalidate();
-  const [message, setMessage] = useState<{ tone: "error" | "info"; text: string } | null>(null);
+  const [message, setMessage] = useState<Outcome>(null);
   const [confirmDialog, ask] = useConfirm();
   const form = useForm<FormValues>({ resolver, defaultValues: toForm(material ?? {}), mode: "onTouched" });
   const { register, handleSubmit, formState, control, setError } = form;
@@ -221,13 +222,7 @@ export function MaterialForm({ material, canSave, canDelete }: MaterialFormProps
           <HazardCodes codes={hazardList} />
         </div>
       </fieldset>
-      <div aria-live="assertive">
-        {message ? (
-          <p role={message.tone === "error" ? "alert" : "status"} className={`rounded border px-3 py-2 text-sm ${message.tone === "error" ? "border-fail/50 bg-fail-soft text-fail" : "border-clear/40 bg-clear-soft text-clear"}`}>
-            {message.text}
-          </p>
-        ) : null}
-      </div>
+      <OutcomeMessage outcome={message} />
       {canSave ? (
         <div className="flex flex-wrap gap-2">
           <Button type="submit" variant="primary" busy={formState.isSubmitting}>

@@ -2,6 +2,7 @@
 
 import { useRouter } from "next/navigation";
 import { useId, useState } from "react";
+import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { FieldError, inputClass } from "@/components/ui/field";
 import { ThermalBadge } from "@/components/ui/status";
@@ -32,16 +33,16 @@ export function ReviewPanel({ revision, can, onChanged }: ReviewPanelProps) {
 
   if (!can.review) {
     return (
-      <p className="rounded border border-rule bg-panel px-3 py-2 text-sm text-muted" data-testid="review-not-allowed">
+      <Alert tone="info" data-testid="review-not-allowed">
         Waiting for a reviewer. Only reviewers approve or send back revisions{own ? ", and never their own" : ""}.
-      </p>
+      </Alert>
     );
   }
   if (own) {
     return (
-      <p className="rounded border border-rule bg-panel px-3 py-2 text-sm text-muted" data-testid="review-own">
+      <Alert tone="info" data-testid="review-own">
         You wrote or changed this revision; another reviewer must decide on it.
-      </p>
+      </Alert>
     );
   }
 

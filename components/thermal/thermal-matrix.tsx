@@ -2,7 +2,10 @@ import { ThermalBadge, thermalCellClass } from "@/components/ui/status";
 import type { FormulationInput, FormulationResult } from "@/lib/formulation";
 import { fmtHours, fmtTemp } from "@/lib/format";
 import { LIMIT_WORDS } from "@/components/results/words";
+import { TableHead } from "@/components/ui/table-head";
 import { conversionChecks, thermalRows } from "./thermal-model";
+
+const MATRIX_HEAD = "border border-rule bg-paper px-2 py-1 text-left text-xs font-semibold text-muted";
 
 interface ThermalMatrixProps {
   input: FormulationInput;
@@ -43,21 +46,23 @@ export function ThermalMatrix({ input, result }: ThermalMatrixProps) {
         <div className="overflow-x-auto">
           <table className="w-full border-collapse text-sm">
             <caption className="sr-only">Thermal compatibility of each material with each process step</caption>
-            <thead>
-              <tr>
-                <th scope="col" className="border border-rule bg-paper px-2 py-1 text-left text-xs font-semibold text-muted">
-                  Material (hard limit)
-                </th>
-                {input.steps.map((s, i) => (
-                  <th key={i} scope="col" className="border border-rule bg-paper px-2 py-1 text-left text-xs font-semibold text-muted">
-                    {s.name}
-                    <span className="num block font-normal">
-                      {fmtTemp(s.temperatureC)} · {fmtHours(s.durationH)}
-                    </span>
-                  </th>
-                ))}
-              </tr>
-            </thead>
+            <TableHead
+              cellClassName={MATRIX_HEAD}
+              columns={[
+                "Material (hard limit)",
+                ...input.steps.map((s, i) => ({
+                  key: String(i),
+                  label: (
+                    <>
+                      {s.name}
+                      <span className="num block font-normal">
+                        {fmtTemp(s.temperatureC)} · {fmtHours(s.durationH)}
+                      </span>
+                    </>
+                  ),
+                })),
+              ]}
+            />
             <tbody>
               {rows.map((r) => (
                 <tr key={r.materialId}>

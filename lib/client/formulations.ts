@@ -4,6 +4,7 @@ import { useServerList } from "@/components/ui/use-server-list";
 import type {
   createFormulation as createFormulationQuery,
   diffFormulationRevisions,
+  getFormulation,
   getRevision,
   listFormulations,
   saveDraft as saveDraftQuery,
@@ -17,6 +18,8 @@ import type { ApiData } from "./json";
 
 /** One row of the formulation list, as GET /api/formulations sends it. */
 export type FormulationRow = ApiData<typeof listFormulations>["rows"][number];
+/** A revision in the list of a formulation's revisions. */
+export type FormulationRevision = ApiData<typeof getFormulation>["revisions"][number];
 /** A revision with its reviews, as GET /api/revisions/:id sends it. */
 export type Revision = ApiData<typeof getRevision>;
 /** What changed between two revisions of a formulation. */
