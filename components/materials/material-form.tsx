@@ -3,7 +3,7 @@
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { useForm, useWatch, type FieldErrors, type Resolver } from "react-hook-form";
-import { KIND_WORDS } from "@/components/results/words";
+import { KIND_LABELS } from "@/components/results/words";
 import { Button } from "@/components/ui/button";
 import { useConfirm } from "@/components/ui/confirm-dialog";
 import { Field, inputClass } from "@/components/ui/field";
@@ -181,7 +181,7 @@ export function MaterialForm({ material, canSave, canDelete }: MaterialFormProps
           <select {...text("kind")} disabled={!canSave}>
             {MATERIAL_KINDS.map((k) => (
               <option key={k} value={k}>
-                {KIND_WORDS[k]}
+                {KIND_LABELS[k]}
               </option>
             ))}
           </select>

@@ -1,7 +1,7 @@
 "use client";
 
 import { useState } from "react";
-import { KIND_WORDS } from "@/components/results/words";
+import { KIND_LABELS } from "@/components/results/words";
 import { nameLinkColumn, type ServerColumn } from "@/components/ui/data-table";
 import { HazardCodes, SAFETY_REMINDER } from "@/components/ui/hazards";
 import { FilterSelect, SearchBox } from "@/components/ui/list-filters";
@@ -32,7 +32,7 @@ function keyProperty(m: LibraryMaterial): string {
 
 const columns: ServerColumn<LibraryMaterial>[] = [
   nameLinkColumn((row) => `/materials/${row.id}`),
-  { id: "kind", accessorKey: "kind", header: "Kind", cell: ({ row }) => KIND_WORDS[row.original.kind] },
+  { id: "kind", accessorKey: "kind", header: "Kind", cell: ({ row }) => KIND_LABELS[row.original.kind] },
   { id: "formula", accessorKey: "formula", header: "Formula", enableSorting: false, cell: ({ row }) => <span className="font-mono text-xs">{row.original.formula ?? "–"}</span> },
   {
     id: "molarMass",
@@ -76,7 +76,7 @@ export function MaterialsTable() {
           }}
           anyLabel="Any kind"
           options={MATERIAL_KINDS}
-          words={KIND_WORDS}
+          words={KIND_LABELS}
         />
       </div>
       <ServerListTable

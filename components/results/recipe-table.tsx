@@ -2,7 +2,7 @@ import { HazardCodes } from "@/components/ui/hazards";
 import type { FormulationInput, FormulationResult } from "@/lib/formulation";
 import { fmtMass, fmtMol, fmtVolume } from "@/lib/format";
 import { TableHead, TD, TDN } from "@/components/ui/table-head";
-import { materialsById, ROLE_WORDS } from "./words";
+import { materialsById, LINE_ROLE_LABELS } from "./words";
 
 interface RecipeTableProps {
   input: FormulationInput;
@@ -36,7 +36,7 @@ export function RecipeTable({ input, result, resolution }: RecipeTableProps) {
                   ) : null}
                   {line.carriedWaterMol ? <span className="block text-xs text-muted">brings {fmtMol(line.carriedWaterMol)} water</span> : null}
                 </td>
-                <td className={`${TD} text-muted`}>{ROLE_WORDS[line.role]}</td>
+                <td className={`${TD} text-muted`}>{LINE_ROLE_LABELS[line.role]}</td>
                 <td className={`${TDN} font-medium`} data-testid={`mass-${i}`}>
                   {fmtMass(line.massGrams, resolution)}
                 </td>

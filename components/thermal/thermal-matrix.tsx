@@ -1,7 +1,7 @@
 import { ThermalBadge, thermalCellClass } from "@/components/ui/status";
 import type { FormulationInput, FormulationResult } from "@/lib/formulation";
 import { fmtHours, fmtTemp } from "@/lib/format";
-import { LIMIT_WORDS } from "@/components/results/words";
+import { LIMIT_LABELS } from "@/components/results/words";
 import { TableHead } from "@/components/ui/table-head";
 import { conversionChecks, thermalRows } from "./thermal-model";
 
@@ -33,7 +33,7 @@ export function ThermalMatrix({ input, result }: ThermalMatrixProps) {
           {binding && t.binding ? (
             <span className="text-muted">
               {" "}
-              — bound by {binding.name}, {LIMIT_WORDS[t.binding.limit]} less the {fmtTemp(input.marginC ?? 20)} margin
+              — bound by {binding.name}, {LIMIT_LABELS[t.binding.limit]} less the {fmtTemp(input.marginC ?? 20)} margin
             </span>
           ) : null}
         </span>
@@ -70,7 +70,7 @@ export function ThermalMatrix({ input, result }: ThermalMatrixProps) {
                     {r.name}
                     <span className="block text-xs font-normal text-muted">
                       {r.role === "substrate" ? "substrate" : "organic phase"}
-                      {r.hard ? ` · ${LIMIT_WORDS[r.hard.limit as keyof typeof LIMIT_WORDS]} ${fmtTemp(r.hard.limitC)}` : " · no hard limit"}
+                      {r.hard ? ` · ${LIMIT_LABELS[r.hard.limit as keyof typeof LIMIT_LABELS]} ${fmtTemp(r.hard.limitC)}` : " · no hard limit"}
                     </span>
                   </th>
                   {r.cells.map((c, i) => (
@@ -79,7 +79,7 @@ export function ThermalMatrix({ input, result }: ThermalMatrixProps) {
                         <>
                           <ThermalBadge status={c.status} />
                           <span className="num block text-xs text-ink">
-                            vs {LIMIT_WORDS[c.limit]} {fmtTemp(c.limitC)}
+                            vs {LIMIT_LABELS[c.limit]} {fmtTemp(c.limitC)}
                           </span>
                         </>
                       ) : (
