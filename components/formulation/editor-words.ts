@@ -39,23 +39,21 @@ const FIELD_LABELS: Record<string, string> = {
  *
  * @example
  * ```ts
- * fieldLabel("components.0.materialId"); // "Component 1"
+ * fieldLabel("components.0.weightPercent"); // "Component 1"
  * fieldLabel("steps.1.temperatureC"); // "Step 2, temperature"
  * ```
  */
 export function fieldLabel(field: string): string | null {
   const parts = field.split(".");
   const row = Number(parts[1]) + 1;
-  if (parts[0] === "components" && parts.length === 3) {
-    return parts[2] === "weightPercent" ? `Component ${row}, weight fraction` : `Component ${row}`;
-  }
+  if (parts[0] === "components" && parts.length === 3) return `Component ${row}`;
   if (parts[0] === "steps" && parts.length === 3) return `Step ${row}, ${STEP_LABELS[parts[2] ?? ""] ?? "value"}`;
   if (parts[0] === "basis") return BASIS_LABELS[parts[1] ?? ""] ?? "Basis";
   return FIELD_LABELS[field] ?? null;
 }
 
 /** A dotted path or a camelCase word: an engine-internal name a person should never read. */
-const INTERNAL_NAME = /\b[a-z]+(?:[A-Z][a-z]+)+\b|\b\w+(?:\.\w+)+\b/;
+const INTERNAL_NAME = /\b[a-z]{2,}(?:[A-Z][a-z]*)+\b|\b[A-Za-z]\w*(?:\.[A-Za-z]\w*)+\b/;
 
 /**
  * The message to show beside a form field: the row's words, then the
