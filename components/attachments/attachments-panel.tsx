@@ -17,7 +17,7 @@ import { fmtDateTime } from "@/lib/format";
 /** Largest PDF accepted, bytes (the server checks the same: lib/spreadsheet/pdf.ts). */
 const MAX_BYTES = 10 * 1024 * 1024;
 
-export const ATTACHMENT_KIND_LABELS: Record<AttachmentKind, string> = {
+const ATTACHMENT_KIND_LABELS: Record<AttachmentKind, string> = {
   sds: "Safety data sheet",
   coa: "Certificate of analysis",
   other: "Other document",

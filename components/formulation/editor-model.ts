@@ -138,7 +138,7 @@ export function valuesFromInput(input: FormulationInput, meta: { name: string; p
 }
 
 /** Material ids the values refer to, in a stable order. */
-export function referencedIds(v: EditorValues): string[] {
+function referencedIds(v: EditorValues): string[] {
   const ids = [
     ...v.components.map((c) => c.materialId),
     v.water.materialId,

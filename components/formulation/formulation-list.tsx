@@ -32,12 +32,10 @@ const columns: ServerColumn<FormulationRow>[] = [
 interface FormulationListProps {
   /** Production sees released formulations only (the API filters). */
   releasedOnly?: boolean;
-  /** Where a row's name links (production: the batch sheet list). */
-  caption?: string;
 }
 
 /** The team's formulations: search, filter by state, sort and page, all on the server. */
-export function FormulationList({ releasedOnly = false, caption = "Formulations" }: FormulationListProps) {
+export function FormulationList({ releasedOnly = false }: FormulationListProps) {
   const [state, setState] = useState<RevisionState | "">("");
   const list = useFormulations({ state: state || undefined });
 
@@ -62,7 +60,7 @@ export function FormulationList({ releasedOnly = false, caption = "Formulations"
       </div>
       <ServerListTable
         list={list}
-        caption={caption}
+        caption="Formulations"
         columns={columns}
         empty={list.q || state ? "No formulation matches." : "No formulations yet."}
       />

@@ -19,7 +19,7 @@ export interface LiveResult {
 }
 
 /** Places an engine message at its form field, worded for the screen. */
-export function placeMessage(messages: Record<string, string>, path: string, message: string, values: EditorValues, input: FormulationInput): string {
+function placeMessage(messages: Record<string, string>, path: string, message: string, values: EditorValues, input: FormulationInput): string {
   const { field, prefix } = formFieldFor(path, values, input);
   const text = prefix ? `${prefix}${message}` : fieldMessage(field, message);
   messages[field] ??= text;

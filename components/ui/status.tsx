@@ -31,7 +31,7 @@ export function StateBadge({ state }: StateBadgeProps) {
   );
 }
 
-export const THERMAL_LABELS: Record<ThermalStatus, string> = {
+const THERMAL_LABELS: Record<ThermalStatus, string> = {
   clear: "Clear",
   caution: "Caution",
   fail: "Fails",
