@@ -1,4 +1,4 @@
-import Link from "next/link";
+import { TextLink } from "@/components/ui/text-link";
 import { StateBadge } from "@/components/ui/status";
 import { TableHead, TD } from "@/components/ui/table-head";
 import type { FormulationRevision } from "@/lib/client/formulations";
@@ -30,23 +30,23 @@ export function RevisionsTable({ rows, canEdit }: RevisionsTableProps) {
               <td className={`${TD} num whitespace-nowrap text-muted`}>{fmtDateTime(r.createdAt)}</td>
               <td className={`${TD} num whitespace-nowrap text-muted`}>{fmtDateTime(r.updatedAt)}</td>
               <td className={`${TD} whitespace-nowrap`}>
-                <Link href={`/revisions/${r.id}`} className="text-accent underline underline-offset-2 decoration-rule hover:decoration-accent">
+                <TextLink href={`/revisions/${r.id}`}>
                   Open revision {r.number}
-                </Link>
+                </TextLink>
                 {r.state === "draft" && canEdit ? (
                   <>
                     {" · "}
-                    <Link href={`/revisions/${r.id}/edit`} className="text-accent underline underline-offset-2 decoration-rule hover:decoration-accent">
+                    <TextLink href={`/revisions/${r.id}/edit`}>
                       Edit
-                    </Link>
+                    </TextLink>
                   </>
                 ) : null}
                 {r.state === "released" ? (
                   <>
                     {" · "}
-                    <Link href={`/revisions/${r.id}/batch-sheet`} className="text-accent underline underline-offset-2 decoration-rule hover:decoration-accent">
+                    <TextLink href={`/revisions/${r.id}/batch-sheet`}>
                       Batch sheet
-                    </Link>
+                    </TextLink>
                   </>
                 ) : null}
               </td>

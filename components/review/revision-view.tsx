@@ -1,6 +1,6 @@
 "use client";
 
-import Link from "next/link";
+import { TextLink } from "@/components/ui/text-link";
 import { DownloadLinks, revisionDownloads } from "@/components/exports/download-links";
 import { ResultsView } from "@/components/results/results-view";
 import { ErrorPanel } from "@/components/ui/error-panel";
@@ -31,9 +31,9 @@ export function RevisionView({ initial, can }: RevisionViewProps) {
       <div className="flex flex-wrap items-start justify-between gap-3">
         <div className="min-w-0">
           <p className="text-sm text-muted">
-            <Link href={`/formulations/${rev.formulationId}`} className="text-accent underline underline-offset-2 decoration-rule hover:decoration-accent">
+            <TextLink href={`/formulations/${rev.formulationId}`}>
               {rev.formulationName}
-            </Link>{" "}
+            </TextLink>{" "}
             · {rev.project ?? "No project"}
           </p>
           <h1 className="flex flex-wrap items-center gap-2 text-xl font-semibold">
