@@ -55,7 +55,7 @@ export const editorSchema = z.object({
   }),
   components: z.array(
     z.object({
-      materialId: z.string().min(1, "Pick a material"),
+      materialId: z.string().min(1, "choose a material"),
       weightPercent: num("weight fraction"),
     }),
   ),

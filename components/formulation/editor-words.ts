@@ -71,7 +71,7 @@ export function fieldMessage(field: string, message: string): string {
   else if (field.endsWith(".weightPercent") && /must be 0 or between/.test(message)) text = "enter a weight fraction from 0 to 100 %";
   else if (INTERNAL_NAME.test(text) && !/^\S+ \(library record/.test(text)) text = "check this value";
   if (!label || field === "components" || text.startsWith(`${label}:`)) return text;
-  return `${label}: ${text}`;
+  return `${label}: ${text.charAt(0).toLowerCase()}${text.slice(1)}`;
 }
 
 /**

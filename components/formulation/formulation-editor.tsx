@@ -16,6 +16,7 @@ import { BasisFieldset } from "./basis-fieldset";
 import { ComponentsFieldset } from "./components-fieldset";
 import { EditorContext, type EditorContextValue } from "./editor-context";
 import { blankValues, editorSchema, engineMaterial, valuesFromInput, type EditorValues } from "./editor-model";
+import { fieldMessage } from "./editor-words";
 import { FirstSteps } from "./first-steps";
 import { MetaFields } from "./meta-fields";
 import { ReagentsFieldset } from "./reagents-fieldset";
@@ -66,7 +67,7 @@ export function FormulationEditor({ library, revision, canSubmit }: FormulationE
       const own = field.split(".").reduce<unknown>((o, k) => (o as Record<string, unknown> | undefined)?.[k], formState.errors) as
         | { message?: string }
         | undefined;
-      return own?.message ?? serverMessages[field] ?? live.messages[field];
+      return (own?.message ? fieldMessage(field, own.message) : undefined) ?? serverMessages[field] ?? live.messages[field];
     },
     [formState.errors, live.messages, serverMessages],
   );

@@ -32,6 +32,12 @@ describe("editor words", () => {
     );
   });
 
+  it("returns the form's own messages with their row, in lower case after the row", () => {
+    expect(fieldMessage("components.1.materialId", "choose a material")).toBe("Component 2: choose a material");
+    expect(fieldMessage("steps.0.name", "Name the step")).toBe("Step 1, name: name the step");
+    expect(fieldMessage("name", "Name the formulation")).toBe("Name the formulation");
+  });
+
   describe("edge cases", () => {
     it("returns a plain instruction instead of a message that names an internal field", () => {
       expect(fieldMessage("basis.grams", "basis.grams must be set")).toBe("Dry solid mass: check this value");
