@@ -1,36 +1,27 @@
 "use client";
 
 import { useId, useRef, useState, type FormEvent } from "react";
-import useSWR from "swr";
 import { Button } from "@/components/ui/button";
 import { useConfirm } from "@/components/ui/confirm-dialog";
 import { ErrorPanel } from "@/components/ui/error-panel";
 import { Field, inputClass } from "@/components/ui/field";
 import { Panel } from "@/components/ui/panel";
 import { TableSkeleton } from "@/components/ui/skeleton";
-import { fmtBytes, uploadWithProgress, type UploadProgress } from "@/components/ui/upload-request";
-import { apiSend, errorMessage, fetcher } from "@/lib/client/fetcher";
+import { OutcomeMessage, type Outcome } from "@/components/ui/outcome";
+import { fmtBytes, type UploadProgress } from "@/components/ui/upload-request";
+import { deleteAttachment, uploadAttachment, useAttachments, type Attachment, type AttachmentKind } from "@/lib/client/attachments";
+import { attachmentDownloadUrl } from "@/lib/client/downloads";
+import { errorMessage } from "@/lib/client/fetcher";
 import { fmtDateTime } from "@/lib/format";
 
-/** Largest PDF accepted, bytes (the server checks the same: lib/spreadsheet/pdf.ts). */
+/** Largest PDF accepted, bytes (the server checks the same: lib/uploads/pdf.ts). */
 const MAX_BYTES = 10 * 1024 * 1024;
 
-type AttachmentKind = "sds" | "coa" | "other";
-
-export const ATTACHMENT_KIND_WORDS: Record<AttachmentKind, string> = {
+const ATTACHMENT_KIND_LABELS: Record<AttachmentKind, string> = {
   sds: "Safety data sheet",
   coa: "Certificate of analysis",
   other: "Other document",
 };
-
-interface AttachmentRow {
-  id: string;
-  kind: AttachmentKind;
-  fileName: string;
-  sizeBytes: number;
-  uploadedByName: string | null;
-  createdAt: string;
-}
 
 interface AttachmentsPanelProps {
   ownerType: "material" | "batch";
@@ -46,14 +37,14 @@ interface AttachmentsPanelProps {
 
 /** PDF documents kept with a material or a batch record: list, open, add, remove. */
 export function AttachmentsPanel({ ownerType, ownerId, canChange, readOnlyReason, defaultKind = "sds", className = "" }: AttachmentsPanelProps) {
-  const key = `/api/attachments?ownerType=${ownerType}&ownerId=${ownerId}`;
-  const { data, error, isLoading, mutate } = useSWR<{ rows: AttachmentRow[] }>(key, fetcher);
+  const owner = { ownerType, ownerId };
+  const { data, error, isLoading, mutate } = useAttachments(owner);
   const [kind, setKind] = useState<AttachmentKind>(defaultKind);
   const [file, setFile] = useState<File | null>(null);
   const [fileError, setFileError] = useState<string | null>(null);
   const [confirmDialog, ask] = useConfirm();
   const [progress, setProgress] = useState<UploadProgress | null>(null);
-  const [message, setMessage] = useState<{ tone: "error" | "info"; text: string } | null>(null);
+  const [message, setMessage] = useState<Outcome>(null);
   const fileRef = useRef<HTMLInputElement | null>(null);
   const base = useId();
   const fileId = `${base}-file`;
@@ -75,17 +66,12 @@ export function AttachmentsPanel({ ownerType, ownerId, canChange, readOnlyReason
       return;
     }
     if (fileError) return;
-    const form = new FormData();
-    form.set("ownerType", ownerType);
-    form.set("ownerId", ownerId);
-    form.set("kind", kind);
-    form.set("file", file);
     setProgress({ loaded: 0, total: file.size });
     setMessage(null);
     try {
-      await uploadWithProgress("/api/attachments", form, setProgress);
+      await uploadAttachment(owner, kind, file, setProgress);
       await mutate();
-      setMessage({ tone: "info", text: `${ATTACHMENT_KIND_WORDS[kind]} “${file.name}” added.` });
+      setMessage({ tone: "info", text: `${ATTACHMENT_KIND_LABELS[kind]} “${file.name}” added.` });
       setFile(null);
       if (fileRef.current) fileRef.current.value = "";
     } catch (err) {
@@ -95,11 +81,11 @@ export function AttachmentsPanel({ ownerType, ownerId, canChange, readOnlyReason
     }
   }
 
-  async function remove(row: AttachmentRow) {
+  async function remove(row: Attachment) {
     const confirmed = await ask({ title: `Remove “${row.fileName}”?`, message: "The file is deleted from storage; the history keeps a note that it was removed.", confirmLabel: "Remove the file" });
     if (!confirmed) return;
     try {
-      await apiSend("DELETE", `/api/attachments/${row.id}`);
+      await deleteAttachment(row.id);
       await mutate();
       setMessage({ tone: "info", text: `“${row.fileName}” removed.` });
     } catch (err) {
@@ -122,12 +108,12 @@ export function AttachmentsPanel({ ownerType, ownerId, canChange, readOnlyReason
                 <span className="min-w-0">
                   <span className="block font-medium break-all">{row.fileName}</span>
                   <span className="num block text-xs text-muted">
-                    {ATTACHMENT_KIND_WORDS[row.kind]} · {fmtBytes(row.sizeBytes)} · {row.uploadedByName ?? "someone"} · {fmtDateTime(row.createdAt)}
+                    {ATTACHMENT_KIND_LABELS[row.kind]} · {fmtBytes(row.sizeBytes)} · {row.uploadedByName ?? "someone"} · {fmtDateTime(row.createdAt)}
                   </span>
                 </span>
                 <span className="flex gap-2">
                   <a
-                    href={`/api/attachments/${row.id}?download=1`}
+                    href={attachmentDownloadUrl(row.id)}
                     target="_blank"
                     rel="noopener"
                     className="rounded border border-rule bg-panel px-3 py-1 text-sm font-medium"
@@ -149,9 +135,9 @@ export function AttachmentsPanel({ ownerType, ownerId, canChange, readOnlyReason
           <form onSubmit={upload} className="grid gap-2 sm:grid-cols-[12rem_minmax(0,1fr)_auto] sm:items-start" aria-label="Add a document">
             <Field id={kindId} label="Type">
               <select id={kindId} className={inputClass()} value={kind} onChange={(e) => setKind(e.target.value as AttachmentKind)}>
-                {(Object.keys(ATTACHMENT_KIND_WORDS) as AttachmentKind[]).map((k) => (
+                {(Object.keys(ATTACHMENT_KIND_LABELS) as AttachmentKind[]).map((k) => (
                   <option key={k} value={k}>
-                    {ATTACHMENT_KIND_WORDS[k]}
+                    {ATTACHMENT_KIND_LABELS[k]}
                   </option>
                 ))}
               </select>
@@ -185,13 +171,7 @@ export function AttachmentsPanel({ ownerType, ownerId, canChange, readOnlyReason
         ) : readOnlyReason ? (
           <p className="text-sm text-muted">{readOnlyReason}</p>
         ) : null}
-        <div aria-live="polite">
-          {message ? (
-            <p role={message.tone === "error" ? "alert" : "status"} className={`text-sm ${message.tone === "error" ? "text-fail" : "text-clear"}`}>
-              {message.text}
-            </p>
-          ) : null}
-        </div>
+        <OutcomeMessage outcome={message} />
       </div>
     </Panel>
   );

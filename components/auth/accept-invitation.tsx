@@ -13,13 +13,8 @@ interface AcceptInvitationProps {
   linkError?: string | null;
 }
 
-interface InvitationView {
-  organizationName?: string;
-  role?: string;
-  inviterEmail?: string;
-  email?: string;
-  status?: string;
-}
+/** An invitation as the sign-in library's client reads it. */
+type InvitationView = NonNullable<Awaited<ReturnType<typeof authClient.organization.getInvitation>>["data"]>;
 
 type Load =
   | { state: "loading" }

@@ -1,4 +1,5 @@
 import type { ReactNode } from "react";
+import { Alert } from "@/components/ui/alert";
 
 interface AuthCardProps {
   title: string;
@@ -27,16 +28,6 @@ interface FormMessageProps {
 /** A form-level message in a live region. */
 export function FormMessage({ tone, message }: FormMessageProps) {
   return (
-    <div aria-live="assertive" role={tone === "error" && message ? "alert" : undefined}>
-      {message ? (
-        <p
-          className={`rounded border px-2.5 py-1.5 text-sm ${
-            tone === "error" ? "border-fail/50 bg-fail-soft text-fail" : "border-clear/40 bg-clear-soft text-clear"
-          }`}
-        >
-          {message}
-        </p>
-      ) : null}
-    </div>
+    <div aria-live="assertive">{message ? <Alert tone={tone === "error" ? "fail" : "clear"}>{message}</Alert> : null}</div>
   );
 }

@@ -8,7 +8,8 @@ import { z } from "zod";
 import { Button } from "@/components/ui/button";
 import { Field, inputClass } from "@/components/ui/field";
 import { authClient } from "@/lib/auth-client";
-import { ApiRequestError, apiSend, errorMessage } from "@/lib/client/fetcher";
+import { ApiRequestError, errorMessage } from "@/lib/client/fetcher";
+import { createTeam } from "@/lib/client/team";
 import { AuthCard, FormMessage } from "./auth-card";
 
 const schema = z.object({ name: z.string().trim().min(1, "Name your team").max(120, "At most 120 characters") });
@@ -31,7 +32,7 @@ export function CreateTeamForm({ userName }: CreateTeamFormProps) {
   const onSubmit = handleSubmit(async (values) => {
     setError(null);
     try {
-      await apiSend("POST", "/api/teams", { name: values.name });
+      await createTeam(values.name);
       router.replace("/home");
       router.refresh();
     } catch (err) {

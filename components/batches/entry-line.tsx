@@ -1,6 +1,6 @@
 "use client";
 
-import { ROLE_WORDS } from "@/components/results/words";
+import { LINE_ROLE_LABELS } from "@/components/results/words";
 import { FieldError, inputClass } from "@/components/ui/field";
 import type { Batch, BatchLine } from "@/lib/client/batches";
 import { fmtDateTime, fmtMass, fmtVolume } from "@/lib/format";
@@ -49,7 +49,7 @@ export function EntryLine({ index: i, line, draft, problem, saving, batch, entry
           {name}
         </p>
         <p className="num text-xs text-muted">
-          {line.role ? ROLE_WORDS[line.role] : "Material"} · target <strong className="text-ink">{fmtMass(line.targetGrams, res)}</strong>
+          {line.role ? LINE_ROLE_LABELS[line.role] : "Material"} · target <strong className="text-ink">{fmtMass(line.targetGrams, res)}</strong>
           {line.targetMl !== undefined ? ` (≈ ${fmtVolume(line.targetMl)})` : ""}
         </p>
       </div>

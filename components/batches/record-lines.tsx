@@ -1,4 +1,4 @@
-import { ROLE_WORDS } from "@/components/results/words";
+import { LINE_ROLE_LABELS } from "@/components/results/words";
 import { TableHead, TD, TDN } from "@/components/ui/table-head";
 import type { Batch } from "@/lib/client/batches";
 import { fmtDateTime, fmtMass } from "@/lib/format";
@@ -35,7 +35,7 @@ export function RecordLines({ batch }: RecordLinesProps) {
               <td className={`${TD} num`}>{l.index + 1}</td>
               <td className={TD}>
                 <span className="font-medium">{lineName(l)}</span>
-                <span className="block text-xs text-muted">{l.role ? ROLE_WORDS[l.role] : ""}</span>
+                <span className="block text-xs text-muted">{l.role ? LINE_ROLE_LABELS[l.role] : ""}</span>
               </td>
               <td className={TDN}>{fmtMass(l.targetGrams, res)}</td>
               <td className={`${TDN} font-semibold`}>{fmtMass(l.actualGrams, res)}</td>

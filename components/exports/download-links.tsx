@@ -1,4 +1,5 @@
 import { buttonClass } from "@/components/ui/button";
+import { materialsExportUrl, revisionExportUrl } from "@/lib/client/downloads";
 
 export interface DownloadLink {
   href: string;
@@ -32,7 +33,15 @@ export function DownloadLinks({ links, title = "Download", className = "" }: Dow
 /** The revision's workbook and its batch sheet as CSV. */
 export function revisionDownloads(revisionId: string): DownloadLink[] {
   return [
-    { href: `/api/revisions/${revisionId}/export?format=xlsx`, label: "Workbook (.xlsx)", description: "Download the revision as a workbook (.xlsx)" },
-    { href: `/api/revisions/${revisionId}/export?format=csv`, label: "Batch sheet (CSV)", description: "Download the batch sheet as CSV" },
+    { href: revisionExportUrl(revisionId, "xlsx"), label: "Workbook (.xlsx)", description: "Download the revision as a workbook (.xlsx)" },
+    { href: revisionExportUrl(revisionId, "csv"), label: "Batch sheet (CSV)", description: "Download the batch sheet as CSV" },
+  ];
+}
+
+/** The whole materials library as a workbook and as CSV. */
+export function libraryDownloads(): DownloadLink[] {
+  return [
+    { href: materialsExportUrl("xlsx"), label: "Workbook (.xlsx)", description: "Download the whole materials library as a workbook" },
+    { href: materialsExportUrl("csv"), label: "CSV", description: "Download the whole materials library as CSV" },
   ];
 }

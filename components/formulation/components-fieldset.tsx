@@ -1,7 +1,7 @@
 "use client";
 
 import { useFieldArray, useWatch } from "react-hook-form";
-import { KIND_WORDS } from "@/components/results/words";
+import { KIND_LABELS } from "@/components/results/words";
 import { Button } from "@/components/ui/button";
 import { FieldError, inputClass } from "@/components/ui/field";
 import { HazardCodes } from "@/components/ui/hazards";
@@ -88,7 +88,7 @@ export function ComponentsFieldset() {
               <FieldError id={`${idFor(weightField)}-error`} message={wMsg} />
               {picked ? (
                 <p className="mt-1 flex flex-wrap items-center gap-2 text-xs text-muted">
-                  <span>{KIND_WORDS[picked.kind]}</span>
+                  <span>{KIND_LABELS[picked.kind]}</span>
                   {picked.precursor ? <span>residue {picked.precursor.residueFormula}</span> : null}
                   <HazardCodes codes={picked.hazards} />
                 </p>

@@ -4,6 +4,7 @@
  * shrinkage) are fractions in the engine; conversion is exact to 12 digits.
  */
 import { z } from "zod";
+import { ALL_FIELDS } from "@/components/materials/material-fields";
 import type { FormulationInput, Material, MaterialKind } from "@/lib/formulation";
 
 export type BasisType = "solidMass" | "solidsContent" | "gelBody";
@@ -54,7 +55,7 @@ export const editorSchema = z.object({
   }),
   components: z.array(
     z.object({
-      materialId: z.string().min(1, "Pick a material"),
+      materialId: z.string().min(1, "choose a material"),
       weightPercent: num("weight fraction"),
     }),
   ),
@@ -137,7 +138,7 @@ export function valuesFromInput(input: FormulationInput, meta: { name: string; p
 }
 
 /** Material ids the values refer to, in a stable order. */
-export function referencedIds(v: EditorValues): string[] {
+function referencedIds(v: EditorValues): string[] {
   const ids = [
     ...v.components.map((c) => c.materialId),
     v.water.materialId,
@@ -183,6 +184,14 @@ export function inputFromValues(v: EditorValues, records: (id: string) => Materi
   return input;
 }
 
+/** The material form's words for a property path ("precursor.leavingAlcohol.name" → "Alcohol released"). */
+function propertyLabel(path: string): string {
+  const exact = ALL_FIELDS.find((f) => f.path === path || path.startsWith(`${f.path}.`));
+  if (exact) return exact.label.toLowerCase();
+  const within = ALL_FIELDS.find((f) => f.path.startsWith(`${path}.`));
+  return within ? within.label.toLowerCase() : "a property";
+}
+
 /** Where an engine or server message about `path` (of FormulationInput) belongs in the form. */
 export function formFieldFor(path: string, v: EditorValues, input: FormulationInput): { field: string; prefix?: string } {
   const parts = path.split(".");
@@ -209,7 +218,8 @@ export function formFieldFor(path: string, v: EditorValues, input: FormulationIn
   if (head === "materials" && parts[1] !== undefined) {
     const material = input.materials[Number(parts[1])];
     if (material) {
-      const prefix = `${material.name} (library record${parts.length > 2 ? `, ${parts.slice(2).join(".")}` : ""}): `;
+      const property = parts.length > 2 ? propertyLabel(parts.slice(2).join(".")) : null;
+      const prefix = `${material.name} (library record${property ? `, ${property}` : ""}): `;
       const ci = v.components.findIndex((c) => c.materialId === material.id);
       if (ci >= 0) return { field: `components.${ci}.materialId`, prefix };
       if (v.water.materialId === material.id) return { field: "water.materialId", prefix };

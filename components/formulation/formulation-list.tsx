@@ -5,19 +5,10 @@ import { nameLinkColumn, type ServerColumn } from "@/components/ui/data-table";
 import { FilterSelect, SearchBox } from "@/components/ui/list-filters";
 import { StateBadge } from "@/components/ui/status";
 import { ServerListTable } from "@/components/ui/server-list-table";
-import { useServerList } from "@/components/ui/use-server-list";
+import { useFormulations, type FormulationRow } from "@/lib/client/formulations";
 import { fmtDateTime } from "@/lib/format";
 import { STATE_LABELS, type RevisionState } from "@/lib/workflow";
 import { REVISION_STATES } from "@/lib/enums";
-
-export interface FormulationRow {
-  id: string;
-  name: string;
-  project: string | null;
-  latestState: RevisionState;
-  latestRevision: number;
-  updatedAt: string;
-}
 
 const columns: ServerColumn<FormulationRow>[] = [
   nameLinkColumn((row) => `/formulations/${row.id}`),
@@ -41,14 +32,12 @@ const columns: ServerColumn<FormulationRow>[] = [
 interface FormulationListProps {
   /** Production sees released formulations only (the API filters). */
   releasedOnly?: boolean;
-  /** Where a row's name links (production: the batch sheet list). */
-  caption?: string;
 }
 
 /** The team's formulations: search, filter by state, sort and page, all on the server. */
-export function FormulationList({ releasedOnly = false, caption = "Formulations" }: FormulationListProps) {
+export function FormulationList({ releasedOnly = false }: FormulationListProps) {
   const [state, setState] = useState<RevisionState | "">("");
-  const list = useServerList<FormulationRow>("/api/formulations", { state: state || undefined }, [{ id: "updatedAt", desc: true }]);
+  const list = useFormulations({ state: state || undefined });
 
   return (
     <div className="flex flex-col gap-3">
@@ -71,7 +60,7 @@ export function FormulationList({ releasedOnly = false, caption = "Formulations"
       </div>
       <ServerListTable
         list={list}
-        caption={caption}
+        caption="Formulations"
         columns={columns}
         empty={list.q || state ? "No formulation matches." : "No formulations yet."}
       />

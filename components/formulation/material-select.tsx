@@ -2,7 +2,7 @@
 
 import { forwardRef, type SelectHTMLAttributes } from "react";
 import type { Material, MaterialKind } from "@/lib/formulation";
-import { KIND_WORDS } from "@/components/results/words";
+import { KIND_LABELS } from "@/components/results/words";
 import { inputClass } from "@/components/ui/field";
 
 interface MaterialSelectProps extends SelectHTMLAttributes<HTMLSelectElement> {
@@ -25,7 +25,7 @@ export const MaterialSelect = forwardRef<HTMLSelectElement, MaterialSelectProps>
         const list = options.filter((m) => m.kind === kind);
         if (list.length === 0) return null;
         return kinds.length > 1 ? (
-          <optgroup key={kind} label={KIND_WORDS[kind]}>
+          <optgroup key={kind} label={KIND_LABELS[kind]}>
             {list.map((m) => (
               <option key={m.id} value={m.id}>
                 {m.name}

@@ -1,16 +1,12 @@
 /** Plain-word descriptions of audit events, shared by the home page, activity and history. */
+import type { AuditEvent } from "@/lib/client/audit";
+import type { AuditAction } from "@/lib/enums";
 
-export interface AuditEventView {
-  id?: string | number;
-  action: string;
-  entityType: string;
-  entityId: string;
-  summary: unknown;
-  createdAt: string | Date;
-  actorName: string | null;
-}
+/** An audit event as a server page reads it (dates as Date) or as the API sends it (dates as text). */
+export type AuditEventView = Omit<AuditEvent, "createdAt"> & { createdAt: string | Date };
 
-const ACTION_WORDS: Record<string, string> = {
+/** Words for every action of the audit trail: a new action without words fails type-checking. */
+export const ACTION_LABELS: Record<AuditAction, string> = {
   "formulation.created": "created the formulation",
   "revision.saved": "saved a draft",
   "revision.seeded": "recorded the revision (demo data)",
@@ -32,6 +28,8 @@ const ACTION_WORDS: Record<string, string> = {
   "batch.notes_changed": "changed a batch's notes",
   "batch.closed": "closed a batch",
   "batch.settings_changed": "changed the batch tolerance settings",
+  "attachment.added": "added a document",
+  "attachment.removed": "removed a document",
 };
 
 /** A value of a before/after pair in words: empty text and null read "none". */
@@ -44,7 +42,7 @@ function shown(value: unknown): string {
 
 /** "approved", "saved a draft" … (unknown actions: the code with dots as spaces). */
 export function actionWords(action: string): string {
-  return ACTION_WORDS[action] ?? action.replace(/[._]/g, " ");
+  return (ACTION_LABELS as Record<string, string>)[action] ?? action.replace(/[._]/g, " ");
 }
 
 type Summary = { before?: Record<string, unknown>; after?: Record<string, unknown>; note?: string } | null;

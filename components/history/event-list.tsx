@@ -1,4 +1,4 @@
-import Link from "next/link";
+import { TextLink } from "@/components/ui/text-link";
 import { fmtDateTime } from "@/lib/format";
 import { actionWords, eventHref, summaryWords, type AuditEventView } from "./audit-words";
 
@@ -28,9 +28,9 @@ export function EventList({ events, links = true, empty = "Nothing recorded yet.
               {href ? (
                 <>
                   {" "}
-                  <Link href={href} className="text-accent underline underline-offset-2 decoration-rule hover:decoration-accent">
+                  <TextLink href={href}>
                     open
-                  </Link>
+                  </TextLink>
                 </>
               ) : null}
             </span>

@@ -1,16 +1,11 @@
-import Link from "next/link";
+import { TextLink } from "@/components/ui/text-link";
 import { StateBadge } from "@/components/ui/status";
+import { TableHead, TD } from "@/components/ui/table-head";
+import type { FormulationRevision } from "@/lib/client/formulations";
 import { fmtDateTime } from "@/lib/format";
-import type { RevisionState } from "@/lib/workflow";
 
-export interface RevisionRowView {
-  id: string;
-  number: number;
-  state: RevisionState;
-  authorName: string | null;
-  createdAt: Date | string;
-  updatedAt: Date | string;
-}
+/** A revision in a formulation's list, as the server page reads it (dates as Date) or as JSON. */
+export type RevisionRowView = Omit<FormulationRevision, "createdAt" | "updatedAt"> & { createdAt: Date | string; updatedAt: Date | string };
 
 interface RevisionsTableProps {
   rows: RevisionRowView[];
@@ -23,56 +18,35 @@ export function RevisionsTable({ rows, canEdit }: RevisionsTableProps) {
     <div className="overflow-x-auto">
       <table className="w-full text-sm">
         <caption className="sr-only">Revisions</caption>
-        <thead>
-          <tr className="border-b border-rule text-left text-xs text-muted">
-            <th scope="col" className="px-2 py-1">
-              Revision
-            </th>
-            <th scope="col" className="px-2 py-1">
-              State
-            </th>
-            <th scope="col" className="px-2 py-1">
-              Author
-            </th>
-            <th scope="col" className="px-2 py-1">
-              Created
-            </th>
-            <th scope="col" className="px-2 py-1">
-              Last change
-            </th>
-            <th scope="col" className="px-2 py-1">
-              <span className="sr-only">Links</span>
-            </th>
-          </tr>
-        </thead>
+        <TableHead columns={["Revision", "State", "Author", "Created", "Last change", { label: "Links", srOnly: true }]} />
         <tbody>
           {rows.map((r) => (
             <tr key={r.id} className="border-b border-rule/60">
-              <td className="num px-2 py-1.5 font-medium">{r.number}</td>
-              <td className="px-2 py-1.5">
+              <td className={`${TD} num font-medium`}>{r.number}</td>
+              <td className={TD}>
                 <StateBadge state={r.state} />
               </td>
-              <td className="px-2 py-1.5">{r.authorName ?? "–"}</td>
-              <td className="num px-2 py-1.5 whitespace-nowrap text-muted">{fmtDateTime(r.createdAt)}</td>
-              <td className="num px-2 py-1.5 whitespace-nowrap text-muted">{fmtDateTime(r.updatedAt)}</td>
-              <td className="px-2 py-1.5 whitespace-nowrap">
-                <Link href={`/revisions/${r.id}`} className="text-accent underline underline-offset-2 decoration-rule hover:decoration-accent">
+              <td className={TD}>{r.authorName ?? "–"}</td>
+              <td className={`${TD} num whitespace-nowrap text-muted`}>{fmtDateTime(r.createdAt)}</td>
+              <td className={`${TD} num whitespace-nowrap text-muted`}>{fmtDateTime(r.updatedAt)}</td>
+              <td className={`${TD} whitespace-nowrap`}>
+                <TextLink href={`/revisions/${r.id}`}>
                   Open revision {r.number}
-                </Link>
+                </TextLink>
                 {r.state === "draft" && canEdit ? (
                   <>
                     {" · "}
-                    <Link href={`/revisions/${r.id}/edit`} className="text-accent underline underline-offset-2 decoration-rule hover:decoration-accent">
+                    <TextLink href={`/revisions/${r.id}/edit`}>
                       Edit
-                    </Link>
+                    </TextLink>
                   </>
                 ) : null}
                 {r.state === "released" ? (
                   <>
                     {" · "}
-                    <Link href={`/revisions/${r.id}/batch-sheet`} className="text-accent underline underline-offset-2 decoration-rule hover:decoration-accent">
+                    <TextLink href={`/revisions/${r.id}/batch-sheet`}>
                       Batch sheet
-                    </Link>
+                    </TextLink>
                   </>
                 ) : null}
               </td>

@@ -1,4 +1,4 @@
-import { KIND_WORDS } from "@/components/results/words";
+import { KIND_LABELS } from "@/components/results/words";
 import { TableHead, TD } from "@/components/ui/table-head";
 import type { ImportProposal } from "@/lib/client/imports";
 
@@ -17,7 +17,7 @@ export function ProposalsTable({ materials }: ProposalsTableProps) {
           {materials.map((m) => (
             <tr key={`${m.id}-${m.name}`} className="border-b border-rule/60 last:border-0">
               <td className={TD}>{m.name}</td>
-              <td className={TD}>{KIND_WORDS[m.kind]}</td>
+              <td className={TD}>{KIND_LABELS[m.kind]}</td>
               <td className={`${TD} num`}>{m.row ?? "–"}</td>
               <td className={TD}>
                 {m.action === "link"

@@ -14,3 +14,9 @@ export const ROLE_DESCRIPTIONS: Record<RoleName, string> = {
   reviewer: "checks thermal compatibility and chemistry, approves or sends back",
   production: "sees released formulations and batch sheets only",
 };
+
+/** The words for a role as the API sends it (a role we do not know reads as itself). */
+export function roleLabel(role: string | null): string {
+  if (!role) return "no role";
+  return (ROLE_LABELS as Record<string, string>)[role] ?? role;
+}

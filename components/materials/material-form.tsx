@@ -3,16 +3,17 @@
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { useForm, useWatch, type FieldErrors, type Resolver } from "react-hook-form";
-import { useSWRConfig } from "swr";
-import { KIND_WORDS } from "@/components/results/words";
+import { KIND_LABELS } from "@/components/results/words";
 import { Button } from "@/components/ui/button";
 import { useConfirm } from "@/components/ui/confirm-dialog";
 import { Field, inputClass } from "@/components/ui/field";
 import { HazardCodes, SafetyNote } from "@/components/ui/hazards";
+import { OutcomeMessage, type Outcome } from "@/components/ui/outcome";
 import { MATERIAL_KINDS, materialSchema, type Material, type MaterialKind } from "@/lib/formulation";
-import { ApiRequestError, apiSend, errorMessage } from "@/lib/client/fetcher";
+import { ApiRequestError, errorMessage } from "@/lib/client/fetcher";
+import { useInvalidate } from "@/lib/client/invalidate";
+import { createMaterial, deleteMaterial, updateMaterial, type LibraryMaterial } from "@/lib/client/materials";
 import { ALL_FIELDS, formKey, PROPERTY_GROUPS } from "./material-fields";
-import type { LibraryMaterial } from "./types";
 
 type FormValues = Record<string, string>;
 
@@ -106,8 +107,8 @@ interface MaterialFormProps {
 /** Every property of a material with its unit and its source, validated by the shared schema. */
 export function MaterialForm({ material, canSave, canDelete }: MaterialFormProps) {
   const router = useRouter();
-  const { mutate } = useSWRConfig();
-  const [message, setMessage] = useState<{ tone: "error" | "info"; text: string } | null>(null);
+  const invalidate = useInvalidate();
+  const [message, setMessage] = useState<Outcome>(null);
   const [confirmDialog, ask] = useConfirm();
   const form = useForm<FormValues>({ resolver, defaultValues: toForm(material ?? {}), mode: "onTouched" });
   const { register, handleSubmit, formState, control, setError } = form;
@@ -121,10 +122,8 @@ export function MaterialForm({ material, canSave, canDelete }: MaterialFormProps
       setMessage(null);
       const body = { material: toMaterial(values, material?.id ?? "new"), casNumber: values.casNumber?.trim() || null };
       try {
-        const saved = material
-          ? await apiSend<LibraryMaterial>("PUT", `/api/materials/${material.id}`, body)
-          : await apiSend<LibraryMaterial>("POST", "/api/materials", body);
-        await mutate((key) => typeof key === "string" && key.startsWith("/api/materials"));
+        const saved = material ? await updateMaterial(material.id, body) : await createMaterial(body);
+        await invalidate("materials");
         if (!material) router.push(`/materials/${saved.id}`);
         else {
           form.reset(toForm(saved));
@@ -150,8 +149,8 @@ export function MaterialForm({ material, canSave, canDelete }: MaterialFormProps
     });
     if (!confirmed) return;
     try {
-      await apiSend("DELETE", `/api/materials/${material.id}`);
-      await mutate((key) => typeof key === "string" && key.startsWith("/api/materials"));
+      await deleteMaterial(material.id);
+      await invalidate("materials");
       router.push("/materials");
       router.refresh();
     } catch (err) {
@@ -182,7 +181,7 @@ export function MaterialForm({ material, canSave, canDelete }: MaterialFormProps
           <select {...text("kind")} disabled={!canSave}>
             {MATERIAL_KINDS.map((k) => (
               <option key={k} value={k}>
-                {KIND_WORDS[k]}
+                {KIND_LABELS[k]}
               </option>
             ))}
           </select>
@@ -223,13 +222,7 @@ export function MaterialForm({ material, canSave, canDelete }: MaterialFormProps
           <HazardCodes codes={hazardList} />
         </div>
       </fieldset>
-      <div aria-live="assertive">
-        {message ? (
-          <p role={message.tone === "error" ? "alert" : "status"} className={`rounded border px-3 py-2 text-sm ${message.tone === "error" ? "border-fail/50 bg-fail-soft text-fail" : "border-clear/40 bg-clear-soft text-clear"}`}>
-            {message.text}
-          </p>
-        ) : null}
-      </div>
+      <OutcomeMessage outcome={message} />
       {canSave ? (
         <div className="flex flex-wrap gap-2">
           <Button type="submit" variant="primary" busy={formState.isSubmitting}>

@@ -1,15 +1,14 @@
 "use client";
 
 import { useState } from "react";
-import { KIND_WORDS } from "@/components/results/words";
+import { KIND_LABELS } from "@/components/results/words";
 import { nameLinkColumn, type ServerColumn } from "@/components/ui/data-table";
 import { HazardCodes, SAFETY_REMINDER } from "@/components/ui/hazards";
 import { FilterSelect, SearchBox } from "@/components/ui/list-filters";
 import { ServerListTable } from "@/components/ui/server-list-table";
-import { useServerList } from "@/components/ui/use-server-list";
 import { MATERIAL_KINDS, type MaterialKind } from "@/lib/formulation/kinds";
 import { fmtDate, fmtDensity, fmtPercent, fmtQuantity, fmtTemp } from "@/lib/format";
-import type { LibraryMaterial } from "./types";
+import { useMaterials, type LibraryMaterial } from "@/lib/client/materials";
 
 function keyProperty(m: LibraryMaterial): string {
   if (m.kind === "precursor" && m.precursor) {
@@ -33,7 +32,7 @@ function keyProperty(m: LibraryMaterial): string {
 
 const columns: ServerColumn<LibraryMaterial>[] = [
   nameLinkColumn((row) => `/materials/${row.id}`),
-  { id: "kind", accessorKey: "kind", header: "Kind", cell: ({ row }) => KIND_WORDS[row.original.kind] },
+  { id: "kind", accessorKey: "kind", header: "Kind", cell: ({ row }) => KIND_LABELS[row.original.kind] },
   { id: "formula", accessorKey: "formula", header: "Formula", enableSorting: false, cell: ({ row }) => <span className="font-mono text-xs">{row.original.formula ?? "–"}</span> },
   {
     id: "molarMass",
@@ -63,7 +62,7 @@ const columns: ServerColumn<LibraryMaterial>[] = [
 /** The team's materials library: search, filter by kind, sort, page and choose columns (all done by the API). */
 export function MaterialsTable() {
   const [kind, setKind] = useState<MaterialKind | "">("");
-  const list = useServerList<LibraryMaterial>("/api/materials", { kind: kind || undefined }, [{ id: "name", desc: false }]);
+  const list = useMaterials({ kind: kind || undefined });
   return (
     <div className="flex flex-col gap-3">
       <div className="flex flex-wrap items-end gap-3">
@@ -77,7 +76,7 @@ export function MaterialsTable() {
           }}
           anyLabel="Any kind"
           options={MATERIAL_KINDS}
-          words={KIND_WORDS}
+          words={KIND_LABELS}
         />
       </div>
       <ServerListTable

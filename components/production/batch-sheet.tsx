@@ -2,7 +2,7 @@
 
 import { useBalanceResolution } from "@/components/results/balance";
 import { BalanceSelect } from "@/components/results/balance-select";
-import { materialsById, ROLE_WORDS } from "@/components/results/words";
+import { materialsById, LINE_ROLE_LABELS } from "@/components/results/words";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { SAFETY_REMINDER } from "@/components/ui/hazards";
@@ -130,7 +130,7 @@ export function BatchSheet({ formulationName, project, revisionNumber, released,
                   <td className={cell}>
                     <span className="font-medium">{m?.name ?? l.materialId}</span>
                     <span className="block text-xs text-muted">
-                      {ROLE_WORDS[l.role]}
+                      {LINE_ROLE_LABELS[l.role]}
                       {m?.hazards?.length ? ` · GHS ${m.hazards.join(", ")}` : ""}
                     </span>
                   </td>

@@ -1,7 +1,8 @@
 import type { FormulationInput, FormulationResult } from "@/lib/formulation";
 import { fmtDensity, fmtMass, fmtPercent } from "@/lib/format";
 import { CompositionChart } from "./composition-chart";
-import { FigureRows, TD, TDN, TH, THN } from "./table";
+import { TableHead, TD, TDN } from "@/components/ui/table-head";
+import { FigureRows } from "./table";
 import { materialsById } from "./words";
 
 interface CompositePanelProps {
@@ -23,22 +24,7 @@ export function CompositePanel({ input, result, resolution }: CompositePanelProp
       <div className="overflow-x-auto">
         <table className="w-full text-sm" data-testid="composite-table">
           <caption className="sr-only">Dry composite phases</caption>
-          <thead>
-            <tr className="border-b border-rule">
-              <th scope="col" className={TH}>
-                Phase
-              </th>
-              <th scope="col" className={THN}>
-                Weight fraction
-              </th>
-              <th scope="col" className={THN}>
-                Volume fraction
-              </th>
-              <th scope="col" className={THN}>
-                Dry density
-              </th>
-            </tr>
-          </thead>
+          <TableHead columns={["Phase", { label: "Weight fraction", numeric: true }, { label: "Volume fraction", numeric: true }, { label: "Dry density", numeric: true }]} />
           <tbody>
             {phases.map((p) => (
               <tr key={p.materialId} className="border-b border-rule/60">

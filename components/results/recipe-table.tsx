@@ -1,8 +1,8 @@
 import { HazardCodes } from "@/components/ui/hazards";
 import type { FormulationInput, FormulationResult } from "@/lib/formulation";
 import { fmtMass, fmtMol, fmtVolume } from "@/lib/format";
-import { TD, TDN, TH, THN } from "./table";
-import { materialsById, ROLE_WORDS } from "./words";
+import { TableHead, TD, TDN } from "@/components/ui/table-head";
+import { materialsById, LINE_ROLE_LABELS } from "./words";
 
 interface RecipeTableProps {
   input: FormulationInput;
@@ -17,28 +17,7 @@ export function RecipeTable({ input, result, resolution }: RecipeTableProps) {
     <div className="overflow-x-auto">
       <table className="w-full text-sm" data-testid="recipe-table">
         <caption className="sr-only">Dispensing recipe, in order of addition</caption>
-        <thead>
-          <tr className="border-b border-rule">
-            <th scope="col" className={THN}>
-              #
-            </th>
-            <th scope="col" className={TH}>
-              Material
-            </th>
-            <th scope="col" className={TH}>
-              Role
-            </th>
-            <th scope="col" className={THN}>
-              Mass as supplied
-            </th>
-            <th scope="col" className={THN}>
-              Volume
-            </th>
-            <th scope="col" className={THN}>
-              Amount
-            </th>
-          </tr>
-        </thead>
+        <TableHead columns={[{ label: "#", numeric: true }, "Material", "Role", { label: "Mass as supplied", numeric: true }, { label: "Volume", numeric: true }, { label: "Amount", numeric: true }]} />
         <tbody>
           {result.lines.map((line, i) => {
             const m = byId.get(line.materialId);
@@ -57,7 +36,7 @@ export function RecipeTable({ input, result, resolution }: RecipeTableProps) {
                   ) : null}
                   {line.carriedWaterMol ? <span className="block text-xs text-muted">brings {fmtMol(line.carriedWaterMol)} water</span> : null}
                 </td>
-                <td className={`${TD} text-muted`}>{ROLE_WORDS[line.role]}</td>
+                <td className={`${TD} text-muted`}>{LINE_ROLE_LABELS[line.role]}</td>
                 <td className={`${TDN} font-medium`} data-testid={`mass-${i}`}>
                   {fmtMass(line.massGrams, resolution)}
                 </td>

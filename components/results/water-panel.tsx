@@ -1,6 +1,7 @@
 import type { FormulationInput, FormulationResult } from "@/lib/formulation";
 import { fmtMass, fmtMol, fmtRatio, fmtVolume } from "@/lib/format";
-import { FigureRows, TD, TDN, TH, THN } from "./table";
+import { TableHead, TD, TDN } from "@/components/ui/table-head";
+import { FigureRows } from "./table";
 
 interface WaterPanelProps {
   input: FormulationInput;
@@ -33,19 +34,7 @@ export function WaterPanel({ input, result, resolution }: WaterPanelProps) {
         ) : (
           <table className="w-full text-sm">
             <caption className="sr-only">Alcohol released on full hydrolysis</caption>
-            <thead>
-              <tr className="border-b border-rule">
-                <th scope="col" className={TH}>
-                  Alcohol
-                </th>
-                <th scope="col" className={THN}>
-                  Amount
-                </th>
-                <th scope="col" className={THN}>
-                  Mass
-                </th>
-              </tr>
-            </thead>
+            <TableHead columns={["Alcohol", { label: "Amount", numeric: true }, { label: "Mass", numeric: true }]} />
             <tbody>
               {result.alcohol.map((a) => (
                 <tr key={a.name} className="border-b border-rule/60">

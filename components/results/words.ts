@@ -1,6 +1,7 @@
 import type { FormulationInput, LineRole, Material, ThermalLimit } from "@/lib/formulation";
 
-export const ROLE_WORDS: Record<LineRole, string> = {
+/** Words for a recipe line's role. */
+export const LINE_ROLE_LABELS: Record<LineRole, string> = {
   precursor: "Precursor",
   organic: "Organic phase",
   solvent: "Solvent",
@@ -8,7 +9,8 @@ export const ROLE_WORDS: Record<LineRole, string> = {
   catalyst: "Catalyst",
 };
 
-export const KIND_WORDS: Record<Material["kind"], string> = {
+/** Words for a material's kind. */
+export const KIND_LABELS: Record<Material["kind"], string> = {
   precursor: "Precursor",
   organic: "Organic phase",
   substrate: "Substrate",
@@ -17,13 +19,15 @@ export const KIND_WORDS: Record<Material["kind"], string> = {
   catalyst: "Catalyst",
 };
 
-export const LIMIT_WORDS: Record<ThermalLimit, string> = {
+/** Words for a material's thermal limit. */
+export const LIMIT_LABELS: Record<ThermalLimit, string> = {
   degradationOnset: "degradation onset",
   maxService: "grade maximum",
   melting: "melting point",
   glassTransition: "glass transition",
   conversion: "conversion temperature",
 };
+
 
 /** Material records of an input by id. */
 export function materialsById(input: FormulationInput): Map<string, Material> {

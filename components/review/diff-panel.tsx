@@ -1,22 +1,10 @@
 "use client";
 
-import useSWR from "swr";
 import { ErrorPanel } from "@/components/ui/error-panel";
 import { TableSkeleton } from "@/components/ui/skeleton";
-import { fetcher } from "@/lib/client/fetcher";
-
-interface DiffEntry {
-  path: string;
-  before: unknown;
-  after: unknown;
-}
-
-interface DiffResponse {
-  from: number;
-  to: number;
-  input: DiffEntry[];
-  results: DiffEntry[];
-}
+import { TableHead } from "@/components/ui/table-head";
+import { useRevisionDiff } from "@/lib/client/formulations";
+import type { DiffEntry } from "@/lib/diff";
 
 function show(value: unknown): string {
   if (value === null || value === undefined) return "—";
@@ -30,19 +18,7 @@ function DiffTable({ caption, rows }: { caption: string; rows: DiffEntry[] }) {
   return (
     <table className="w-full text-sm">
       <caption className="mb-1 text-left text-xs font-semibold text-muted">{caption}</caption>
-      <thead>
-        <tr className="border-b border-rule text-left text-xs text-muted">
-          <th scope="col" className="px-2 py-1">
-            What
-          </th>
-          <th scope="col" className="px-2 py-1">
-            Before
-          </th>
-          <th scope="col" className="px-2 py-1">
-            After
-          </th>
-        </tr>
-      </thead>
+      <TableHead columns={["What", "Before", "After"]} />
       <tbody>
         {rows.map((r) => (
           <tr key={r.path} className="border-b border-rule/60 align-top">
@@ -64,7 +40,7 @@ interface DiffPanelProps {
 
 /** What changed since the previous revision: inputs and key results. */
 export function DiffPanel({ formulationId, from, to }: DiffPanelProps) {
-  const { data, error, isLoading, mutate } = useSWR<DiffResponse>(`/api/formulations/${formulationId}/diff?from=${from}&to=${to}`, fetcher);
+  const { data, error, isLoading, mutate } = useRevisionDiff(formulationId, from, to);
   if (error) return <ErrorPanel message={error.message} onRetry={() => mutate()} />;
   if (isLoading || !data) return <TableSkeleton rows={3} label="Loading the changes" />;
   return (

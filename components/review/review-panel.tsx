@@ -2,15 +2,17 @@
 
 import { useRouter } from "next/navigation";
 import { useId, useState } from "react";
-import { useSWRConfig } from "swr";
+import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { FieldError, inputClass } from "@/components/ui/field";
 import { ThermalBadge } from "@/components/ui/status";
-import { ApiRequestError, apiSend, errorMessage } from "@/lib/client/fetcher";
-import type { Abilities, RevisionDto } from "./types";
+import { ApiRequestError, errorMessage } from "@/lib/client/fetcher";
+import { transitionRevision, type Revision } from "@/lib/client/formulations";
+import { useInvalidate } from "@/lib/client/invalidate";
+import type { Abilities } from "./abilities";
 
 interface ReviewPanelProps {
-  revision: RevisionDto;
+  revision: Revision;
   can: Abilities;
   onChanged: () => void;
 }
@@ -18,7 +20,7 @@ interface ReviewPanelProps {
 /** Approve or send back a revision that waits for review, with a comment. */
 export function ReviewPanel({ revision, can, onChanged }: ReviewPanelProps) {
   const router = useRouter();
-  const { mutate } = useSWRConfig();
+  const invalidate = useInvalidate();
   const id = useId();
   const [comment, setComment] = useState("");
   const [fieldError, setFieldError] = useState<string | null>(null);
@@ -31,16 +33,16 @@ export function ReviewPanel({ revision, can, onChanged }: ReviewPanelProps) {
 
   if (!can.review) {
     return (
-      <p className="rounded border border-rule bg-panel px-3 py-2 text-sm text-muted" data-testid="review-not-allowed">
+      <Alert tone="info" data-testid="review-not-allowed">
         Waiting for a reviewer. Only reviewers approve or send back revisions{own ? ", and never their own" : ""}.
-      </p>
+      </Alert>
     );
   }
   if (own) {
     return (
-      <p className="rounded border border-rule bg-panel px-3 py-2 text-sm text-muted" data-testid="review-own">
+      <Alert tone="info" data-testid="review-own">
         You wrote or changed this revision; another reviewer must decide on it.
-      </p>
+      </Alert>
     );
   }
 
@@ -54,10 +56,10 @@ export function ReviewPanel({ revision, can, onChanged }: ReviewPanelProps) {
       return;
     }
     try {
-      await apiSend("POST", `/api/revisions/${revision.id}/${action}`, { comment: comment.trim() || null });
+      await transitionRevision(revision.id, action, comment.trim() || null);
       setComment("");
       onChanged();
-      await mutate((key) => typeof key === "string" && key.startsWith("/api/formulations"));
+      await invalidate("formulations");
       router.refresh();
     } catch (err) {
       if (err instanceof ApiRequestError && err.fields.comment) setFieldError(err.fields.comment);

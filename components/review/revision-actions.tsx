@@ -2,13 +2,14 @@
 
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { useSWRConfig } from "swr";
 import { Button, ButtonLink } from "@/components/ui/button";
-import { apiSend, errorMessage } from "@/lib/client/fetcher";
-import type { Abilities, RevisionDto } from "./types";
+import { errorMessage } from "@/lib/client/fetcher";
+import { startRevision, transitionRevision, type Revision } from "@/lib/client/formulations";
+import { useInvalidate } from "@/lib/client/invalidate";
+import type { Abilities } from "./abilities";
 
 interface RevisionActionsProps {
-  revision: RevisionDto;
+  revision: Revision;
   can: Abilities;
   onChanged: () => void;
 }
@@ -16,7 +17,7 @@ interface RevisionActionsProps {
 /** The buttons a revision's state and the viewer's role allow (the server checks again). */
 export function RevisionActions({ revision, can, onChanged }: RevisionActionsProps) {
   const router = useRouter();
-  const { mutate } = useSWRConfig();
+  const invalidate = useInvalidate();
   const [busy, setBusy] = useState<string | null>(null);
   const [message, setMessage] = useState<string | null>(null);
 
@@ -24,9 +25,9 @@ export function RevisionActions({ revision, can, onChanged }: RevisionActionsPro
     setBusy(action);
     setMessage(null);
     try {
-      await apiSend("POST", `/api/revisions/${revision.id}/${action}`, {});
+      await transitionRevision(revision.id, action);
       onChanged();
-      await mutate((key) => typeof key === "string" && key.startsWith("/api/formulations"));
+      await invalidate("formulations");
       router.refresh();
     } catch (err) {
       setMessage(errorMessage(err));
@@ -39,8 +40,8 @@ export function RevisionActions({ revision, can, onChanged }: RevisionActionsPro
     setBusy("new");
     setMessage(null);
     try {
-      const created = await apiSend<{ revisionId: string }>("POST", `/api/formulations/${revision.formulationId}/revisions`);
-      await mutate((key) => typeof key === "string" && key.startsWith("/api/formulations"));
+      const created = await startRevision(revision.formulationId);
+      await invalidate("formulations");
       router.push(`/revisions/${created.revisionId}/edit`);
     } catch (err) {
       setMessage(errorMessage(err));

@@ -1,28 +1,27 @@
 "use client";
 
-import Link from "next/link";
-import useSWR from "swr";
+import { TextLink } from "@/components/ui/text-link";
 import { DownloadLinks, revisionDownloads } from "@/components/exports/download-links";
 import { ResultsView } from "@/components/results/results-view";
 import { ErrorPanel } from "@/components/ui/error-panel";
 import { Panel } from "@/components/ui/panel";
 import { StateBadge, ThermalBadge } from "@/components/ui/status";
-import { fetcher } from "@/lib/client/fetcher";
+import { Alert } from "@/components/ui/alert";
+import { useRevision, type Revision } from "@/lib/client/formulations";
 import { fmtDateTime } from "@/lib/format";
 import { DiffPanel } from "./diff-panel";
 import { RevisionActions } from "./revision-actions";
 import { ReviewPanel } from "./review-panel";
-import type { Abilities, RevisionDto } from "./types";
+import type { Abilities } from "./abilities";
 
 interface RevisionViewProps {
-  initial: RevisionDto;
+  initial: Revision;
   can: Abilities;
 }
 
 /** One revision: state, actions, review, changes since the previous revision, and every result. */
 export function RevisionView({ initial, can }: RevisionViewProps) {
-  const key = `/api/revisions/${initial.id}`;
-  const { data, error, mutate } = useSWR<RevisionDto>(key, fetcher, { fallbackData: initial });
+  const { data, error, mutate } = useRevision(initial.id, initial);
   const rev = data ?? initial;
   const fails = rev.result?.thermal.status === "fail";
   const thermalNotice = rev.result?.notices.find((n) => n.code === "thermal_limit_exceeded");
@@ -32,9 +31,9 @@ export function RevisionView({ initial, can }: RevisionViewProps) {
       <div className="flex flex-wrap items-start justify-between gap-3">
         <div className="min-w-0">
           <p className="text-sm text-muted">
-            <Link href={`/formulations/${rev.formulationId}`} className="text-accent underline underline-offset-2 decoration-rule hover:decoration-accent">
+            <TextLink href={`/formulations/${rev.formulationId}`}>
               {rev.formulationName}
-            </Link>{" "}
+            </TextLink>{" "}
             · {rev.project ?? "No project"}
           </p>
           <h1 className="flex flex-wrap items-center gap-2 text-xl font-semibold">
@@ -50,13 +49,12 @@ export function RevisionView({ initial, can }: RevisionViewProps) {
       <DownloadLinks links={revisionDownloads(rev.id)} />
       {error ? <ErrorPanel title="Could not refresh this revision" message={error.message} onRetry={() => mutate()} /> : null}
       {fails ? (
-        <div role="alert" className="rounded border border-fail/50 bg-fail-soft px-3 py-2 text-sm" data-testid="thermal-block">
-          <p className="font-semibold text-fail">Thermal check fails: this revision cannot be approved.</p>
-          <p className="mt-0.5">{thermalNotice?.message ?? "A process step reaches a material's hard temperature limit."}</p>
+        <Alert tone="fail" title="Thermal check fails: this revision cannot be approved." data-testid="thermal-block">
+          <p>{thermalNotice?.message ?? "A process step reaches a material's hard temperature limit."}</p>
           {rev.result?.thermal.maxAllowedC !== undefined ? (
             <p className="mt-0.5">Bring every step below {rev.result.thermal.maxAllowedC} °C, or choose materials that tolerate the schedule.</p>
           ) : null}
-        </div>
+        </Alert>
       ) : null}
       <ReviewPanel revision={rev} can={can} onChanged={() => mutate()} />
       {rev.reviews.length > 0 ? (

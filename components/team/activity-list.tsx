@@ -1,56 +1,36 @@
 "use client";
 
 import { useState } from "react";
-import useSWR from "swr";
-import { actionWords, type AuditEventView } from "@/components/history/audit-words";
+import { ACTION_LABELS } from "@/components/history/audit-words";
 import { EventList } from "@/components/history/event-list";
 import { Button } from "@/components/ui/button";
 import { ErrorPanel } from "@/components/ui/error-panel";
 import { inputClass } from "@/components/ui/field";
 import { TableSkeleton } from "@/components/ui/skeleton";
-import { fetcher, query } from "@/lib/client/fetcher";
-
-const ACTIONS = [
-  "formulation.created",
-  "revision.saved",
-  "revision.started",
-  "revision.submitted",
-  "revision.approved",
-  "revision.returned",
-  "revision.released",
-  "revision.archived",
-  "material.created",
-  "material.updated",
-  "material.deleted",
-  "member.invited",
-  "member.role_changed",
-  "member.removed",
-];
+import { useAuditEvents } from "@/lib/client/audit";
+import { useMembers } from "@/lib/client/team";
+import { AUDIT_ACTIONS, type AuditAction } from "@/lib/enums";
 
 const PAGE_SIZE = 50;
 
 /** The team's audit trail, filterable by action and person. */
 export function ActivityList() {
-  const [action, setAction] = useState("");
+  const [action, setAction] = useState<AuditAction | "">("");
   const [actorId, setActorId] = useState("");
   const [page, setPage] = useState(1);
-  const members = useSWR<{ rows: { userId: string; name: string }[] }>("/api/members", fetcher);
-  const { data, error, isLoading, mutate } = useSWR<{ rows: AuditEventView[]; total: number }>(
-    `/api/audit${query({ action, actorId, page, pageSize: PAGE_SIZE })}`,
-    fetcher,
-    { keepPreviousData: true },
-  );
+  const members = useMembers();
+  const { data, error, isLoading, mutate } = useAuditEvents({ action: action || undefined, actorId: actorId || undefined, page, pageSize: PAGE_SIZE });
   const pages = Math.max(1, Math.ceil((data?.total ?? 0) / PAGE_SIZE));
   return (
     <div className="flex flex-col gap-3">
       <div className="flex flex-wrap gap-3">
         <label className="flex flex-col gap-1 text-[13px] font-medium">
           What
-          <select className={inputClass()} value={action} onChange={(e) => { setAction(e.target.value); setPage(1); }}>
+          <select className={inputClass()} value={action} onChange={(e) => { setAction(e.target.value as AuditAction | ""); setPage(1); }}>
             <option value="">Everything</option>
-            {ACTIONS.map((a) => (
+            {AUDIT_ACTIONS.filter((a) => a !== "revision.seeded").map((a) => (
               <option key={a} value={a}>
-                {actionWords(a)}
+                {ACTION_LABELS[a]}
               </option>
             ))}
           </select>

@@ -3,18 +3,13 @@
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useEffect, useState } from "react";
 import { useForm } from "react-hook-form";
-import useSWR from "swr";
 import { z } from "zod";
 import { Button } from "@/components/ui/button";
 import { ErrorPanel } from "@/components/ui/error-panel";
 import { Field, inputClass } from "@/components/ui/field";
-import { ApiRequestError, apiSend, errorMessage, fetcher } from "@/lib/client/fetcher";
-
-interface Settings {
-  toleranceFraction: number;
-  balanceResolutionGrams: number;
-  isDefault: boolean;
-}
+import { OutcomeMessage, type Outcome } from "@/components/ui/outcome";
+import { saveBatchSettings, useBatchSettings } from "@/lib/client/batch-settings";
+import { ApiRequestError, errorMessage } from "@/lib/client/fetcher";
 
 // The form speaks in per cent and grams; the API stores a fraction.
 const schema = z.object({
@@ -25,8 +20,8 @@ type Values = z.infer<typeof schema>;
 
 /** The team's weighing tolerance for batch records (admins change it; new batches use it). */
 export function BatchTolerancePanel({ canEdit }: { canEdit: boolean }) {
-  const { data, error, mutate } = useSWR<Settings>("/api/batches/settings", fetcher);
-  const [message, setMessage] = useState<{ tone: "error" | "info"; text: string } | null>(null);
+  const { data, error, mutate } = useBatchSettings();
+  const [message, setMessage] = useState<Outcome>(null);
   const { register, handleSubmit, formState, reset, setError } = useForm<z.input<typeof schema>, unknown, Values>({
     resolver: zodResolver(schema),
   });
@@ -39,7 +34,7 @@ export function BatchTolerancePanel({ canEdit }: { canEdit: boolean }) {
   const onSubmit = handleSubmit(async (values) => {
     setMessage(null);
     try {
-      await apiSend("PUT", "/api/batches/settings", {
+      await saveBatchSettings({
         toleranceFraction: values.tolerancePercent / 100,
         balanceResolutionGrams: values.balanceResolutionGrams,
       });
@@ -96,9 +91,7 @@ export function BatchTolerancePanel({ canEdit }: { canEdit: boolean }) {
           </Button>
         </div>
       ) : null}
-      <p aria-live="polite" className={`text-[13px] ${message?.tone === "error" ? "text-fail" : "text-clear"}`}>
-        {message?.text}
-      </p>
+      <OutcomeMessage outcome={message} />
     </form>
   );
 }

@@ -3,14 +3,15 @@
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
-import useSWR from "swr";
 import { z } from "zod";
-import { ROLE_LABELS } from "@/components/layout/role-words";
+import { ROLE_LABELS, roleLabel } from "@/components/layout/role-words";
 import { Button } from "@/components/ui/button";
 import { ErrorPanel } from "@/components/ui/error-panel";
 import { Field, inputClass } from "@/components/ui/field";
+import { OutcomeMessage, type Outcome } from "@/components/ui/outcome";
 import { TableSkeleton } from "@/components/ui/skeleton";
-import { ApiRequestError, apiSend, errorMessage, fetcher } from "@/lib/client/fetcher";
+import { ApiRequestError, errorMessage } from "@/lib/client/fetcher";
+import { invite, useInvitations } from "@/lib/client/team";
 import { fmtDateTime } from "@/lib/format";
 import { ROLE_NAMES, type RoleName } from "@/lib/permissions";
 
@@ -20,18 +21,10 @@ const schema = z.object({
 });
 type Values = z.infer<typeof schema>;
 
-interface Invitation {
-  id: string;
-  email: string;
-  role: RoleName;
-  status: string;
-  expiresAt: string;
-}
-
 /** Invite someone by e-mail with a role; pending invitations below. */
 export function InvitePanel() {
-  const { data, error, isLoading, mutate } = useSWR<{ rows: Invitation[] }>("/api/invitations", fetcher);
-  const [message, setMessage] = useState<{ tone: "error" | "info"; text: string } | null>(null);
+  const { data, error, isLoading, mutate } = useInvitations();
+  const [message, setMessage] = useState<Outcome>(null);
   const { register, handleSubmit, formState, reset, setError } = useForm<Values>({
     resolver: zodResolver(schema),
     defaultValues: { email: "", role: "formulator" },
@@ -41,7 +34,7 @@ export function InvitePanel() {
   const onSubmit = handleSubmit(async (values) => {
     setMessage(null);
     try {
-      await apiSend("POST", "/api/invitations", values);
+      await invite(values);
       setMessage({ tone: "info", text: `Invitation sent to ${values.email}.` });
       reset({ email: "", role: values.role });
       await mutate();
@@ -78,9 +71,7 @@ export function InvitePanel() {
           Send invitation
         </Button>
       </form>
-      <p aria-live="polite" role={message?.tone === "error" ? "alert" : undefined} className={`text-sm ${message?.tone === "error" ? "text-fail" : "text-clear"}`}>
-        {message?.text}
-      </p>
+      <OutcomeMessage outcome={message} />
       <h3 className="text-xs font-semibold text-muted">Pending invitations</h3>
       {error ? (
         <ErrorPanel message={error.message} onRetry={() => mutate()} />
@@ -93,7 +84,7 @@ export function InvitePanel() {
           {pending.map((i) => (
             <li key={i.id} className="flex flex-wrap justify-between gap-2 py-1">
               <span>
-                {i.email} · {ROLE_LABELS[i.role] ?? i.role}
+                {i.email} · {roleLabel(i.role)}
               </span>
               <span className="num text-xs text-muted">expires {fmtDateTime(i.expiresAt)}</span>
             </li>

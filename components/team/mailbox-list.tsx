@@ -1,22 +1,14 @@
 "use client";
 
-import useSWR from "swr";
 import { ErrorPanel } from "@/components/ui/error-panel";
 import { TableSkeleton } from "@/components/ui/skeleton";
-import { ApiRequestError, fetcher } from "@/lib/client/fetcher";
+import { ApiRequestError } from "@/lib/client/fetcher";
+import { useMailbox } from "@/lib/client/team";
 import { fmtDateTime } from "@/lib/format";
-
-interface Mail {
-  id: string;
-  receivedAt: string;
-  to: string[];
-  subject: string;
-  text: string;
-}
 
 /** Mail about this team's own business captured by the local fake mail server (never account mail). */
 export function MailboxList() {
-  const { data, error, isLoading, mutate } = useSWR<{ rows: Mail[] }>("/api/mailbox", fetcher, { refreshInterval: 10_000 });
+  const { data, error, isLoading, mutate } = useMailbox();
   if (error instanceof ApiRequestError && error.status === 404) {
     return <p className="text-sm text-muted">{error.message}</p>;
   }

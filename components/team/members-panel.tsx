@@ -1,22 +1,16 @@
 "use client";
 
 import { useState } from "react";
-import useSWR from "swr";
-import { ROLE_DESCRIPTIONS, ROLE_LABELS } from "@/components/layout/role-words";
+import { ROLE_DESCRIPTIONS, ROLE_LABELS, roleLabel } from "@/components/layout/role-words";
 import { Button } from "@/components/ui/button";
 import { useConfirm } from "@/components/ui/confirm-dialog";
 import { ErrorPanel } from "@/components/ui/error-panel";
+import { OutcomeMessage, type Outcome } from "@/components/ui/outcome";
 import { TableSkeleton } from "@/components/ui/skeleton";
-import { apiSend, errorMessage, fetcher } from "@/lib/client/fetcher";
+import { TableHead, TD } from "@/components/ui/table-head";
+import { errorMessage } from "@/lib/client/fetcher";
+import { changeMemberRole, removeMember, useMembers, type Member } from "@/lib/client/team";
 import { ROLE_NAMES, type RoleName } from "@/lib/permissions";
-
-interface Member {
-  id: string;
-  userId: string;
-  role: RoleName;
-  name: string;
-  email: string;
-}
 
 interface MembersPanelProps {
   userId: string;
@@ -26,14 +20,14 @@ interface MembersPanelProps {
 
 /** The team's members; admins change roles and remove members. */
 export function MembersPanel({ userId, canManage, canRemove }: MembersPanelProps) {
-  const { data, error, isLoading, mutate } = useSWR<{ rows: Member[] }>("/api/members", fetcher);
-  const [message, setMessage] = useState<{ tone: "error" | "info"; text: string } | null>(null);
+  const { data, error, isLoading, mutate } = useMembers();
+  const [message, setMessage] = useState<Outcome>(null);
   const [confirmDialog, ask] = useConfirm();
 
   async function changeRole(m: Member, role: RoleName) {
     setMessage(null);
     try {
-      await apiSend("PATCH", `/api/members/${m.id}`, { role });
+      await changeMemberRole(m.id, role);
       setMessage({ tone: "info", text: `${m.name} is now ${ROLE_LABELS[role].toLowerCase()}.` });
     } catch (err) {
       setMessage({ tone: "error", text: errorMessage(err) });
@@ -50,7 +44,7 @@ export function MembersPanel({ userId, canManage, canRemove }: MembersPanelProps
     if (!confirmed) return;
     setMessage(null);
     try {
-      await apiSend("DELETE", `/api/members/${m.id}`);
+      await removeMember(m.id);
       setMessage({ tone: "info", text: `${m.name} was removed from the team.` });
     } catch (err) {
       setMessage({ tone: "error", text: errorMessage(err) });
@@ -66,33 +60,16 @@ export function MembersPanel({ userId, canManage, canRemove }: MembersPanelProps
       <div className="overflow-x-auto">
         <table className="w-full text-sm">
           <caption className="sr-only">Team members</caption>
-          <thead>
-            <tr className="border-b border-rule text-left text-xs text-muted">
-              <th scope="col" className="px-2 py-1">
-                Name
-              </th>
-              <th scope="col" className="px-2 py-1">
-                E-mail
-              </th>
-              <th scope="col" className="px-2 py-1">
-                Role
-              </th>
-              {canRemove ? (
-                <th scope="col" className="px-2 py-1">
-                  <span className="sr-only">Remove</span>
-                </th>
-              ) : null}
-            </tr>
-          </thead>
+          <TableHead columns={["Name", "E-mail", "Role", { label: "Remove", srOnly: true, hidden: !canRemove }]} />
           <tbody>
             {data.rows.map((m) => (
               <tr key={m.id} className="border-b border-rule/60">
-                <td className="px-2 py-1.5 font-medium">
+                <td className={`${TD} font-medium`}>
                   {m.name}
                   {m.userId === userId ? <span className="ml-1 text-xs text-muted">(you)</span> : null}
                 </td>
-                <td className="px-2 py-1.5">{m.email}</td>
-                <td className="px-2 py-1.5">
+                <td className={TD}>{m.email}</td>
+                <td className={TD}>
                   {canManage ? (
                     <select
                       aria-label={`Role of ${m.name}`}
@@ -107,11 +84,11 @@ export function MembersPanel({ userId, canManage, canRemove }: MembersPanelProps
                       ))}
                     </select>
                   ) : (
-                    <span title={ROLE_DESCRIPTIONS[m.role]}>{ROLE_LABELS[m.role] ?? m.role}</span>
+                    <span title={(ROLE_DESCRIPTIONS as Record<string, string>)[m.role]}>{roleLabel(m.role)}</span>
                   )}
                 </td>
                 {canRemove ? (
-                  <td className="px-2 py-1.5 text-right">
+                  <td className={`${TD} text-right`}>
                     {m.userId !== userId ? (
                       <Button variant="ghost" onClick={() => remove(m)} aria-label={`Remove ${m.name}`}>
                         Remove
@@ -124,9 +101,7 @@ export function MembersPanel({ userId, canManage, canRemove }: MembersPanelProps
           </tbody>
         </table>
       </div>
-      <p aria-live="polite" role={message?.tone === "error" ? "alert" : undefined} className={`text-sm ${message?.tone === "error" ? "text-fail" : "text-clear"}`}>
-        {message?.text}
-      </p>
+      <OutcomeMessage outcome={message} />
       <dl className="grid gap-x-3 gap-y-0.5 text-xs text-muted sm:grid-cols-[auto_1fr]">
         {ROLE_NAMES.map((r) => (
           <div key={r} className="contents">

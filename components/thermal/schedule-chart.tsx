@@ -3,7 +3,7 @@
 import { CartesianGrid, Label, Line, LineChart, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
 import type { FormulationInput, FormulationResult } from "@/lib/formulation";
 import { fmtTemp } from "@/lib/format";
-import { LIMIT_WORDS } from "@/components/results/words";
+import { LIMIT_LABELS } from "@/components/results/words";
 import { thermalRows } from "./thermal-model";
 
 interface ScheduleChartProps {
@@ -29,7 +29,7 @@ export function ScheduleChart({ input, result }: ScheduleChartProps) {
   const top = Math.max(...points.map((p) => p.T), ...limits.map((l) => l.C), 50) * 1.1;
   const summary =
     `Process schedule: ${input.steps.map((s) => `${s.name} ${s.temperatureC} °C for ${s.durationH} h`).join(", ")}. ` +
-    limits.map((l) => `${l.name} ${LIMIT_WORDS[l.limit as keyof typeof LIMIT_WORDS]} ${l.C} °C`).join("; ");
+    limits.map((l) => `${l.name} ${LIMIT_LABELS[l.limit as keyof typeof LIMIT_LABELS]} ${l.C} °C`).join("; ");
   if (points.length === 0) return <p className="text-sm text-muted">Add process steps to see the schedule.</p>;
   return (
     <figure className="min-w-0">
@@ -45,7 +45,7 @@ export function ScheduleChart({ input, result }: ScheduleChartProps) {
             <Tooltip formatter={(v) => [`${v} °C`, "Temperature"]} labelFormatter={(l) => `${l} h`} />
             {limits.map((l) => (
               <ReferenceLine key={l.name} y={l.C} stroke={l.colour} strokeWidth={1.5}>
-                <Label value={`${l.name}: ${LIMIT_WORDS[l.limit as keyof typeof LIMIT_WORDS]} ${fmtTemp(l.C)}`} position="insideTopLeft" style={{ fontSize: 10, fill: l.colour }} />
+                <Label value={`${l.name}: ${LIMIT_LABELS[l.limit as keyof typeof LIMIT_LABELS]} ${fmtTemp(l.C)}`} position="insideTopLeft" style={{ fontSize: 10, fill: l.colour }} />
               </ReferenceLine>
             ))}
             {maxAllowed !== undefined ? (

@@ -1,8 +1,11 @@
 import { ThermalBadge, thermalCellClass } from "@/components/ui/status";
 import type { FormulationInput, FormulationResult } from "@/lib/formulation";
 import { fmtHours, fmtTemp } from "@/lib/format";
-import { LIMIT_WORDS } from "@/components/results/words";
+import { LIMIT_LABELS } from "@/components/results/words";
+import { TableHead } from "@/components/ui/table-head";
 import { conversionChecks, thermalRows } from "./thermal-model";
+
+const MATRIX_HEAD = "border border-rule bg-paper px-2 py-1 text-left text-xs font-semibold text-muted";
 
 interface ThermalMatrixProps {
   input: FormulationInput;
@@ -30,7 +33,7 @@ export function ThermalMatrix({ input, result }: ThermalMatrixProps) {
           {binding && t.binding ? (
             <span className="text-muted">
               {" "}
-              — bound by {binding.name}, {LIMIT_WORDS[t.binding.limit]} less the {fmtTemp(input.marginC ?? 20)} margin
+              — bound by {binding.name}, {LIMIT_LABELS[t.binding.limit]} less the {fmtTemp(input.marginC ?? 20)} margin
             </span>
           ) : null}
         </span>
@@ -43,21 +46,23 @@ export function ThermalMatrix({ input, result }: ThermalMatrixProps) {
         <div className="overflow-x-auto">
           <table className="w-full border-collapse text-sm">
             <caption className="sr-only">Thermal compatibility of each material with each process step</caption>
-            <thead>
-              <tr>
-                <th scope="col" className="border border-rule bg-paper px-2 py-1 text-left text-xs font-semibold text-muted">
-                  Material (hard limit)
-                </th>
-                {input.steps.map((s, i) => (
-                  <th key={i} scope="col" className="border border-rule bg-paper px-2 py-1 text-left text-xs font-semibold text-muted">
-                    {s.name}
-                    <span className="num block font-normal">
-                      {fmtTemp(s.temperatureC)} · {fmtHours(s.durationH)}
-                    </span>
-                  </th>
-                ))}
-              </tr>
-            </thead>
+            <TableHead
+              cellClassName={MATRIX_HEAD}
+              columns={[
+                "Material (hard limit)",
+                ...input.steps.map((s, i) => ({
+                  key: String(i),
+                  label: (
+                    <>
+                      {s.name}
+                      <span className="num block font-normal">
+                        {fmtTemp(s.temperatureC)} · {fmtHours(s.durationH)}
+                      </span>
+                    </>
+                  ),
+                })),
+              ]}
+            />
             <tbody>
               {rows.map((r) => (
                 <tr key={r.materialId}>
@@ -65,7 +70,7 @@ export function ThermalMatrix({ input, result }: ThermalMatrixProps) {
                     {r.name}
                     <span className="block text-xs font-normal text-muted">
                       {r.role === "substrate" ? "substrate" : "organic phase"}
-                      {r.hard ? ` · ${LIMIT_WORDS[r.hard.limit as keyof typeof LIMIT_WORDS]} ${fmtTemp(r.hard.limitC)}` : " · no hard limit"}
+                      {r.hard ? ` · ${LIMIT_LABELS[r.hard.limit as keyof typeof LIMIT_LABELS]} ${fmtTemp(r.hard.limitC)}` : " · no hard limit"}
                     </span>
                   </th>
                   {r.cells.map((c, i) => (
@@ -74,7 +79,7 @@ export function ThermalMatrix({ input, result }: ThermalMatrixProps) {
                         <>
                           <ThermalBadge status={c.status} />
                           <span className="num block text-xs text-ink">
-                            vs {LIMIT_WORDS[c.limit]} {fmtTemp(c.limitC)}
+                            vs {LIMIT_LABELS[c.limit]} {fmtTemp(c.limitC)}
                           </span>
                         </>
                       ) : (

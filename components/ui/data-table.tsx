@@ -18,8 +18,8 @@ import { Button } from "./button";
 import { TableSkeleton } from "./skeleton";
 
 /** Sorting, paging and column choice; rows are sorted, filtered and paged on the server. */
-export const serverTableFeatures = tableFeatures({ rowSortingFeature, rowPaginationFeature, columnVisibilityFeature });
-export type ServerTableFeatures = typeof serverTableFeatures;
+const serverTableFeatures = tableFeatures({ rowSortingFeature, rowPaginationFeature, columnVisibilityFeature });
+type ServerTableFeatures = typeof serverTableFeatures;
 export type ServerColumn<T extends RowData> = ColumnDef<ServerTableFeatures, T>;
 
 /** The always-shown "Name" column of a list, linking each row to its own page. */

@@ -1,4 +1,5 @@
 import type { ReactNode } from "react";
+import { Alert } from "./alert";
 
 interface PanelProps {
   title?: ReactNode;
@@ -53,9 +54,9 @@ interface NotAllowedProps {
 /** Shown instead of a page the user's role does not allow. */
 export function NotAllowed({ what }: NotAllowedProps) {
   return (
-    <div role="alert" className="rounded border border-rule bg-panel p-4">
+    <Alert tone="info" role="alert" className="p-4">
       <h1 className="text-lg font-semibold">Not allowed</h1>
-      <p className="mt-1 text-sm text-muted">Your role in this team does not allow you to {what}. Ask a team admin if you need it.</p>
-    </div>
+      <p className="mt-1 text-muted">Your role in this team does not allow you to {what}. Ask a team admin if you need it.</p>
+    </Alert>
   );
 }

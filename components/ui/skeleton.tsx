@@ -3,7 +3,7 @@ interface SkeletonProps {
 }
 
 /** A grey placeholder block while data loads. */
-export function Skeleton({ className = "h-4 w-full" }: SkeletonProps) {
+function Skeleton({ className = "h-4 w-full" }: SkeletonProps) {
   return <div aria-hidden="true" className={`animate-pulse rounded bg-rule/60 ${className}`} />;
 }
 

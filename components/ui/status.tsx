@@ -31,7 +31,7 @@ export function StateBadge({ state }: StateBadgeProps) {
   );
 }
 
-export const THERMAL_WORDS: Record<ThermalStatus, string> = {
+const THERMAL_LABELS: Record<ThermalStatus, string> = {
   clear: "Clear",
   caution: "Caution",
   fail: "Fails",
@@ -56,7 +56,7 @@ export function ThermalBadge({ status, detail }: ThermalBadgeProps) {
   return (
     <span className={`inline-flex items-center gap-1 rounded border px-1.5 py-0.5 text-xs font-medium whitespace-nowrap ${THERMAL_STYLE[status]}`}>
       <span aria-hidden="true">{THERMAL_MARK[status]}</span>
-      {THERMAL_WORDS[status]}
+      {THERMAL_LABELS[status]}
       {detail ? <span className="font-normal">{detail}</span> : null}
     </span>
   );

@@ -23,3 +23,16 @@ export type Jsonified<T> = T extends Date
 
 /** The JSON a query function's promise resolves to, as the client receives it (null removed). */
 export type ApiData<F extends (...args: never[]) => Promise<unknown>> = Jsonified<NonNullable<Awaited<ReturnType<F>>>>;
+
+/**
+ * A server value as the browser will see it, for a server page handing a
+ * query's result to a client component (dates become ISO strings).
+ *
+ * @example
+ * ```tsx
+ * <RevisionView initial={asJson(rev)} />
+ * ```
+ */
+export function asJson<T>(value: T): Jsonified<T> {
+  return JSON.parse(JSON.stringify(value)) as Jsonified<T>;
+}

@@ -36,7 +36,7 @@ export const basisSchema = z.discriminatedUnion(
       linearShrinkage: fraction("linear shrinkage", true).optional(),
     }),
   ],
-  { error: 'basis type must be "solidMass", "solidsContent" or "gelBody"' },
+  { error: "the basis must be a dry solid mass, a sol mass with its solids content, or a gel body" },
 );
 
 /**
@@ -50,7 +50,7 @@ export const basisSchema = z.discriminatedUnion(
  */
 export const componentSchema = z.object(
   {
-    materialId: nonEmptyString("material id"),
+    materialId: nonEmptyString("component material", "choose a material for the component"),
     weightFraction: zeroOrRangedNumber("weight fraction", WEIGHT_FRACTION),
   },
   { error: required("component", "an object") },
@@ -66,7 +66,7 @@ export const componentSchema = z.object(
  */
 export const waterSpecSchema = z.object(
   {
-    materialId: nonEmptyString("water material id"),
+    materialId: nonEmptyString("water", "choose the water"),
     ratio: z.enum(["R", "h"], { error: 'water ratio must be "R" or "h"' }),
     value: rangedNumber("water ratio", MOLAR_RATIO),
   },
@@ -85,13 +85,13 @@ export const solventSpecSchema = z.discriminatedUnion(
   "mode",
   [
     z.object({
-      materialId: nonEmptyString("solvent material id"),
+      materialId: nonEmptyString("solvent", "choose the solvent"),
       mode: z.literal("molPerNetworkAtom"),
       value: rangedNumber("solvent ratio (mol per mol network atom)", MOLAR_RATIO),
     }),
-    z.object({ materialId: nonEmptyString("solvent material id"), mode: z.literal("fill") }),
+    z.object({ materialId: nonEmptyString("solvent", "choose the solvent"), mode: z.literal("fill") }),
   ],
-  { error: 'solvent mode must be "molPerNetworkAtom" or "fill"' },
+  { error: "the solvent must be given in mol per mol network atom, or as a fill" },
 );
 
 /**
@@ -104,7 +104,7 @@ export const solventSpecSchema = z.discriminatedUnion(
  */
 export const catalystSpecSchema = z.object(
   {
-    materialId: nonEmptyString("catalyst material id"),
+    materialId: nonEmptyString("catalyst", "choose the catalyst"),
     molPerNetworkAtom: rangedNumber("catalyst ratio (mol per mol network atom)", MOLAR_RATIO),
   },
   { error: required("catalyst", "an object") },
@@ -151,7 +151,7 @@ function checkReference(
 ): void {
   const material = byId.get(id);
   if (!material) {
-    addIssue(ctx, path, "unknown_material", `material "${id}" is not in the materials list`);
+    addIssue(ctx, path, "unknown_material", "the chosen material is not in the materials list");
     return;
   }
   if (!kinds.includes(material.kind)) {
@@ -184,12 +184,12 @@ export const formulationInputSchema = z
       water: waterSpecSchema,
       solvent: solventSpecSchema.optional(),
       catalyst: catalystSpecSchema.optional(),
-      substrateId: nonEmptyString("substrate id").optional(),
+      substrateId: nonEmptyString("substrate", "choose the substrate").optional(),
       steps: z.array(processStepSchema, { error: required("process steps", "a list") }),
       marginC: rangedNumber("thermal margin (°C)", MARGIN_C).optional(),
       measuredBulkDensity: rangedNumber("measured bulk density (g/cm³)", DENSITY_G_PER_CM3).optional(),
       /** Optional order of addition: material ids; lines not listed follow in the default order. */
-      additionOrder: z.array(nonEmptyString("material id"), { error: required("addition order", "a list") }).optional(),
+      additionOrder: z.array(nonEmptyString("addition order entry", "choose a material for each place in the addition order"), { error: required("addition order", "a list") }).optional(),
     },
     { error: required("formulation input", "an object") },
   )
@@ -197,7 +197,7 @@ export const formulationInputSchema = z
     const byId = new Map<string, Material>();
     input.materials.forEach((material, index) => {
       if (byId.has(material.id)) {
-        addIssue(ctx, ["materials", index, "id"], "duplicate_material", `material id "${material.id}" appears twice`);
+        addIssue(ctx, ["materials", index, "id"], "duplicate_material", `the material "${material.name}" appears twice in the materials list`);
       } else {
         byId.set(material.id, material);
       }
@@ -209,7 +209,7 @@ export const formulationInputSchema = z
       const path = ["components", index, "materialId"];
       checkReference(ctx, byId, component.materialId, path, ["precursor", "organic"]);
       if (seen.has(component.materialId)) {
-        addIssue(ctx, path, "duplicate_component", `"${component.materialId}" is listed twice; combine its weight fractions`);
+        addIssue(ctx, path, "duplicate_component", `"${byId.get(component.materialId)?.name ?? "a material"}" is chosen for two components; combine its weight fractions`);
       }
       seen.add(component.materialId);
       total = total.plus(dec(component.weightFraction));
@@ -243,7 +243,7 @@ export const formulationInputSchema = z
     }
     input.additionOrder?.forEach((id, index) => {
       if (!byId.has(id)) {
-        addIssue(ctx, ["additionOrder", index], "unknown_material", `material "${id}" is not in the materials list`);
+        addIssue(ctx, ["additionOrder", index], "unknown_material", "a material in the addition order is not in the materials list");
       }
     });
   });

@@ -136,7 +136,7 @@ export const thermalDataSchema = z.object(
 export const materialSchema = z
   .object(
     {
-      id: nonEmptyString("material id"),
+      id: nonEmptyString("material reference", "the material has no reference in the library"),
       name: nameText("material name", { max: MATERIAL_NAME_MAX }),
       kind: z.enum(MATERIAL_KINDS, {
         error: `kind must be one of ${MATERIAL_KINDS.join(", ")}`,

@@ -96,15 +96,15 @@ export function fraction(label: string, openAtOne = false): z.ZodNumber {
 }
 
 /**
- * A non-empty string.
+ * A non-empty string; `whenEmpty` is the message for "" (default "<label> must not be empty").
  *
  * @example
  * ```ts
- * nonEmptyString("material id").parse("teos"); // "teos"
+ * nonEmptyString("component material", "choose a material").parse("teos"); // "teos"
  * ```
  */
-export function nonEmptyString(label: string): z.ZodString {
-  return z.string({ error: required(label, "text") }).min(1, { error: `${label} must not be empty` });
+export function nonEmptyString(label: string, whenEmpty = `${label} must not be empty`): z.ZodString {
+  return z.string({ error: required(label, "text") }).min(1, { error: whenEmpty });
 }
 
 /**

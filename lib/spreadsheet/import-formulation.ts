@@ -24,13 +24,13 @@ import {
   type MaterialProposal,
 } from "./import-materials";
 import {
-  BASIS_WORDS,
+  BASIS_LABELS,
   COMPONENT_COLUMNS,
   INPUT_SETTINGS,
   MATERIAL_COLUMNS,
   ORDER_COLUMNS,
   SHEET,
-  SOLVENT_MODE_WORDS,
+  SOLVENT_MODE_LABELS,
   STEP_COLUMNS,
   type InputSettingKey,
 } from "./template";
@@ -253,14 +253,14 @@ export function previewFormulationImport(
 
   // Basis.
   const basisWord = text("basis")?.toLowerCase();
-  const basisType = (Object.entries(BASIS_WORDS).find(([id, word]) => basisWord === word || basisWord === id.toLowerCase())?.[0] ?? undefined) as
-    | keyof typeof BASIS_WORDS
+  const basisType = (Object.entries(BASIS_LABELS).find(([id, word]) => basisWord === word || basisWord === id.toLowerCase())?.[0] ?? undefined) as
+    | keyof typeof BASIS_LABELS
     | undefined;
   locations.set("basis", locOf("basis"));
   locations.set("basis.type", locOf("basis"));
   let basis: unknown;
   if (inputSheet && !basisType) {
-    problemAt(locOf("basis"), "error", `Basis must be one of: ${Object.values(BASIS_WORDS).join(", ")}${basisWord ? ` (not “${text("basis")}”)` : ""}.`);
+    problemAt(locOf("basis"), "error", `Basis must be one of: ${Object.values(BASIS_LABELS).join(", ")}${basisWord ? ` (not “${text("basis")}”)` : ""}.`);
   } else if (basisType === "solidMass") {
     basis = { type: "solidMass", grams: required(number("solidGrams", "basis.grams"), "solidGrams", "for a dry-solid-mass basis") };
   } else if (basisType === "solidsContent") {
@@ -298,8 +298,8 @@ export function previewFormulationImport(
   locations.set("solvent.mode", locOf("solventMode"));
   locations.set("solvent", locOf("solvent"));
   if (solventId !== undefined) {
-    const mode = (Object.entries(SOLVENT_MODE_WORDS).find(([id, word]) => modeText === word || modeText === id.toLowerCase())?.[0]) as
-      | keyof typeof SOLVENT_MODE_WORDS
+    const mode = (Object.entries(SOLVENT_MODE_LABELS).find(([id, word]) => modeText === word || modeText === id.toLowerCase())?.[0]) as
+      | keyof typeof SOLVENT_MODE_LABELS
       | undefined;
     if (!mode) {
       problemAt(locOf("solventMode"), "error", `Solvent amount must be “molar ratio” or “fill”${modeText ? ` (not “${text("solventMode")}”)` : ""}.`);

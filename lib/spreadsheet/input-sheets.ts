@@ -5,7 +5,7 @@
  */
 import type { FormulationInput, Material } from "@/lib/formulation";
 import {
-  BASIS_WORDS,
+  BASIS_LABELS,
   COMPONENT_COLUMNS,
   INPUT_COLUMNS,
   INPUT_SETTINGS,
@@ -13,7 +13,7 @@ import {
   NO_HAZARDS,
   ORDER_COLUMNS,
   SHEET,
-  SOLVENT_MODE_WORDS,
+  SOLVENT_MODE_LABELS,
   SOURCE_COLUMNS,
   STEP_COLUMNS,
   type InputSettingKey,
@@ -78,12 +78,12 @@ export function inputSheets(input: FormulationInput, meta: FormulationMeta): She
     name: meta.name,
     project: meta.project ?? null,
     description: meta.description ?? null,
-    basis: BASIS_WORDS[input.basis.type],
+    basis: BASIS_LABELS[input.basis.type],
     water: name(input.water.materialId),
     waterRatio: input.water.ratio,
     waterValue: input.water.value,
     solvent: name(input.solvent?.materialId),
-    solventMode: input.solvent ? SOLVENT_MODE_WORDS[input.solvent.mode] : null,
+    solventMode: input.solvent ? SOLVENT_MODE_LABELS[input.solvent.mode] : null,
     solventValue: input.solvent?.mode === "molPerNetworkAtom" ? input.solvent.value : null,
     catalyst: name(input.catalyst?.materialId),
     catalystValue: input.catalyst?.molPerNetworkAtom ?? null,

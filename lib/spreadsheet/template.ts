@@ -110,9 +110,9 @@ export const INPUT_SETTINGS = {
 export type InputSettingKey = keyof typeof INPUT_SETTINGS;
 
 /** Plain words for the basis types, and the engine's names. */
-export const BASIS_WORDS = { solidMass: "dry solid mass", solidsContent: "solids content", gelBody: "gel body" } as const;
+export const BASIS_LABELS = { solidMass: "dry solid mass", solidsContent: "solids content", gelBody: "gel body" } as const;
 /** Plain words for the solvent modes, and the engine's names. */
-export const SOLVENT_MODE_WORDS = { molPerNetworkAtom: "molar ratio", fill: "fill" } as const;
+export const SOLVENT_MODE_LABELS = { molPerNetworkAtom: "molar ratio", fill: "fill" } as const;
 
 /** Limits on uploaded files (bytes, rows, columns, sheets, characters, milliseconds). */
 export interface ImportLimits {

@@ -1,5 +1,6 @@
 /**
- * End to end, in Chromium: a formulator creates a formulation from the demo
+ * End to end, in Chromium: a new formulation greets its author with the first
+ * steps and words engine messages for the form; a formulator creates a formulation from the demo
  * materials, watches the recipe follow the weight fractions, fixes a
  * fractions-do-not-sum message and submits; a reviewer sends it back, the
  * formulator edits and resubmits, the reviewer approves; the formulator can
@@ -25,6 +26,28 @@ describe("formulation workflow in the browser", () => {
   afterAll(async () => {
     await formulator?.close();
     await reviewer?.close();
+  });
+
+  it("greets a new formulation with its first steps, and words every engine message for the form row it points at", async () => {
+    const page = formulator.page;
+    await page.goto("/formulations/new");
+    // An empty draft: a guide to the first steps, no engine refusal and no error styling.
+    await poll(() => page.getByTestId("first-steps").count()).toBe(1);
+    await poll(() => page.getByTestId("first-steps").textContent()).toMatch(/precursors .* organic phases/);
+    expect(await page.getByTestId("engine-error").count()).toBe(0);
+    expect(await page.locator('main [role="alert"]').count()).toBe(0);
+    const internal = /material id|materialId|weightFraction|leavingAlcohol|components\.\d/i;
+    expect(await page.locator("main").innerText()).not.toMatch(internal);
+
+    // A second component without a material, and one with a fraction over 100 %: messages in words, at their rows.
+    await pickOption(page, "#f-components-0-materialId", /Tetraethoxysilane/);
+    await poll(() => page.getByTestId("first-steps").count()).toBe(0);
+    await page.getByRole("button", { name: "Add component" }).click();
+    await poll(() => page.locator("#f-components-1-materialId-error").textContent()).toBe("Component 2: choose a material");
+    await setNumber(page, "#f-components-0-weightPercent", 150);
+    await poll(() => page.locator("#f-components-0-weightPercent-error").textContent()).toBe("Component 1: enter a weight fraction from 0 to 100 %");
+    await poll(() => page.getByTestId("engine-error").textContent()).toMatch(/^The recipe cannot be computed yet\. Component \d: /);
+    expect(await page.locator("main").innerText()).not.toMatch(internal);
   });
 
   it("lets a formulator create a formulation whose numbers follow the weight fractions, fix a sum message and submit it", async () => {

@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import { pageContext } from "@/components/layout/page-context";
-import { DownloadLinks } from "@/components/exports/download-links";
+import { DownloadLinks, libraryDownloads } from "@/components/exports/download-links";
 import { MaterialsTable } from "@/components/materials/materials-table";
 import { ButtonLink } from "@/components/ui/button";
 import { PageHeader } from "@/components/ui/panel";
@@ -29,10 +29,7 @@ export default async function MaterialsPage() {
       <DownloadLinks
         className="mb-3"
         title="Download the library"
-        links={[
-          { href: "/api/materials/export?format=xlsx", label: "Workbook (.xlsx)", description: "Download the whole materials library as a workbook" },
-          { href: "/api/materials/export?format=csv", label: "CSV", description: "Download the whole materials library as CSV" },
-        ]}
+        links={libraryDownloads()}
       />
       <MaterialsTable />
     </>

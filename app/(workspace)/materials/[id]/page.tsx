@@ -4,9 +4,9 @@ import { notFound } from "next/navigation";
 import { pageContext } from "@/components/layout/page-context";
 import { AttachmentsPanel } from "@/components/attachments/attachments-panel";
 import { MaterialForm } from "@/components/materials/material-form";
-import type { LibraryMaterial } from "@/components/materials/types";
 import { PageHeader } from "@/components/ui/panel";
 import { getMaterial } from "@/db/queries/materials";
+import { asJson } from "@/lib/client/json";
 import { can } from "@/lib/permissions";
 
 export const metadata: Metadata = { title: "Material" };
@@ -17,7 +17,7 @@ export default async function MaterialPage({ params }: { params: Promise<{ id: s
   if (!/^[0-9a-f-]{36}$/i.test(id)) notFound();
   const m = await getMaterial(ctx.teamId, id);
   if (!m) notFound();
-  const material = JSON.parse(JSON.stringify(m)) as LibraryMaterial;
+  const material = asJson(m);
   return (
     <>
       <PageHeader

@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { EditorLoader } from "@/components/formulation/editor-loader";
 import { pageContext } from "@/components/layout/page-context";
+import { Alert } from "@/components/ui/alert";
 import { ButtonLink } from "@/components/ui/button";
 import { NotAllowed } from "@/components/ui/panel";
 import { getRevision } from "@/db/queries/formulations";
@@ -18,17 +19,17 @@ export default async function EditRevisionPage({ params }: { params: Promise<{ i
   if (!rev) notFound();
   if (rev.state !== "draft") {
     return (
-      <div role="status" className="rounded border border-rule bg-panel p-4">
+      <Alert tone="info" className="p-4">
         <h1 className="text-lg font-semibold">
           {rev.formulationName}, revision {rev.number} cannot change
         </h1>
-        <p className="mt-1 text-sm text-muted">
+        <p className="mt-1 text-muted">
           It is {STATE_LABELS[rev.state].toLowerCase()}. Revisions that left the draft state never change; start a new revision to make changes.
         </p>
         <ButtonLink href={`/revisions/${rev.id}`} className="mt-3">
           Open the revision
         </ButtonLink>
-      </div>
+      </Alert>
     );
   }
   return (
