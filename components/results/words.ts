@@ -1,33 +1,6 @@
-import type { FormulationInput, LineRole, Material, ThermalLimit } from "@/lib/formulation";
+import type { FormulationInput, Material } from "@/lib/formulation";
 
-/** Words for a recipe line's role. */
-export const LINE_ROLE_LABELS: Record<LineRole, string> = {
-  precursor: "Precursor",
-  organic: "Organic phase",
-  solvent: "Solvent",
-  water: "Water",
-  catalyst: "Catalyst",
-};
-
-/** Words for a material's kind. */
-export const KIND_LABELS: Record<Material["kind"], string> = {
-  precursor: "Precursor",
-  organic: "Organic phase",
-  substrate: "Substrate",
-  solvent: "Solvent",
-  water: "Water",
-  catalyst: "Catalyst",
-};
-
-/** Words for a material's thermal limit. */
-export const LIMIT_LABELS: Record<ThermalLimit, string> = {
-  degradationOnset: "degradation onset",
-  maxService: "grade maximum",
-  melting: "melting point",
-  glassTransition: "glass transition",
-  conversion: "conversion temperature",
-};
-
+export { KIND_LABELS, LIMIT_LABELS, LINE_ROLE_LABELS } from "@/lib/labels";
 
 /** Material records of an input by id. */
 export function materialsById(input: FormulationInput): Map<string, Material> {

@@ -3,8 +3,9 @@
  * composite, thermal check and the full input for re-import) and its batch
  * sheet as CSV.
  */
+import { LIMIT_LABELS, LINE_ROLE_LABELS } from "@/lib/labels";
 import { DEFAULT_BALANCE_RESOLUTION_G, VOLUME_RESOLUTION_ML } from "@/lib/batches";
-import { hardLimit, type FormulationInput, type FormulationResult, type Material, type RecipeLine } from "@/lib/formulation";
+import { hardLimit, type FormulationInput, type FormulationResult, type Material } from "@/lib/formulation";
 import { inputSheets } from "./input-sheets";
 import { SHEET, readMeRows } from "./template";
 import type { Cell } from "./types";
@@ -28,21 +29,6 @@ export interface RevisionForExport {
 }
 
 const SAFETY_CODES = new Set(["alkoxide_handling", "methanol_released", "toxic_by_inhalation", "corrosive"]);
-const ROLE_WORDS: Record<RecipeLine["role"], string> = {
-  precursor: "precursor",
-  organic: "organic phase",
-  solvent: "solvent",
-  water: "water",
-  catalyst: "catalyst",
-};
-const LIMIT_WORDS: Record<string, string> = {
-  degradationOnset: "degradation onset",
-  maxService: "maximum service temperature",
-  melting: "melting point",
-  glassTransition: "glass transition",
-  conversion: "conversion temperature",
-};
-
 function iso(value: Date | string | null | undefined): string | null {
   if (!value) return null;
   const date = typeof value === "string" ? new Date(value) : value;
@@ -95,7 +81,7 @@ export function batchSheetTable(
     rows: lines.map((line, index) => [
       index + 1,
       byId.get(line.materialId)?.name ?? line.materialId,
-      ROLE_WORDS[line.role],
+      LINE_ROLE_LABELS[line.role].toLowerCase(),
       null,
       line.massGrams,
       line.volumeMl,
@@ -220,7 +206,7 @@ function thermalSheet(revision: RevisionForExport): SheetSpec {
       ...steps.map((step) => {
         const check = result.thermal.checks.find((c) => c.materialId === id && c.stepName === step.name);
         if (!check) return null;
-        return check.status === "clear" ? "clear" : `${check.status}: ${LIMIT_WORDS[check.limit] ?? check.limit} ${check.limitC} °C`;
+        return check.status === "clear" ? "clear" : `${check.status}: ${LIMIT_LABELS[check.limit]} ${check.limitC} °C`;
       }),
     ];
   });
@@ -231,7 +217,7 @@ function thermalSheet(revision: RevisionForExport): SheetSpec {
       ["Highest allowed step temperature (°C)", result.thermal.maxAllowedC],
       [
         "Bound by",
-        binding ? `${byId.get(binding.materialId)?.name ?? binding.materialId}, ${LIMIT_WORDS[binding.limit] ?? binding.limit}` : "",
+        binding ? `${byId.get(binding.materialId)?.name ?? binding.materialId}, ${LIMIT_LABELS[binding.limit]}` : "",
       ],
     );
   }

@@ -1,0 +1,35 @@
+/**
+ * Words for the engine's codes, shared by the screens and the spreadsheets
+ * so that a recipe line's role or a thermal limit reads the same in both.
+ * Framework-free; each map is typed over the engine's own union, so a new
+ * code without words fails type-checking.
+ */
+import type { LineRole, MaterialKind, ThermalLimit } from "@/lib/formulation";
+
+/** Words for a recipe line's role. */
+export const LINE_ROLE_LABELS: Record<LineRole, string> = {
+  precursor: "Precursor",
+  organic: "Organic phase",
+  solvent: "Solvent",
+  water: "Water",
+  catalyst: "Catalyst",
+};
+
+/** Words for a material's kind. */
+export const KIND_LABELS: Record<MaterialKind, string> = {
+  precursor: "Precursor",
+  organic: "Organic phase",
+  substrate: "Substrate",
+  solvent: "Solvent",
+  water: "Water",
+  catalyst: "Catalyst",
+};
+
+/** Words for a thermal limit. */
+export const LIMIT_LABELS: Record<ThermalLimit, string> = {
+  degradationOnset: "degradation onset",
+  maxService: "maximum service temperature",
+  melting: "melting point",
+  glassTransition: "glass transition",
+  conversion: "conversion temperature",
+};
