@@ -1,4 +1,11 @@
-import { DEFAULT_THERMAL_MARGIN_C, ENGINE_VERSION, ML_PER_L, WATER_MOLAR_MASS_G_PER_MOL } from "./constants";
+import {
+  CATALYST_RATIO_CAUTION,
+  DEFAULT_THERMAL_MARGIN_C,
+  ENGINE_VERSION,
+  MIN_LINE_GRAMS,
+  ML_PER_L,
+  WATER_MOLAR_MASS_G_PER_MOL,
+} from "./constants";
 import { basisNotices } from "./basis-notices";
 import { solidMassFromBasis } from "./basis";
 import { compositeFigures, type BulkDensity, type PhaseInput } from "./composite";
@@ -7,6 +14,7 @@ import { dosePerNetworkAtom } from "./dosing";
 import { FormulationError } from "./errors";
 import type { FormulationInput } from "./input-schema";
 import { orderLines } from "./line-order";
+import { assayBalanceNotices, catalystRatioNotices, fractionsScaledNotice } from "./input-notices";
 import { indexMaterials, materialById, requireDensity, waterFractionOf, type IndexedMaterial } from "./material-index";
 import type { Material } from "./material-schema";
 import { organicAmounts } from "./organic";
@@ -102,6 +110,7 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
   const solidMass = solidMassFromBasis(input.basis);
 
   const lines: DecLine[] = [];
+  const inputNotices: Notice[] = [];
   // Running sol totals (g, mL), kept as lines are added.
   let solMass = ZERO;
   let solVolume = ZERO;
@@ -118,10 +127,14 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
   let hydrolysableGroupMol = ZERO;
   let carriedWaterMol = ZERO;
 
+  // Fractions within 0.5 % of 1 (33.3 / 33.3 / 33.3 %) are scaled to 1; the schema refused any beyond.
+  const fractionSum = input.components.reduce((sum, c) => sum.plus(dec(c.weightFraction)), ZERO);
+  const scaled = (value: number): Dec => (fractionSum.equals(1) ? dec(value) : dec(value).div(fractionSum));
+
   input.components.forEach((component, index) => {
     const entry = materialById(byId, component.materialId, `components.${index}.materialId`);
     const material = entry.material;
-    const weightFraction = dec(component.weightFraction);
+    const weightFraction = scaled(component.weightFraction);
     const present = !weightFraction.isZero();
     if (material.kind === "precursor") {
       const data = requirePrecursorData(entry);
@@ -131,7 +144,7 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
         materialId: material.id,
         residueFormula: data.residueFormula,
         weightFraction,
-        weightFractionValue: component.weightFraction,
+        weightFractionValue: toNumber(weightFraction),
         density: dec(data.residueDensity),
         densityValue: data.residueDensity,
       });
@@ -172,7 +185,7 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
       phases.push({
         materialId: material.id,
         weightFraction,
-        weightFractionValue: component.weightFraction,
+        weightFractionValue: toNumber(weightFraction),
         density: dec(a.phaseDensity),
         densityValue: a.phaseDensity,
       });
@@ -190,11 +203,11 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
       "the composition has no network-forming atoms (Si, Ti, Zr, Al, P); add a precursor that forms the oxide network",
     );
   }
-  if (!hydrolysableGroupMol.greaterThan(0)) {
+  if (input.water.ratio === "h" && !hydrolysableGroupMol.greaterThan(0)) {
     throw new FormulationError(
       "no_hydrolysable_groups",
-      "components",
-      "the composition has no hydrolysable groups, so the water ratio cannot be referred to them; add an alkoxide precursor",
+      "water.ratio",
+      "the composition has no hydrolysable (alkoxy) groups, so a water ratio h per group cannot be used; set R (water per network-forming atom) instead",
     );
   }
 
@@ -203,6 +216,7 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
     const entry = materialById(byId, input.catalyst.materialId, "catalyst.materialId");
     const a = dosePerNetworkAtom(entry, dec(input.catalyst.molPerNetworkAtom), networkAtomMol);
     addLine({ materialId: entry.material.id, role: "catalyst", ...a });
+    inputNotices.push(...catalystRatioNotices(input.catalyst.molPerNetworkAtom, entry.material.name));
     carriedWaterMol = carriedWaterMol.plus(a.carriedWaterMol);
   }
 
@@ -237,6 +251,7 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
       waterNeededMol: targetMol.minus(carriedWaterMol),
       solvent: solventEntry,
       water: waterEntry,
+      solidGrams: solidMass,
     });
     const solventMaterial = solventEntry.material;
     const solventCarried = fill.solventGrams.times(waterFractionOf(solventMaterial)).div(WATER_MOLAR_MASS);
@@ -262,6 +277,7 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
 
   let addGrams = ZERO;
   let addMl = ZERO;
+  if (addMol.times(waterMolarMass).lessThan(MIN_LINE_GRAMS)) addMol = ZERO;
   if (addMol.greaterThan(0)) {
     addGrams = addMol.times(waterMolarMass);
     addMl = addGrams.div(requireDensity(waterEntry));
@@ -308,6 +324,9 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
   }
 
   const notices: Notice[] = [
+    ...fractionsScaledNotice(fractionSum),
+    ...inputNotices,
+    ...assayBalanceNotices(dispensed.map((material) => ({ material, path: byId.get(material.id)!.path }))),
     ...waterNotices({ targetMol, carriedMol: carriedWaterMol, totalMol: totalWaterMol, networkAtomMol, hydrolysableGroupMol }),
     ...basisNotices({ basis, fill: input.solvent?.mode === "fill", solMassGrams: solMass, solVolumeMl: solVolume, solidMassGrams: solidMass }),
     ...(composite.dryGelShrinkage && composite.dryGelShrinkage.volumetric < 0
@@ -337,7 +356,7 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
       hydrolysisMol: toNumber(hydrolysableGroupMol),
       condensationMol: toNumber(hydrolysableGroupMol.div(2)),
       effectiveR: toNumber(totalWaterMol.div(networkAtomMol)),
-      effectiveH: toNumber(totalWaterMol.div(hydrolysableGroupMol)),
+      ...(hydrolysableGroupMol.isZero() ? {} : { effectiveH: toNumber(totalWaterMol.div(hydrolysableGroupMol)) }),
     },
     alcohol,
     sol: {

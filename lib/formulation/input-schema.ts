@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { WEIGHT_FRACTION_SUM_TOLERANCE } from "./constants";
+import { WEIGHT_FRACTION_SCALE_TOLERANCE } from "./constants";
 import { dec, ZERO } from "./decimal";
 import { nameText } from "./text-rules";
 import { materialSchema, type Material, type MaterialKind } from "./material-schema";
@@ -110,12 +110,18 @@ export const catalystSpecSchema = z.object(
   { error: required("catalyst", "an object") },
 );
 
+/** Where a step happens: in the liquid sol, while drying, or while curing (annealing included). */
+export const STEP_STAGES = ["sol", "drying", "curing"] as const;
+/** The gas over a step. */
+export const STEP_ATMOSPHERES = ["air", "inert"] as const;
+
 /**
- * A process step: name, temperature (°C) and duration (h).
+ * A process step: name, temperature (°C), duration (h), stage (default
+ * "curing", so stored schedules keep their checks) and atmosphere (default "air").
  *
  * @example
  * ```ts
- * processStepSchema.parse({ name: "Thermal cure", temperatureC: 120, durationH: 2 });
+ * processStepSchema.parse({ name: "Thermal cure", temperatureC: 120, durationH: 2, stage: "curing" });
  * ```
  */
 export const processStepSchema = z.object(
@@ -123,6 +129,8 @@ export const processStepSchema = z.object(
     name: nameText("step name", { max: 200 }),
     temperatureC: rangedNumber("step temperature (°C)", TEMPERATURE_C),
     durationH: rangedNumber("step duration (h)", DURATION_H),
+    stage: z.enum(STEP_STAGES, { error: 'step stage must be "sol", "drying" or "curing"' }).optional(),
+    atmosphere: z.enum(STEP_ATMOSPHERES, { error: 'step atmosphere must be "air" or "inert"' }).optional(),
   },
   { error: required("process step", "an object") },
 );
@@ -163,7 +171,7 @@ function checkReference(
 /**
  * Everything the engine needs, inline (the engine never reads a database).
  * Shapes and ranges are checked field by field; cross-field checks (weight
- * fractions summing to 1 within 1e-6, references to known materials of the
+ * fractions summing to 1 within 0.5 %, scaled to 1 by the engine; references to known materials of the
  * right kind, no fill without a sol mass or mould volume) are custom issues
  * whose `params.code` is the FormulationError code.
  *
@@ -214,12 +222,12 @@ export const formulationInputSchema = z
       seen.add(component.materialId);
       total = total.plus(dec(component.weightFraction));
     });
-    if (total.minus(1).abs().greaterThan(WEIGHT_FRACTION_SUM_TOLERANCE)) {
+    if (total.minus(1).abs().greaterThan(WEIGHT_FRACTION_SCALE_TOLERANCE)) {
       addIssue(
         ctx,
         ["components"],
         "fractions_do_not_sum",
-        `weight fractions sum to ${Number(total.toPrecision(8))}, they must sum to 1`,
+        `weight fractions sum to ${Number(total.toPrecision(8))}, they must sum to 1 (a sum within 0.5 % of 1 is scaled to 1)`,
       );
     }
 

@@ -102,20 +102,24 @@ export const precursorDataSchema = z.object(
 );
 
 /**
- * Thermal limits, °C: glass transition, melting, degradation onset (e.g.
- * onset of mass loss in thermogravimetry) and a grade-specific maximum
+ * Thermal limits, °C: glass transition, melting, degradation onset in air
+ * (e.g. onset of mass loss in thermogravimetry) and, optionally, in inert
+ * gas; for plastics a short-term limit, the heat deflection temperature at
+ * 1.8 MPa (ISO 75-2 method A), and a grade-specific long-term maximum
  * service temperature.
  *
  * @example
  * ```ts
- * thermalDataSchema.parse({ glassTransitionC: 147, degradationOnsetC: 450, maxServiceC: 125 });
+ * thermalDataSchema.parse({ glassTransitionC: 147, degradationOnsetC: 450, heatDeflectionC: 132, maxServiceC: 125 });
  * ```
  */
 export const thermalDataSchema = z.object(
   {
     glassTransitionC: rangedNumber("glass transition (°C)", TEMPERATURE_C).optional(),
     meltingC: rangedNumber("melting point (°C)", TEMPERATURE_C).optional(),
-    degradationOnsetC: rangedNumber("degradation onset (°C)", TEMPERATURE_C).optional(),
+    degradationOnsetC: rangedNumber("degradation onset in air (°C)", TEMPERATURE_C).optional(),
+    degradationOnsetInertC: rangedNumber("degradation onset in inert gas (°C)", TEMPERATURE_C).optional(),
+    heatDeflectionC: rangedNumber("heat deflection temperature at 1.8 MPa (°C)", TEMPERATURE_C).optional(),
     maxServiceC: rangedNumber("maximum service temperature (°C)", TEMPERATURE_C).optional(),
   },
   { error: required("thermal data", "an object") },

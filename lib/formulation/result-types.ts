@@ -44,8 +44,8 @@ export interface WaterResult {
   condensationMol: number;
   /** (C + added) / Σa. */
   effectiveR: number;
-  /** (C + added) / Σg. */
-  effectiveH: number;
+  /** (C + added) / Σg; absent when there are no hydrolysable groups (colloidal silica alone). */
+  effectiveH?: number;
 }
 
 /** Alcohol released on full hydrolysis. */
@@ -103,7 +103,14 @@ export interface CompositeResult {
 export type ThermalStatus = "clear" | "caution" | "fail";
 
 /** Which thermal limit a check or the allowed maximum refers to. */
-export type ThermalLimit = "degradationOnset" | "maxService" | "melting" | "glassTransition" | "conversion";
+export type ThermalLimit =
+  | "degradationOnset"
+  | "degradationOnsetInert"
+  | "heatDeflection"
+  | "maxService"
+  | "melting"
+  | "glassTransition"
+  | "conversion";
 
 /** One (material × step) thermal check. */
 export interface ThermalCheck {
@@ -117,6 +124,10 @@ export interface ThermalCheck {
   /** °C margin applied. */
   marginC: number;
   status: ThermalStatus;
+  /** The step's stage ("curing" when the step did not say); absent in results stored before stages existed. */
+  stage?: "sol" | "drying" | "curing";
+  /** The step's atmosphere ("air" when the step did not say); absent in results stored before atmospheres existed. */
+  atmosphere?: "air" | "inert";
 }
 
 /** Thermal compatibility of the process steps. */

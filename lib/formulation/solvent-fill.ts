@@ -1,4 +1,4 @@
-import { WATER_MOLAR_MASS_G_PER_MOL } from "./constants";
+import { MIN_LINE_GRAMS, WATER_MOLAR_MASS_G_PER_MOL } from "./constants";
 import { type Dec, dec, ONE, WATER_MOLAR_MASS, ZERO } from "./decimal";
 import { FormulationError } from "./errors";
 import { requireDensity, waterFractionOf, type IndexedMaterial } from "./material-index";
@@ -45,6 +45,8 @@ export function solveFill(p: {
   waterNeededMol: Dec;
   solvent: IndexedMaterial;
   water: IndexedMaterial;
+  /** S, g of dry composite: lets the error state the highest reachable solids content. */
+  solidGrams?: Dec;
 }): FillResult {
   const isVolume = p.target.kind === "volume";
   const needMol = p.waterNeededMol.greaterThan(0) ? p.waterNeededMol : ZERO;
@@ -81,9 +83,12 @@ export function solveFill(p: {
     }
   }
 
+  // No room left: a remainder within rounding of zero is no solvent at all, not a 1e-14 g line or an error.
+  if (solventGrams.abs().lessThan(MIN_LINE_GRAMS)) solventGrams = ZERO;
   if (solventGrams.isNegative()) {
     const unit = isVolume ? "mL" : "g";
     const show = (value: Dec): string => String(Number(value.toPrecision(5)));
+    const show4 = (value: Dec): string => String(Number(value.toPrecision(4)));
     if (isVolume) {
       throw new FormulationError(
         "mould_too_small",
@@ -96,7 +101,9 @@ export function solveFill(p: {
       "solids_content_too_high",
       "basis.solidsFraction",
       `the reagents alone weigh ${show(reagentsAlone)} ${unit}, more than the ${show(p.target.amount)} ${unit} sol; ` +
-        "lower the solids content",
+        (p.solidGrams
+          ? `lower the solids content: the highest these reagents reach is ${show4(p.solidGrams.div(reagentsAlone))} (with no solvent added)`
+          : "lower the solids content"),
     );
   }
   return { solventGrams, addWaterMol };

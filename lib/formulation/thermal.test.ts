@@ -48,6 +48,8 @@ describe("thermal checks on a polycarbonate substrate", () => {
       limitC: 125,
       marginC: 20,
       status: "clear",
+      stage: "curing",
+      atmosphere: "air",
     });
   });
 
@@ -157,7 +159,7 @@ describe("checkThermal", () => {
     const reached = checkThermal([], [conversion], [step(25), step(550, "Anneal")], 20);
     expect(reached.thermal.status).toBe("clear");
     expect(reached.thermal.checks).toEqual([
-      { materialId: "ca", stepName: "Anneal", temperatureC: 550, limit: "conversion", limitC: 550, marginC: 20, status: "clear" },
+      { materialId: "ca", stepName: "Anneal", temperatureC: 550, limit: "conversion", limitC: 550, marginC: 20, status: "clear", stage: "curing", atmosphere: "air" },
     ]);
   });
 

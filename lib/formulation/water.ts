@@ -34,6 +34,27 @@ export function waterToAdd(targetMol: Dec, carriedMol: Dec): Dec {
   return add.isNegative() ? ZERO : add;
 }
 
+/**
+ * Relative tolerance of the water-ratio comparisons (dimensionless): R = 4
+ * with two tetra-alkoxides is exactly the full-hydrolysis ratio even when
+ * the two sums differ in the 20th digit. Common practice, no source.
+ */
+export const WATER_RATIO_TOLERANCE = 1e-9;
+
+/**
+ * True when `value` is below `reference` by more than the relative
+ * tolerance WATER_RATIO_TOLERANCE.
+ *
+ * @example
+ * ```ts
+ * clearlyBelow(new Dec("3.99999999999999999999"), new Dec(4)); // false
+ * clearlyBelow(new Dec(3.99), new Dec(4)); // true
+ * ```
+ */
+export function clearlyBelow(value: Dec, reference: Dec): boolean {
+  return value.lessThan(reference.times(1 - WATER_RATIO_TOLERANCE));
+}
+
 /** Formats a number for a notice (display only). */
 function show(value: Dec): string {
   return String(Number(value.toPrecision(4)));
@@ -62,18 +83,20 @@ export function waterNotices(p: {
 }): Notice[] {
   const notices: Notice[] = [];
   const effectiveR = (): Dec => p.totalMol.div(p.networkAtomMol);
-  if (p.carriedMol.greaterThan(p.targetMol)) {
+  if (clearlyBelow(p.targetMol, p.carriedMol)) {
     notices.push({
       level: "caution",
       code: "carried_water_exceeds_target",
       field: "water.value",
       message:
         `The other materials already bring ${show(p.carriedMol)} mol water, more than the target ${show(p.targetMol)} mol; ` +
-        `no water is added and the ratio reached is R = ${show(effectiveR())} (h = ${show(p.totalMol.div(p.hydrolysableGroupMol))}).`,
+        `no water is added and the ratio reached is R = ${show(effectiveR())}` +
+        (p.hydrolysableGroupMol.isZero() ? "." : ` (h = ${show(p.totalMol.div(p.hydrolysableGroupMol))}).`),
     });
   }
   const netCondensation = p.hydrolysableGroupMol.div(2);
-  if (p.totalMol.lessThan(netCondensation)) {
+  if (p.hydrolysableGroupMol.isZero()) return notices;
+  if (clearlyBelow(p.totalMol, netCondensation)) {
     notices.push({
       level: "caution",
       code: "below_net_condensation",
@@ -82,7 +105,7 @@ export function waterNotices(p: {
         `Effective R = ${show(effectiveR())} is below the net-condensation ratio ${show(netCondensation.div(p.networkAtomMol))}: ` +
         "not enough water for complete condensation, alkoxy groups will remain in the gel.",
     });
-  } else if (p.totalMol.lessThan(p.hydrolysableGroupMol)) {
+  } else if (clearlyBelow(p.totalMol, p.hydrolysableGroupMol)) {
     notices.push({
       level: "info",
       code: "below_full_hydrolysis",

@@ -214,7 +214,7 @@ describe("computeFormulation worked examples", () => {
     });
     expect(annealed.thermal.status).toBe("clear");
     expect(annealed.thermal.checks).toEqual([
-      { materialId: "ca-nitrate-4h2o", stepName: "Anneal", temperatureC: 600, limit: "conversion", limitC: 550, marginC: 20, status: "clear" },
+      { materialId: "ca-nitrate-4h2o", stepName: "Anneal", temperatureC: 600, limit: "conversion", limitC: 550, marginC: 20, status: "clear", stage: "curing", atmosphere: "air" },
     ]);
   });
 
