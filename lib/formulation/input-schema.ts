@@ -56,19 +56,29 @@ export const componentSchema = z.object(
   { error: required("component", "an object") },
 );
 
+/** How the water target is stated (chemistry: "Water"). */
+export const WATER_RATIOS = ["R", "h", "perPrecursor"] as const;
+
 /**
- * Water target: R (mol H2O per mol network-forming atom) or h (per mol hydrolysable group).
+ * Water target: R (mol H2O per mol network-forming atom, the "h = H2O/M" of
+ * many transition-metal papers), h (per mol hydrolysable group left after
+ * ligand exchange) or perPrecursor (per mol of the precursor `referenceId`,
+ * e.g. H2O : TEOS = 12). `countCarried` (default true): water carried by the
+ * other materials counts toward the target; false adds the whole target.
  *
  * @example
  * ```ts
  * waterSpecSchema.parse({ materialId: "water-di", ratio: "R", value: 4 });
+ * waterSpecSchema.parse({ materialId: "water-di", ratio: "perPrecursor", referenceId: "teos", value: 12, countCarried: false });
  * ```
  */
 export const waterSpecSchema = z.object(
   {
     materialId: nonEmptyString("water material id"),
-    ratio: z.enum(["R", "h"], { error: 'water ratio must be "R" or "h"' }),
+    ratio: z.enum(WATER_RATIOS, { error: 'water ratio must be "R", "h" or "perPrecursor"' }),
     value: rangedNumber("water ratio", MOLAR_RATIO),
+    referenceId: nonEmptyString("reference precursor").optional(),
+    countCarried: z.boolean({ error: "count carried water must be true or false" }).optional(),
   },
   { error: required("water", "an object") },
 );
@@ -135,6 +145,24 @@ export const processStepSchema = z.object(
   { error: required("process step", "an object") },
 );
 
+/**
+ * A modifier line: `molPerMetal` mol of the modifier `materialId` per mol of
+ * network-forming atoms of the precursor `precursorId` (x = 0.5–2 is usual).
+ *
+ * @example
+ * ```ts
+ * modifierSpecSchema.parse({ materialId: "acac", precursorId: "ti-isopropoxide", molPerMetal: 1 });
+ * ```
+ */
+export const modifierSpecSchema = z.object(
+  {
+    materialId: nonEmptyString("modifier"),
+    precursorId: nonEmptyString("modified precursor"),
+    molPerMetal: rangedNumber("modifier ratio (mol per mol metal)", MOLAR_RATIO),
+  },
+  { error: required("modifier", "an object") },
+);
+
 type Ctx = z.RefinementCtx;
 
 function addIssue(ctx: Ctx, path: (string | number)[], code: string, message: string): void {
@@ -148,6 +176,7 @@ const KIND_WORDS: Record<MaterialKind, string> = {
   solvent: "a solvent",
   water: "water",
   catalyst: "a catalyst",
+  modifier: "a modifier",
 };
 
 function checkReference(
@@ -192,6 +221,7 @@ export const formulationInputSchema = z
       water: waterSpecSchema,
       solvent: solventSpecSchema.optional(),
       catalyst: catalystSpecSchema.optional(),
+      modifiers: z.array(modifierSpecSchema, { error: required("modifiers", "a list") }).optional(),
       substrateId: nonEmptyString("substrate id").optional(),
       steps: z.array(processStepSchema, { error: required("process steps", "a list") }),
       marginC: rangedNumber("thermal margin (°C)", MARGIN_C).optional(),
@@ -232,6 +262,24 @@ export const formulationInputSchema = z
     }
 
     checkReference(ctx, byId, input.water.materialId, ["water", "materialId"], ["water"]);
+    const componentPrecursor = (id: string): boolean => seen.has(id) && byId.get(id)?.kind === "precursor";
+    if (input.water.ratio === "perPrecursor") {
+      if (input.water.referenceId === undefined) {
+        addIssue(ctx, ["water", "referenceId"], "invalid_input", "choose the precursor the water ratio refers to");
+      } else if (!componentPrecursor(input.water.referenceId)) {
+        addIssue(ctx, ["water", "referenceId"], "invalid_input", `"${input.water.referenceId}" is not a precursor of this composition`);
+      }
+    }
+    input.modifiers?.forEach((modifier, index) => {
+      checkReference(ctx, byId, modifier.materialId, ["modifiers", index, "materialId"], ["modifier"]);
+      const material = byId.get(modifier.materialId);
+      if (material?.kind === "modifier" && !material.modifier) {
+        addIssue(ctx, ["modifiers", index, "materialId"], "invalid_input", `"${material.name}" has no modifier data (groups replaced, bonded ligand)`);
+      }
+      if (!componentPrecursor(modifier.precursorId)) {
+        addIssue(ctx, ["modifiers", index, "precursorId"], "invalid_input", `"${modifier.precursorId}" is not a precursor of this composition`);
+      }
+    });
     if (input.solvent) {
       checkReference(ctx, byId, input.solvent.materialId, ["solvent", "materialId"], ["solvent"]);
       if (input.solvent.mode === "fill" && input.basis.type === "solidMass") {
@@ -262,5 +310,7 @@ export type FormulationInput = z.infer<typeof formulationInputSchema>;
 export type Basis = z.infer<typeof basisSchema>;
 /** A dry-composite component, see `componentSchema`. */
 export type Component = z.infer<typeof componentSchema>;
+/** A modifier line, see `modifierSpecSchema`. */
+export type ModifierSpec = z.infer<typeof modifierSpecSchema>;
 /** A process step, see `processStepSchema`. */
 export type ProcessStep = z.infer<typeof processStepSchema>;

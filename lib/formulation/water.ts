@@ -2,21 +2,21 @@ import { Dec, ZERO } from "./decimal";
 import type { Notice } from "./result-types";
 
 /**
- * Target water W, mol: R · Σa (R = mol H2O per mol network-forming atom) or
- * h · Σg (h = mol H2O per mol hydrolysable group).
+ * Target water W, mol (chemistry: "Water"): R · Σa (R = mol H2O per mol
+ * network-forming atom), h · Σg' (h = mol H2O per mol hydrolysable group
+ * left after ligand exchange) or value · n_ref (per mol of one precursor).
  *
- * @param ratio - "R" or "h"
+ * @param ratio - "R", "h" or "perPrecursor"
  * @param value - the ratio's value
- * @param networkAtomMol - Σa, mol
- * @param hydrolysableGroupMol - Σg, mol
+ * @param mol - Σa, Σg' and n_ref, mol
  * @returns W in mol (decimal)
  * @example
  * ```ts
- * waterTarget("R", new Dec(4), new Dec(0.1), new Dec(0.4)).toNumber(); // 0.4 mol
+ * waterTarget("R", new Dec(4), { networkAtomMol: new Dec(0.1), groupMol: new Dec(0.4), referenceMol: new Dec(0.1) }).toNumber(); // 0.4 mol
  * ```
  */
-export function waterTarget(ratio: "R" | "h", value: Dec, networkAtomMol: Dec, hydrolysableGroupMol: Dec): Dec {
-  return value.times(ratio === "R" ? networkAtomMol : hydrolysableGroupMol);
+export function waterTarget(ratio: "R" | "h" | "perPrecursor", value: Dec, mol: { networkAtomMol: Dec; groupMol: Dec; referenceMol: Dec }): Dec {
+  return value.times(ratio === "R" ? mol.networkAtomMol : ratio === "h" ? mol.groupMol : mol.referenceMol);
 }
 
 /**
@@ -80,10 +80,12 @@ export function waterNotices(p: {
   totalMol: Dec;
   networkAtomMol: Dec;
   hydrolysableGroupMol: Dec;
+  /** False when the carried water does not count toward the target (then no "exceeds" caution). */
+  countCarried?: boolean;
 }): Notice[] {
   const notices: Notice[] = [];
   const effectiveR = (): Dec => p.totalMol.div(p.networkAtomMol);
-  if (clearlyBelow(p.targetMol, p.carriedMol)) {
+  if ((p.countCarried ?? true) && clearlyBelow(p.targetMol, p.carriedMol)) {
     notices.push({
       level: "caution",
       code: "carried_water_exceeds_target",
