@@ -143,6 +143,65 @@ describe("bug 4: glass-transition cautions only for amorphous substrates", () =>
   });
 });
 
+describe("bug 3: solvent carried by a precursor solution counts toward the same solvent's molar ratio", () => {
+  it("returns a propanol ratio of exactly 2 when the form says 2, counting the propanol of the zirconium solution", () => {
+    // GPTMS 75 % + ZrO2 25 % of 50 g from a 70 % Zr(OPr)4 solution in 1-propanol (data/materials.ts, solventId "1-propanol").
+    // Before the fix the 14.24 g of carried propanol was ignored and the real ratio came out above 2.
+    const input: FormulationInput = {
+      materials: [ref("gptms"), ref("zr-propoxide-70"), ref("methacrylic-acid"), ref("1-propanol"), ref("water-di")],
+      basis: { type: "solidMass", grams: 50 },
+      components: [
+        { materialId: "gptms", weightFraction: 0.75 },
+        { materialId: "zr-propoxide-70", weightFraction: 0.25 },
+      ],
+      modifiers: [{ materialId: "methacrylic-acid", precursorId: "zr-propoxide-70", molPerMetal: 1 }],
+      water: { materialId: "water-di", ratio: "R", value: 1.5 },
+      solvent: { materialId: "1-propanol", mode: "molPerNetworkAtom", value: 2 },
+      steps: [],
+    };
+    const result = computeFormulation(input);
+    const atoms = result.lines.reduce((s, l) => s + (l.networkAtomMol ?? 0), 0);
+    const propanol = (line(result, "1-propanol").massGrams + (line(result, "zr-propoxide-70").carriedSolventGrams ?? 0)) / 60.096;
+    expectClose(propanol / atoms, 2, 1e-12);
+    expectClose(result.solvent?.molPerNetworkAtom, 2, 1e-12);
+  });
+});
+
+describe("bug 5: melting cautions only in drying and curing", () => {
+  const withOrganic = (id: string, temperatureC: number, stage: "sol" | "drying" | "curing"): FormulationInput => ({
+    materials: [ref("teos"), ref(id), ref("water-di"), ref("ethanol")],
+    basis: { type: "solidMass", grams: 10 },
+    components: [
+      { materialId: "teos", weightFraction: 0.8 },
+      { materialId: id, weightFraction: 0.2 },
+    ],
+    water: { materialId: "water-di", ratio: "R", value: 4 },
+    solvent: { materialId: "ethanol", mode: "molPerNetworkAtom", value: 4 },
+    steps: [{ name: "Step", temperatureC, durationH: 1, stage }],
+  });
+
+  it("returns clear for PEG (Tm 52 °C) aged at 60 °C in the sol", () => {
+    expect(computeFormulation(withOrganic("peg-2000", 60, "sol")).thermal.status).toBe("clear");
+  });
+
+  it("returns clear for a gelatin sol made at 37 °C (Tm 35 °C)", () => {
+    expect(computeFormulation(withOrganic("gelatin", 37, "sol")).thermal.status).toBe("clear");
+  });
+
+  it("still cautions when PEG is dried at 60 °C", () => {
+    expect(computeFormulation(withOrganic("peg-2000", 60, "drying")).thermal.status).toBe("caution");
+  });
+});
+
+describe("bug 6: a short cure above a plastic's long-term rating is a caution, not a failure", () => {
+  it("returns caution, with the hours above 125 °C, for polycarbonate cured 30 min at 128 °C", () => {
+    const input: FormulationInput = { ...mix([["teos", 1]], 4, [ref("polycarbonate")]), substrateId: "polycarbonate", steps: [{ name: "Cure", temperatureC: 128, durationH: 0.5 }] };
+    const result = computeFormulation(input);
+    expect(result.thermal.status).toBe("caution");
+    expect(result.notices.find((n) => n.code === "above_service_rating")?.message).toContain("0.5 h");
+  });
+});
+
 describe("bug 7: smaller defects", () => {
   const fill = (solidsFraction: number): FormulationInput => ({
     ...mix([["teos", 1]], 4),
