@@ -23,6 +23,8 @@ const SRC = {
   residueSilsesquioxane:
     "R-SiO1.5 unit kept by an organically modified silane on complete condensation (R stays bonded to Si); Brinker & Scherer, Sol-Gel Science (1990)",
   silsesquioxaneDensity: "typical skeletal density of an organosilsesquioxane network (from memory)",
+  fastHydrolysis:
+    "transition-metal and aluminium alkoxides hydrolyse orders of magnitude faster than silicon alkoxides; Livage, Henry & Sanchez, Prog. Solid State Chem. 18 (1988) 259",
   fusedSilica: "CRC Handbook of Chemistry and Physics, fused (amorphous) silica ≈ 2.20 g/cm³",
   anatase: "CRC Handbook of Chemistry and Physics, TiO2 anatase (from memory); amorphous sol-gel titania is less dense",
   zirconia: "CRC Handbook of Chemistry and Physics, ZrO2 monoclinic (from memory); amorphous sol-gel zirconia is less dense",
@@ -36,6 +38,13 @@ const SRC = {
   polymerHandbook: "Polymer Handbook, 4th ed. (Brandrup, Immergut, Grulke, 1999), typical value (from memory)",
   markHandbook: "Mark, Physical Properties of Polymers Handbook, typical value (from memory)",
   tga: "onset of mass loss in thermogravimetry, typical value (from memory)",
+  hdt: "heat deflection temperature at 1.8 MPa, ISO 75-2 method A, typical unfilled general-purpose grade (from memory); check the grade's data sheet",
+  amorphousTitania:
+    "amorphous titania in hybrids cured below about 300 °C, ≈ 2.4–3.0 g/cm³ (ellipsometry and porosimetry of sol-gel films, from memory; anatase is 3.9)",
+  amorphousZirconia:
+    "amorphous zirconia in hybrids cured below about 300 °C, ≈ 3.3–4.0 g/cm³ (from memory; monoclinic zirconia is 5.68)",
+  amorphousAlumina:
+    "amorphous alumina (boehmite-like oxo-hydroxide) in hybrids cured below about 300 °C, ≈ 2.5–3.0 g/cm³ (from memory; corundum is 3.99)",
   gradeMax: "typical continuous-use maximum of common grades (from memory); check the grade's data sheet",
   stock: "nominal concentration of the commercial stock; the balance is water",
   ghs: "GHS hazard statements as commonly listed by suppliers (from memory); check the supplier's safety data sheet",
@@ -253,13 +262,14 @@ const precursors: Material[] = [
       residueFormula: "TiO2",
       residueMolarMass: 79.865,
       residuePerMolecule: 1,
-      residueDensity: 3.9,
+      residueDensity: 2.7,
       networkAtomsPerMolecule: 1,
       hydrolysableGroupsPerMolecule: 4,
       leavingAlcohol: ALCOHOL.propan2ol,
     },
+    fastHydrolysing: true,
     hazards: ["H226", "H319", "H336"],
-    sources: { ...alkoxideSources, density: SRC.supplierDensity, "precursor.residueDensity": SRC.anatase },
+    sources: { ...alkoxideSources, density: SRC.supplierDensity, "precursor.residueDensity": SRC.amorphousTitania, fastHydrolysing: SRC.fastHydrolysis },
   },
   {
     id: "ti-butoxide",
@@ -273,13 +283,14 @@ const precursors: Material[] = [
       residueFormula: "TiO2",
       residueMolarMass: 79.865,
       residuePerMolecule: 1,
-      residueDensity: 3.9,
+      residueDensity: 2.7,
       networkAtomsPerMolecule: 1,
       hydrolysableGroupsPerMolecule: 4,
       leavingAlcohol: ALCOHOL.butan1ol,
     },
+    fastHydrolysing: true,
     hazards: ["H226", "H315", "H318", "H335", "H336"],
-    sources: { ...alkoxideSources, density: SRC.supplierDensity, "precursor.residueDensity": SRC.anatase },
+    sources: { ...alkoxideSources, density: SRC.supplierDensity, "precursor.residueDensity": SRC.amorphousTitania, fastHydrolysing: SRC.fastHydrolysis },
   },
   {
     id: "zr-propoxide-70",
@@ -295,18 +306,22 @@ const precursors: Material[] = [
       residueFormula: "ZrO2",
       residueMolarMass: 123.222,
       residuePerMolecule: 1,
-      residueDensity: 5.68,
+      residueDensity: 3.6,
       networkAtomsPerMolecule: 1,
       hydrolysableGroupsPerMolecule: 4,
       leavingAlcohol: ALCOHOL.propan1ol,
     },
+    solventId: "1-propanol",
+    fastHydrolysing: true,
     hazards: ["H225", "H318", "H336"],
     sources: {
       ...alkoxideSources,
       density: "supplier data sheet value for the 70 wt% solution, 25 °C (from memory)",
       assay: "nominal concentration of the commercial solution",
       solventFraction: "balance of the commercial solution is 1-propanol",
-      "precursor.residueDensity": SRC.zirconia,
+      solventId: "balance of the commercial solution is 1-propanol",
+      "precursor.residueDensity": SRC.amorphousZirconia,
+      fastHydrolysing: SRC.fastHydrolysis,
     },
   },
   {
@@ -321,13 +336,14 @@ const precursors: Material[] = [
       residueFormula: "Al2O3",
       residueMolarMass: 101.961,
       residuePerMolecule: 0.5,
-      residueDensity: 3.99,
+      residueDensity: 2.8,
       networkAtomsPerMolecule: 1,
       hydrolysableGroupsPerMolecule: 3,
       leavingAlcohol: ALCOHOL.butan2ol,
     },
+    fastHydrolysing: true,
     hazards: ["H226", "H315", "H318"],
-    sources: { ...alkoxideSources, density: SRC.supplierDensity, "precursor.residueDensity": SRC.alumina },
+    sources: { ...alkoxideSources, density: SRC.supplierDensity, "precursor.residueDensity": SRC.amorphousAlumina, fastHydrolysing: SRC.fastHydrolysis },
   },
   {
     id: "triethyl-phosphate",
@@ -346,8 +362,14 @@ const precursors: Material[] = [
       hydrolysableGroupsPerMolecule: 3,
       leavingAlcohol: ALCOHOL.ethanol,
     },
+    moistureSensitive: false,
     hazards: ["H302", "H319"],
-    sources: { ...alkoxideSources, density: SRC.crcOrganic, "precursor.residueDensity": SRC.phosphorusPentoxide },
+    sources: {
+      ...alkoxideSources,
+      density: SRC.crcOrganic,
+      "precursor.residueDensity": SRC.phosphorusPentoxide,
+      moistureSensitive: "a phosphate ester, hydrolyses only slowly in neutral or acid sols and is not pyrophoric or flammable like the metal alkoxides (from memory)",
+    },
   },
   {
     id: "ca-nitrate-4h2o",
@@ -365,7 +387,7 @@ const precursors: Material[] = [
       residueDensity: 3.34,
       networkAtomsPerMolecule: 0,
       hydrolysableGroupsPerMolecule: 0,
-      conversionTemperatureC: 550,
+      conversionTemperatureC: 600,
     },
     hazards: ["H272", "H302", "H318"],
     sources: {
@@ -380,7 +402,78 @@ const precursors: Material[] = [
       "precursor.networkAtomsPerMolecule": "Ca is a network modifier, not a network former (common practice, no source)",
       "precursor.hydrolysableGroupsPerMolecule": "no alkoxy groups",
       "precursor.conversionTemperatureC":
-        "nitrate decomposition in sol-gel bioactive glasses needs roughly 500–600 °C (from memory)",
+        "nitrate decomposition in sol-gel bioactive glasses is complete at about 600 °C (stabilisation at 600–700 °C in the usual 58S route; from memory)",
+      hazards: SRC.ghs,
+      casNumber: SRC.cas,
+    },
+  },
+  {
+    id: "colloidal-silica-30",
+    name: "Colloidal silica, 30 wt% SiO2 in water",
+    kind: "precursor",
+    casNumber: "7631-86-9",
+    formula: "SiO2",
+    molarMass: 60.083,
+    density: 1.21,
+    assay: 0.3,
+    waterFraction: 0.7,
+    precursor: {
+      residueFormula: "SiO2",
+      residueMolarMass: 60.083,
+      residuePerMolecule: 1,
+      residueDensity: 2.2,
+      networkAtomsPerMolecule: 1,
+      hydrolysableGroupsPerMolecule: 0,
+    },
+    hazards: [],
+    sources: {
+      formula: "described per SiO2 unit (chemistry: colloidal and oligomeric precursors)",
+      molarMass: SRC.ciaaw,
+      density: "typical data sheet value of 30 wt% aqueous silica sols, 20 °C (from memory)",
+      assay: "nominal SiO2 content of the commercial sol",
+      waterFraction: "balance of the sol is water (the small alkali stabiliser is neglected)",
+      "precursor.residueFormula": "the particles are amorphous silica already",
+      "precursor.residueMolarMass": SRC.ciaaw,
+      "precursor.residuePerMolecule": "one SiO2 unit per formula unit",
+      "precursor.residueDensity": "colloidal silica ≈ 2.2 g/cm³ (Iler, The Chemistry of Silica, 1979, from memory)",
+      "precursor.networkAtomsPerMolecule": "one Si per SiO2 unit",
+      "precursor.hydrolysableGroupsPerMolecule": "no alkoxy groups: the particles condense through surface silanols",
+      hazards: SRC.ghsNone,
+      casNumber: SRC.cas,
+    },
+  },
+  {
+    id: "ethyl-silicate-40",
+    name: "Ethyl silicate 40 (oligomer, 40 wt% SiO2 equivalent)",
+    kind: "precursor",
+    casNumber: "11099-06-2",
+    formula: "C4.8H12O3.2Si",
+    molarMass: 149.031,
+    density: 1.05,
+    precursor: {
+      residueFormula: "SiO2",
+      residueMolarMass: 60.083,
+      residuePerMolecule: 1,
+      residueDensity: 2.2,
+      networkAtomsPerMolecule: 1,
+      hydrolysableGroupsPerMolecule: 2.4,
+      leavingAlcohol: ALCOHOL.ethanol,
+    },
+    moistureSensitive: true,
+    hazards: ["H226", "H319", "H332", "H335"],
+    sources: {
+      formula:
+        "average Si unit SiO0.8(OC2H5)2.4 of a 40 % grade: 2.4 ethoxy groups per Si (supplier figure, from memory); 60.083 / 149.03 = 40.3 wt% SiO2",
+      molarMass: SRC.ciaaw,
+      density: "typical supplier data sheet value, 20 °C (from memory)",
+      "precursor.residueFormula": SRC.residueOxide,
+      "precursor.residueMolarMass": SRC.ciaaw,
+      "precursor.residuePerMolecule": "one SiO2 per Si unit",
+      "precursor.residueDensity": SRC.fusedSilica,
+      "precursor.networkAtomsPerMolecule": "described per Si unit",
+      "precursor.hydrolysableGroupsPerMolecule": "≈ 2.4 ethoxy groups per Si for a 40 % grade (supplier figure, from memory)",
+      "precursor.leavingAlcohol": "ethoxy groups release ethanol; Brinker & Scherer, Sol-Gel Science (1990), ch. 3",
+      moistureSensitive: "an ethoxysilane oligomer: hydrolyses in moist air and is flammable (from memory)",
       hazards: SRC.ghs,
       casNumber: SRC.cas,
     },
@@ -408,13 +501,16 @@ const organics: Material[] = [
     casNumber: "25322-68-3",
     formula: "C2H4O",
     density: 1.2,
-    thermal: { glassTransitionC: -67, meltingC: 52, degradationOnsetC: 300 },
+    thermal: { glassTransitionC: -67, meltingC: 52, degradationOnsetC: 180, degradationOnsetInertC: 340 },
     hazards: [],
     sources: {
       ...polymerSources,
       density: "solid PEG 2000, typical value (from memory)",
       "thermal.glassTransitionC": "poly(ethylene oxide), " + SRC.polymerHandbook,
       "thermal.meltingC": "PEG 2000, typical supplier value (from memory)",
+      "thermal.degradationOnsetC":
+        "thermo-oxidative degradation of PEG in air starts far below its pyrolysis: onset ≈ 150–200 °C in air (from memory)",
+      "thermal.degradationOnsetInertC": "onset of mass loss of PEG in nitrogen ≈ 340–380 °C, thermogravimetry (from memory)",
     },
   },
   {
@@ -549,9 +645,9 @@ const substrates: Material[] = [
     casNumber: "25037-45-0",
     formula: "C16H14O3",
     density: 1.2,
-    thermal: { glassTransitionC: 147, degradationOnsetC: 450, maxServiceC: 125 },
+    thermal: { glassTransitionC: 147, degradationOnsetC: 450, heatDeflectionC: 132, maxServiceC: 125 },
     hazards: [],
-    sources: { ...substrateSources },
+    sources: { ...substrateSources, "thermal.heatDeflectionC": SRC.hdt },
   },
   {
     id: "pmma-sheet",
@@ -560,9 +656,9 @@ const substrates: Material[] = [
     casNumber: "9011-14-7",
     formula: "C5H8O2",
     density: 1.19,
-    thermal: { glassTransitionC: 105, degradationOnsetC: 250, maxServiceC: 80 },
+    thermal: { glassTransitionC: 105, degradationOnsetC: 250, heatDeflectionC: 95, maxServiceC: 80 },
     hazards: [],
-    sources: { ...substrateSources },
+    sources: { ...substrateSources, "thermal.heatDeflectionC": SRC.hdt },
   },
   {
     id: "peek",
@@ -571,9 +667,9 @@ const substrates: Material[] = [
     casNumber: "29658-26-2",
     formula: "C19H12O3",
     density: 1.3,
-    thermal: { glassTransitionC: 143, meltingC: 343, degradationOnsetC: 550, maxServiceC: 250 },
+    thermal: { glassTransitionC: 143, meltingC: 343, degradationOnsetC: 550, heatDeflectionC: 152, maxServiceC: 250 },
     hazards: [],
-    sources: { ...substrateSources, density: SRC.markHandbook },
+    sources: { ...substrateSources, density: SRC.markHandbook, "thermal.heatDeflectionC": SRC.hdt },
   },
   {
     id: "pet",
@@ -584,7 +680,11 @@ const substrates: Material[] = [
     density: 1.38,
     thermal: { glassTransitionC: 75, meltingC: 255, degradationOnsetC: 400, maxServiceC: 105 },
     hazards: [],
-    sources: { ...substrateSources },
+    sources: {
+      ...substrateSources,
+      "thermal.maxServiceC":
+        "oriented PET film, continuous use ≈ 105 °C (from memory); no heat deflection temperature is given: it is a moulded-bar test that does not describe a film",
+    },
   },
   {
     id: "pla",
@@ -593,9 +693,9 @@ const substrates: Material[] = [
     casNumber: "26100-51-6",
     formula: "C3H4O2",
     density: 1.24,
-    thermal: { glassTransitionC: 58, meltingC: 170, degradationOnsetC: 300, maxServiceC: 50 },
+    thermal: { glassTransitionC: 58, meltingC: 170, degradationOnsetC: 300, heatDeflectionC: 55, maxServiceC: 50 },
     hazards: [],
-    sources: { ...substrateSources, density: SRC.markHandbook },
+    sources: { ...substrateSources, density: SRC.markHandbook, "thermal.heatDeflectionC": SRC.hdt },
   },
   {
     id: "uhmwpe",
@@ -604,9 +704,9 @@ const substrates: Material[] = [
     casNumber: "9002-88-4",
     formula: "C2H4",
     density: 0.93,
-    thermal: { glassTransitionC: -120, meltingC: 135, degradationOnsetC: 400, maxServiceC: 80 },
+    thermal: { glassTransitionC: -120, meltingC: 135, degradationOnsetC: 400, heatDeflectionC: 47, maxServiceC: 80 },
     hazards: [],
-    sources: { ...substrateSources },
+    sources: { ...substrateSources, "thermal.heatDeflectionC": SRC.hdt },
   },
   {
     id: "aluminium-6061",
@@ -703,6 +803,17 @@ const solvents: Material[] = [
     molarMass: 74.123,
     density: 0.8095,
     hazards: ["H226", "H302", "H315", "H318", "H335", "H336"],
+    sources: { ...solventSources },
+  },
+  {
+    id: "1-methoxy-2-propanol",
+    name: "1-Methoxy-2-propanol",
+    kind: "solvent",
+    casNumber: "107-98-2",
+    formula: "C4H10O2",
+    molarMass: 90.122,
+    density: 0.922,
+    hazards: ["H226", "H336"],
     sources: { ...solventSources },
   },
 ];
@@ -802,7 +913,7 @@ function definedProperties(material: Material): Set<string> {
   const paths = new Set<string>();
   for (const [key, value] of Object.entries(material)) {
     if (value === undefined || value === null || ["id", "name", "kind", "sources"].includes(key)) continue;
-    if (key === "precursor" || key === "thermal") {
+    if (key === "precursor" || key === "thermal" || key === "modifier") {
       for (const [inner, innerValue] of Object.entries(value as object)) {
         if (innerValue !== undefined) paths.add(`${key}.${inner}`);
       }
@@ -829,6 +940,60 @@ function keepRelevantSources(material: Material): Material {
  * referenceMaterials.find((m) => m.id === "teos")?.molarMass; // 208.329 g/mol
  * ```
  */
+/** Sources shared by modifiers (chelating and exchanging ligands). */
+const modifierSources = {
+  formula: "composition of the compound",
+  molarMass: SRC.ciaaw,
+  density: SRC.crcOrganic,
+  "modifier.groupsReplacedPerMolecule":
+    "one alkoxy group per β-diketonate, β-ketoesterate or carboxylate ligand; Livage, Henry & Sanchez, Prog. Solid State Chem. 18 (1988) 259",
+  "modifier.bondedFormula": "the ligand anion less half an oxygen atom, as it stays in the oxide network (chemistry: modifiers)",
+  "modifier.bondedMolarMass": SRC.ciaaw,
+  "modifier.bondedDensity": "estimate for a bonded organic ligand phase, ≈ 1.2–1.3 g/cm³ (from memory)",
+  "modifier.removalTemperatureC": "chelating ligands burn out of titania and zirconia gels at about 300–400 °C in air, thermogravimetry (from memory)",
+  hazards: SRC.ghs,
+  casNumber: SRC.cas,
+} as const;
+
+const modifierMaterials: Material[] = [
+  {
+    id: "acac",
+    name: "Acetylacetone (2,4-pentanedione)",
+    kind: "modifier",
+    casNumber: "123-54-6",
+    formula: "C5H8O2",
+    molarMass: 100.117,
+    density: 0.975,
+    modifier: { groupsReplacedPerMolecule: 1, bondedFormula: "C5H7O1.5", bondedMolarMass: 91.11, bondedDensity: 1.25, removalTemperatureC: 350 },
+    hazards: ["H226", "H302", "H311", "H331"],
+    sources: { ...modifierSources },
+  },
+  {
+    id: "ethyl-acetoacetate",
+    name: "Ethyl acetoacetate",
+    kind: "modifier",
+    casNumber: "141-97-9",
+    formula: "C6H10O3",
+    molarMass: 130.143,
+    density: 1.029,
+    modifier: { groupsReplacedPerMolecule: 1, bondedFormula: "C6H9O2.5", bondedMolarMass: 121.136, bondedDensity: 1.25, removalTemperatureC: 350 },
+    hazards: ["H319"],
+    sources: { ...modifierSources },
+  },
+  {
+    id: "methacrylic-acid",
+    name: "Methacrylic acid",
+    kind: "modifier",
+    casNumber: "79-41-4",
+    formula: "C4H6O2",
+    molarMass: 86.09,
+    density: 1.015,
+    modifier: { groupsReplacedPerMolecule: 1, bondedFormula: "C4H5O1.5", bondedMolarMass: 77.083, bondedDensity: 1.2, removalTemperatureC: 300 },
+    hazards: ["H302", "H312", "H314", "H332", "H335"],
+    sources: { ...modifierSources },
+  },
+];
+
 export const referenceMaterials: Material[] = [
   ...precursors,
   ...organics,
@@ -836,6 +1001,7 @@ export const referenceMaterials: Material[] = [
   ...solvents,
   ...waters,
   ...catalysts,
+  ...modifierMaterials,
 ].map(keepRelevantSources);
 
 /**

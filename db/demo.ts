@@ -24,6 +24,7 @@ export function demoMaterialRefs(input: DemoInput): string[] {
   return [
     ...new Set<string>([
       ...input.components.map((c) => c.materialId),
+      ...(input.modifiers ?? []).map((m) => m.materialId),
       input.water.materialId,
       ...(input.solvent ? [input.solvent.materialId] : []),
       ...(input.catalyst ? [input.catalyst.materialId] : []),
@@ -40,11 +41,11 @@ export interface DemoFormulation {
   revisions: { input: DemoInput; state: "draft" | "in_review" | "approved" | "released" | "archived"; comment?: string }[];
 }
 
-const visorSteps = [
-  { name: "Hydrolysis, stirred", temperatureC: 25, durationH: 2 },
-  { name: "Ageing of the sol", temperatureC: 25, durationH: 24 },
-  { name: "Flash-off after dip coating", temperatureC: 60, durationH: 0.25 },
-  { name: "Thermal cure", temperatureC: 120, durationH: 2 },
+const visorSteps: DemoInput["steps"] = [
+  { name: "Hydrolysis, stirred", temperatureC: 25, durationH: 2, stage: "sol" },
+  { name: "Ageing of the sol", temperatureC: 25, durationH: 24, stage: "sol" },
+  { name: "Flash-off after dip coating", temperatureC: 60, durationH: 0.25, stage: "drying" },
+  { name: "Thermal cure", temperatureC: 120, durationH: 2, stage: "curing" },
 ];
 
 const hardCoat = (titania: number): DemoInput => ({
@@ -54,6 +55,8 @@ const hardCoat = (titania: number): DemoInput => ({
     { materialId: "teos", weightFraction: Number((0.3 - titania).toFixed(4)) },
     { materialId: "ti-isopropoxide", weightFraction: titania },
   ],
+  // Titanium isopropoxide chelated 1:1 with acetylacetone before any water, as a lab would.
+  modifiers: [{ materialId: "acac", precursorId: "ti-isopropoxide", molPerMetal: 1 }],
   water: { materialId: "water-di", ratio: "R", value: 1.5 },
   solvent: { materialId: "ethanol", mode: "fill" },
   catalyst: { materialId: "hcl-37", molPerNetworkAtom: 0.01 },
@@ -68,7 +71,7 @@ export const DEMO_FORMULATIONS: DemoFormulation[] = [
     project: "Scratch-resistant coat for polycarbonate visors",
     description: "GPTMS + TEOS with 5 wt% titania, HCl-catalysed in ethanol, dip coated, cured below the polycarbonate's limits.",
     revisions: [
-      { input: { ...hardCoat(0.03), steps: visorSteps.slice(0, 3).concat({ name: "Thermal cure", temperatureC: 110, durationH: 3 }) }, state: "archived" },
+      { input: { ...hardCoat(0.03), steps: visorSteps.slice(0, 3).concat({ name: "Thermal cure", temperatureC: 110, durationH: 3, stage: "curing" }) }, state: "archived" },
       { input: hardCoat(0.05), state: "released", comment: "Cure at 120 °C sits within 20 °C of the polycarbonate grade's limit; acceptable for 2 h on the visor grade, keep the oven calibrated." },
     ],
   },
@@ -84,7 +87,7 @@ export const DEMO_FORMULATIONS: DemoFormulation[] = [
     description: "Trial of a shorter, hotter cure; the thermal check shows why it cannot go ahead.",
     revisions: [
       {
-        input: { ...hardCoat(0.05), steps: visorSteps.slice(0, 3).concat({ name: "Thermal cure", temperatureC: 150, durationH: 0.5 }) },
+        input: { ...hardCoat(0.05), steps: visorSteps.slice(0, 3).concat({ name: "Thermal cure", temperatureC: 150, durationH: 0.5, stage: "curing" }) },
         state: "draft",
       },
     ],
@@ -105,10 +108,10 @@ export const DEMO_FORMULATIONS: DemoFormulation[] = [
           solvent: { materialId: "ethanol", mode: "fill" },
           catalyst: { materialId: "hcl-37", molPerNetworkAtom: 0.01 },
           steps: [
-            { name: "Hydrolysis", temperatureC: 25, durationH: 1 },
-            { name: "Gelation and ageing, sealed", temperatureC: 40, durationH: 72 },
-            { name: "Slow drying", temperatureC: 60, durationH: 96 },
-            { name: "Final drying", temperatureC: 120, durationH: 12 },
+            { name: "Hydrolysis", temperatureC: 25, durationH: 1, stage: "sol" },
+            { name: "Gelation and ageing, sealed", temperatureC: 40, durationH: 72, stage: "sol" },
+            { name: "Slow drying", temperatureC: 60, durationH: 96, stage: "drying" },
+            { name: "Final drying", temperatureC: 120, durationH: 12, stage: "drying" },
           ],
           marginC: 20,
         },
@@ -128,14 +131,16 @@ export const DEMO_FORMULATIONS: DemoFormulation[] = [
             { materialId: "gptms", weightFraction: 0.75 },
             { materialId: "zr-propoxide-70", weightFraction: 0.25 },
           ],
+          // Zirconium propoxide chelated 1:1 with ethyl acetoacetate before the water goes in.
+          modifiers: [{ materialId: "ethyl-acetoacetate", precursorId: "zr-propoxide-70", molPerMetal: 1 }],
           water: { materialId: "water-di", ratio: "h", value: 0.5 },
           solvent: { materialId: "1-propanol", mode: "molPerNetworkAtom", value: 6 },
           catalyst: { materialId: "hno3-65", molPerNetworkAtom: 0.02 },
           substrateId: "aluminium-6061",
           steps: [
-            { name: "Hydrolysis", temperatureC: 25, durationH: 1 },
-            { name: "Ageing of the sol", temperatureC: 25, durationH: 4 },
-            { name: "Cure", temperatureC: 110, durationH: 1 },
+            { name: "Hydrolysis", temperatureC: 25, durationH: 1, stage: "sol" },
+            { name: "Ageing of the sol", temperatureC: 25, durationH: 4, stage: "sol" },
+            { name: "Cure", temperatureC: 110, durationH: 1, stage: "curing" },
           ],
           marginC: 20,
         },

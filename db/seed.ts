@@ -53,7 +53,12 @@ function materialise(input: DemoInput, library: Map<string, Material>): Formulat
     ...input,
     materials: refs.map((r) => library.get(r)!).filter(Boolean),
     components: input.components.map((c) => ({ ...c, materialId: id(c.materialId) })),
-    water: { ...input.water, materialId: id(input.water.materialId) },
+    modifiers: input.modifiers?.map((m) => ({ ...m, materialId: id(m.materialId), precursorId: id(m.precursorId) })),
+    water: {
+      ...input.water,
+      materialId: id(input.water.materialId),
+      ...(input.water.referenceId ? { referenceId: id(input.water.referenceId) } : {}),
+    },
     solvent: input.solvent ? { ...input.solvent, materialId: id(input.solvent.materialId) } : undefined,
     catalyst: input.catalyst ? { ...input.catalyst, materialId: id(input.catalyst.materialId) } : undefined,
     substrateId: input.substrateId ? id(input.substrateId) : undefined,

@@ -6,6 +6,9 @@
  * the browser can import it.
  */
 
+/** Kinds of material in a team's library; defined by the engine, which imports nothing from outside itself. */
+export { MATERIAL_KINDS, type MaterialKind } from "./formulation/kinds";
+
 /** Revision states, in the order a revision normally moves through them. */
 export const REVISION_STATES = ["draft", "in_review", "approved", "released", "archived"] as const;
 export type RevisionState = (typeof REVISION_STATES)[number];

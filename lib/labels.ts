@@ -9,6 +9,7 @@ import type { LineRole, MaterialKind, ThermalLimit } from "@/lib/formulation";
 /** Words for a recipe line's role. */
 export const LINE_ROLE_LABELS: Record<LineRole, string> = {
   precursor: "Precursor",
+  modifier: "Modifier",
   organic: "Organic phase",
   solvent: "Solvent",
   water: "Water",
@@ -23,11 +24,14 @@ export const KIND_LABELS: Record<MaterialKind, string> = {
   solvent: "Solvent",
   water: "Water",
   catalyst: "Catalyst",
+  modifier: "Modifier",
 };
 
 /** Words for a thermal limit. */
 export const LIMIT_LABELS: Record<ThermalLimit, string> = {
-  degradationOnset: "degradation onset",
+  degradationOnset: "degradation onset in air",
+  degradationOnsetInert: "degradation onset in inert gas",
+  heatDeflection: "heat deflection temperature (1.8 MPa)",
   maxService: "maximum service temperature",
   melting: "melting point",
   glassTransition: "glass transition",

@@ -35,16 +35,21 @@ export function CompositionPanel({ batch }: CompositionPanelProps) {
           target: fmtRatio(c.effectiveR.target),
           made: fmtRatio(c.effectiveR.actual),
         },
-        {
-          key: "h",
-          figure: (
-            <>
-              Effective water ratio h <span className="text-xs text-muted">mol H₂O per mol hydrolysable group</span>
-            </>
-          ),
-          target: fmtRatio(c.effectiveH.target),
-          made: fmtRatio(c.effectiveH.actual),
-        },
+        // h is absent when the sol has no alkoxy groups (colloidal silica alone).
+        ...(c.effectiveH
+          ? [
+              {
+                key: "h",
+                figure: (
+                  <>
+                    Effective water ratio h <span className="text-xs text-muted">mol H₂O per mol hydrolysable group</span>
+                  </>
+                ),
+                target: fmtRatio(c.effectiveH.target),
+                made: fmtRatio(c.effectiveH.actual),
+              },
+            ]
+          : []),
       ]
     : [];
   return (

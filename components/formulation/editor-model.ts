@@ -24,7 +24,7 @@ export interface EditorValues {
     linearShrinkagePercent: number;
   };
   components: { materialId: string; weightPercent: number }[];
-  water: { materialId: string; ratio: "R" | "h"; value: number };
+  water: { materialId: string; ratio: "R" | "h" | "perPrecursor"; value: number; referenceId?: string; countCarried?: boolean };
   solvent: { mode: SolventMode; materialId: string; value: number };
   catalyst: { materialId: string; molPerNetworkAtom: number };
   substrateId: string;
@@ -59,7 +59,7 @@ export const editorSchema = z.object({
       weightPercent: num("weight fraction"),
     }),
   ),
-  water: z.object({ materialId: z.string().min(1, "Pick the water"), ratio: z.enum(["R", "h"]), value: num("water ratio") }),
+  water: z.object({ materialId: z.string().min(1, "Pick the water"), ratio: z.enum(["R", "h", "perPrecursor"]), value: num("water ratio"), referenceId: z.string().optional(), countCarried: z.boolean().optional() }),
   solvent: z.object({ mode: z.enum(["none", "molPerNetworkAtom", "fill"]), materialId: z.string(), value: z.number() }),
   catalyst: z.object({ materialId: z.string(), molPerNetworkAtom: z.number() }),
   substrateId: z.string(),
@@ -172,7 +172,13 @@ export function inputFromValues(v: EditorValues, records: (id: string) => Materi
     materials,
     basis,
     components: v.components.map((c) => ({ materialId: c.materialId, weightFraction: clean(c.weightPercent / 100) })),
-    water: { materialId: v.water.materialId, ratio: v.water.ratio, value: v.water.value },
+    water: {
+      materialId: v.water.materialId,
+      ratio: v.water.ratio,
+      value: v.water.value,
+      ...(v.water.ratio === "perPrecursor" && v.water.referenceId ? { referenceId: v.water.referenceId } : {}),
+      ...(v.water.countCarried === false ? { countCarried: false } : {}),
+    },
     steps: v.steps.map((s) => ({ name: s.name, temperatureC: s.temperatureC, durationH: s.durationH })),
     marginC: v.marginC,
   };

@@ -15,15 +15,16 @@ export async function copyReferenceMaterials(dbx: DbOrTx, teamId: string, userId
     .where(eq(materials.teamId, teamId));
   const byName = new Map(existing.map((e) => [e.name, e.id]));
   const ids = new Map<string, string>();
-  const rows = [];
-  for (const ref of referenceMaterials) {
+  const added = referenceMaterials.filter((ref) => {
     const found = byName.get(ref.name);
-    if (found) {
-      ids.set(ref.id, found);
-      continue;
-    }
-    const id = crypto.randomUUID();
-    ids.set(ref.id, id);
+    ids.set(ref.id, found ?? crypto.randomUUID());
+    return !found;
+  });
+  const rows = [];
+  for (const ref of added) {
+    const id = ids.get(ref.id)!;
+    // A carried solvent names another material: point it at the team's copy.
+    const solventId = ref.solventId === undefined ? undefined : ids.get(ref.solventId);
     rows.push({
       id,
       teamId,
@@ -31,7 +32,7 @@ export async function copyReferenceMaterials(dbx: DbOrTx, teamId: string, userId
       name: ref.name,
       kind: ref.kind,
       casNumber: ref.casNumber ?? null,
-      data: { ...ref, id },
+      data: { ...ref, id, ...(solventId ? { solventId } : {}) },
       createdBy: userId,
     });
   }

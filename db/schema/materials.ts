@@ -3,7 +3,8 @@ import type { Material } from "@/lib/formulation";
 import { organization, user } from "./auth";
 import { createdAt, teamRef, updatedAt, userRef, uuidPk } from "./columns";
 
-export const MATERIAL_KINDS = ["precursor", "organic", "substrate", "solvent", "water", "catalyst"] as const;
+import { MATERIAL_KINDS } from "../../lib/formulation/kinds";
+export { MATERIAL_KINDS };
 
 /**
  * A team's materials library. `data` holds the engine's Material record

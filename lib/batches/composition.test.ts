@@ -45,7 +45,7 @@ describe("actualComposition", () => {
     expect(made.components[0]!.actualWeightFraction).toBeCloseTo(0.7196261682, 9);
     expect(made.components[1]!.actualWeightFraction).toBeCloseTo(0.2803738318, 9);
     expect(made.effectiveR.actual).toBeCloseTo(3.6363636364, 9);
-    expect(made.effectiveH.actual).toBeCloseTo(0.9090909091, 9);
+    expect(made.effectiveH?.actual).toBeCloseTo(0.9090909091, 9);
     expect(made.effectiveR.target).toBeCloseTo(4, 12);
     expect("composite" in made.engine && made.engine.composite.theoreticalDensity).toBeCloseTo(1.6229867, 6);
   });

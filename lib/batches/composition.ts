@@ -21,8 +21,8 @@ export interface ActualComposition {
   solidGrams: { target: number; actual: number };
   /** mol H2O per mol network-forming atom. */
   effectiveR: { target: number; actual: number };
-  /** mol H2O per mol hydrolysable group. */
-  effectiveH: { target: number; actual: number };
+  /** mol H2O per mol hydrolysable group left after ligand exchange; absent when there are none (colloidal silica alone). */
+  effectiveH?: { target: number; actual: number };
   /** The engine's figures for the composition made (volume fractions, theoretical density …), or why they are missing. */
   engine: { composite: FormulationResult["composite"] } | { error: string };
 }
@@ -32,7 +32,9 @@ export interface ActualComposition {
  * amount of a dispensed line is proportional to its mass as supplied, so
  * each line's figures are scaled by actual / target: residue (dry phase)
  * masses give the actual weight fractions; network-forming atoms,
- * hydrolysable groups and water (carried + added) give the effective R and h.
+ * hydrolysable groups (less those a modifier replaced) and water (carried +
+ * added) give the effective R and h; a modifier's actual ratio is its
+ * weighed ligand over the weighed metal of its precursor.
  * The actual weight fractions then go through the same engine for the dry
  * composite's volume fractions and theoretical density.
  *
@@ -65,6 +67,8 @@ export function actualComposition(
   let atoms = ZERO;
   let groups = ZERO;
   let water = ZERO;
+  const atomsOf = new Map<string, Dec>();
+  const ligandOf = new Map<string, Dec>();
   const residues = new Map<string, { target: Dec; actual: Dec }>();
   // Each material's share counted once per line, even if a material appears on two lines (e.g. a solvent that is also the fill).
   for (const line of result.lines) {
@@ -75,7 +79,14 @@ export function actualComposition(
       targetResidue = targetResidue.plus(line.residueGrams);
       actualResidue = actualResidue.plus(new Dec(line.residueGrams).times(s));
     }
-    if (line.networkAtomMol !== undefined) atoms = atoms.plus(new Dec(line.networkAtomMol).times(s));
+    if (line.networkAtomMol !== undefined) {
+      const a = new Dec(line.networkAtomMol).times(s);
+      atoms = atoms.plus(a);
+      atomsOf.set(line.materialId, (atomsOf.get(line.materialId) ?? ZERO).plus(a));
+    }
+    if (line.role === "modifier" && line.moles !== undefined) {
+      ligandOf.set(line.materialId, (ligandOf.get(line.materialId) ?? ZERO).plus(new Dec(line.moles).times(s)));
+    }
     if (line.hydrolysableGroupMol !== undefined) groups = groups.plus(new Dec(line.hydrolysableGroupMol).times(s));
     if (line.carriedWaterMol !== undefined) water = water.plus(new Dec(line.carriedWaterMol).times(s));
     if (line.role === "water" && line.moles !== undefined) water = water.plus(new Dec(line.moles).times(s));
@@ -89,16 +100,34 @@ export function actualComposition(
       actualWeightFraction: r && actualResidue.greaterThan(0) ? toNumber(r.actual.div(actualResidue)) : 0,
     };
   });
+  // Modifiers as weighed: a line's ligand shared over the lines on the same modifier by their target amounts.
+  const materialsById = new Map(input.materials.map((m) => [m.id, m]));
+  const modifiers = (input.modifiers ?? []).map((m, i) => {
+    const target = result.modifiers?.[i];
+    const totalTarget = (result.modifiers ?? []).filter((r) => r.materialId === m.materialId).reduce((sum, r) => sum + r.ligandMol, 0);
+    const ligand = target && totalTarget > 0 ? (ligandOf.get(m.materialId) ?? ZERO).times(target.ligandMol / totalTarget) : ZERO;
+    const metal = atomsOf.get(m.precursorId) ?? ZERO;
+    return { ...m, molPerMetal: metal.greaterThan(0) ? toNumber(ligand.div(metal)) : m.molPerMetal, ligand, bonded: (target?.bondedGrams ?? 0) > 0 };
+  });
+  let bondedGrams = ZERO;
+  for (const m of modifiers) {
+    const data = materialsById.get(m.materialId)?.modifier;
+    if (!data) continue;
+    groups = groups.minus(m.ligand.times(data.groupsReplacedPerMolecule));
+    if (m.bonded) bondedGrams = bondedGrams.plus(m.ligand.times(data.bondedMolarMass));
+  }
   const effectiveR = atoms.greaterThan(0) ? water.div(atoms) : ZERO;
-  const effectiveH = groups.greaterThan(0) ? water.div(groups) : ZERO;
+  const effectiveH = groups.greaterThan(0) ? water.div(groups) : undefined;
 
   let engine: ActualComposition["engine"];
   try {
     if (!actualResidue.greaterThan(0)) throw new Error("nothing was weighed into the composite");
     const made: FormulationInput = {
       ...input,
-      basis: { type: "solidMass", grams: toNumber(actualResidue) },
+      // The basis is the whole dry composite: the residues and organics weighed, and the bonded ligands.
+      basis: { type: "solidMass", grams: toNumber(actualResidue.plus(bondedGrams)) },
       components: components.map((c) => ({ materialId: c.materialId, weightFraction: c.actualWeightFraction })),
+      ...(modifiers.length > 0 ? { modifiers: modifiers.map((m) => ({ materialId: m.materialId, precursorId: m.precursorId, molPerMetal: m.molPerMetal })) } : {}),
       water: { materialId: input.water.materialId, ratio: "R", value: toNumber(effectiveR) },
     };
     delete made.solvent;
@@ -112,7 +141,7 @@ export function actualComposition(
     components,
     solidGrams: { target: toNumber(targetResidue), actual: toNumber(actualResidue) },
     effectiveR: { target: result.water.effectiveR, actual: toNumber(effectiveR) },
-    effectiveH: { target: result.water.effectiveH, actual: toNumber(effectiveH) },
+    ...(effectiveH && result.water.effectiveH !== undefined ? { effectiveH: { target: result.water.effectiveH, actual: toNumber(effectiveH) } } : {}),
     engine,
   };
 }

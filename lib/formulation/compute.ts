@@ -1,22 +1,30 @@
-import { DEFAULT_THERMAL_MARGIN_C, ENGINE_VERSION, ML_PER_L, WATER_MOLAR_MASS_G_PER_MOL } from "./constants";
 import { basisNotices } from "./basis-notices";
 import { solidMassFromBasis } from "./basis";
-import { compositeFigures, type BulkDensity, type PhaseInput } from "./composite";
-import { type Dec, dec, toNumber, WATER_MOLAR_MASS, ZERO } from "./decimal";
+import { compositeFigures, type BulkDensity } from "./composite";
+import { composeComponents, type DecLine } from "./composition";
+import { DEFAULT_THERMAL_MARGIN_C, ENGINE_VERSION, MIN_LINE_GRAMS, ML_PER_L, WATER_MOLAR_MASS_G_PER_MOL } from "./constants";
+import { type Dec, dec, toNumber, ZERO } from "./decimal";
 import { dosePerNetworkAtom } from "./dosing";
 import { FormulationError } from "./errors";
 import type { FormulationInput } from "./input-schema";
+import { assayBalanceNotices, catalystRatioNotices, fractionsScaledNotice } from "./input-notices";
 import { orderLines } from "./line-order";
-import { indexMaterials, materialById, requireDensity, waterFractionOf, type IndexedMaterial } from "./material-index";
+import { indexMaterials, materialById, requireDensity, type IndexedMaterial } from "./material-index";
 import type { Material } from "./material-schema";
-import { organicAmounts } from "./organic";
-import { precursorAmounts, requirePrecursorData } from "./precursor";
-import type { AlcoholRelease, FormulationResult, Notice, RecipeLine } from "./result-types";
+import { checkModifierLoad, fastHydrolysisNotices, ligandMassPerFreeGram, modifierAmounts, modifierNotices, planModifiers } from "./modifiers";
+import type { AlcoholRelease, FormulationResult, ModifierResult, Notice, RecipeLine, SolventResult } from "./result-types";
 import { safetyNotices } from "./safety";
-import { solveFill } from "./solvent-fill";
-import { checkThermal, type ConversionSubject, type ThermalSubject } from "./thermal";
+import { carriedSolventGrams, solventByRatio, solventMol } from "./solvent";
+import { fillSolvent } from "./solvent-fill";
+import { checkThermal } from "./thermal";
 import { parseFormulationInput } from "./validate";
 import { waterNotices, waterTarget, waterToAdd } from "./water";
+
+/** `{ [key]: value }` when the value is a finite number (a ratio over a vanishing amount is left out). */
+function finiteField<K extends string>(key: K, value: Dec): { [P in K]?: number } {
+  const n = toNumber(value);
+  return (Number.isFinite(n) ? { [key]: n } : {}) as { [P in K]?: number };
+}
 
 /** Always-present notes on what the ideal figures leave out. */
 const IDEAL_NOTICES: readonly Notice[] = [
@@ -33,20 +41,6 @@ const IDEAL_NOTICES: readonly Notice[] = [
     message: "Sol volume assumes ideal mixing (sum of the volumes as supplied); real mixtures of alcohols and water contract slightly.",
   },
 ];
-
-/** Internal line with decimal figures, turned into a RecipeLine at the end. */
-interface DecLine {
-  materialId: string;
-  role: RecipeLine["role"];
-  moles?: Dec;
-  massGrams: Dec;
-  volumeMl: Dec;
-  residueGrams?: Dec;
-  networkAtomMol?: Dec;
-  hydrolysableGroupMol?: Dec;
-  carriedWaterMol?: Dec;
-  carriedSolventGrams?: Dec;
-}
 
 function toRecipeLine(line: DecLine): RecipeLine {
   const out: RecipeLine = {
@@ -100,88 +94,27 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
   const byId = indexMaterials(input.materials);
   const marginC = input.marginC ?? DEFAULT_THERMAL_MARGIN_C;
   const solidMass = solidMassFromBasis(input.basis);
+  const notices: Notice[] = [];
 
-  const lines: DecLine[] = [];
-  // Running sol totals (g, mL), kept as lines are added.
-  let solMass = ZERO;
-  let solVolume = ZERO;
-  const addLine = (line: DecLine): void => {
-    lines.push(line);
-    solMass = solMass.plus(line.massGrams);
-    solVolume = solVolume.plus(line.volumeMl);
-  };
-  const phases: PhaseInput[] = [];
-  const subjects: ThermalSubject[] = [];
-  const conversions: ConversionSubject[] = [];
-  const alcohols = new Map<string, { name: string; molarMass: number; mol: Dec }>();
-  let networkAtomMol = ZERO;
-  let hydrolysableGroupMol = ZERO;
-  let carriedWaterMol = ZERO;
+  // Fractions within 0.5 % of 1 (33.3 / 33.3 / 33.3 %) are scaled to 1; the schema refused any beyond.
+  const fractionSum = input.components.reduce((sum, c) => sum.plus(dec(c.weightFraction)), ZERO);
+  const components = input.components.map((c) => ({
+    ...c,
+    weightFraction: fractionSum.equals(1) ? dec(c.weightFraction) : dec(c.weightFraction).div(fractionSum),
+  }));
+  notices.push(...fractionsScaledNotice(fractionSum));
 
-  input.components.forEach((component, index) => {
-    const entry = materialById(byId, component.materialId, `components.${index}.materialId`);
-    const material = entry.material;
-    const weightFraction = dec(component.weightFraction);
-    const present = !weightFraction.isZero();
-    if (material.kind === "precursor") {
-      const data = requirePrecursorData(entry);
-      const a = precursorAmounts(entry, weightFraction, solidMass);
-      addLine({ materialId: material.id, role: "precursor", ...a });
-      phases.push({
-        materialId: material.id,
-        residueFormula: data.residueFormula,
-        weightFraction,
-        weightFractionValue: component.weightFraction,
-        density: dec(data.residueDensity),
-        densityValue: data.residueDensity,
-      });
-      networkAtomMol = networkAtomMol.plus(a.networkAtomMol);
-      hydrolysableGroupMol = hydrolysableGroupMol.plus(a.hydrolysableGroupMol);
-      carriedWaterMol = carriedWaterMol.plus(a.carriedWaterMol);
-      const leaving = data.leavingAlcohol;
-      if (leaving && present && !a.alcoholMol.isZero()) {
-        const key = `${leaving.name}|${leaving.molarMass}`;
-        const previous = alcohols.get(key);
-        alcohols.set(key, {
-          name: leaving.name,
-          molarMass: leaving.molarMass,
-          mol: previous ? previous.mol.plus(a.alcoholMol) : a.alcoholMol,
-        });
-      }
-      if (present && data.conversionTemperatureC !== undefined) {
-        conversions.push({
-          materialId: material.id,
-          name: material.name,
-          residueFormula: data.residueFormula,
-          conversionTemperatureC: data.conversionTemperatureC,
-          path: entry.path,
-        });
-      }
-    } else {
-      const a = organicAmounts(entry, weightFraction, solidMass);
-      addLine({
-        materialId: material.id,
-        role: "organic",
-        moles: a.moles,
-        massGrams: a.massGrams,
-        volumeMl: a.volumeMl,
-        residueGrams: a.residueGrams,
-        carriedWaterMol: a.carriedWaterMol,
-        carriedSolventGrams: a.carriedSolventGrams,
-      });
-      phases.push({
-        materialId: material.id,
-        weightFraction,
-        weightFractionValue: component.weightFraction,
-        density: dec(a.phaseDensity),
-        densityValue: a.phaseDensity,
-      });
-      carriedWaterMol = carriedWaterMol.plus(a.carriedWaterMol);
-      if (present) {
-        subjects.push({ materialId: material.id, name: material.name, role: "organic", thermal: material.thermal, path: entry.path });
-      }
-    }
-  });
+  // Modifiers: the bonded ligands are part of the dry composite the basis fixes (S = S_free · (1 + c)).
+  const plans = planModifiers(input.modifiers ?? [], byId, input.steps);
+  checkModifierLoad(plans, (id) => byId.get(id)?.material.name ?? id);
+  const fractionOf = (id: string): Dec => components.find((c) => c.materialId === id)?.weightFraction ?? ZERO;
+  const c = ligandMassPerFreeGram(plans, fractionOf);
+  const freeMass = c.isZero() ? solidMass : solidMass.div(c.plus(1));
+
+  const pass = composeComponents(components, byId, freeMass, solidMass);
+  const lines: DecLine[] = pass.lines;
+  const { phases, subjects, conversions, networkAtomMol } = pass;
+  let carriedWaterMol = pass.carriedWaterMol;
 
   if (!networkAtomMol.greaterThan(0)) {
     throw new FormulationError(
@@ -190,11 +123,64 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
       "the composition has no network-forming atoms (Si, Ti, Zr, Al, P); add a precursor that forms the oxide network",
     );
   }
-  if (!hydrolysableGroupMol.greaterThan(0)) {
+
+  // Modifier lines, their exchanged groups and their bonded-ligand phases.
+  let groupsReplacedMol = ZERO;
+  const modifierResults: ModifierResult[] = [];
+  const ligandPhases = new Map<string, { grams: Dec; formula: string; density: number }>();
+  for (const plan of plans) {
+    const atoms = pass.precursorMol.get(plan.spec.precursorId)?.atoms ?? ZERO;
+    const a = modifierAmounts(plan, atoms);
+    lines.push({
+      materialId: plan.entry.material.id,
+      role: "modifier",
+      moles: a.moles,
+      massGrams: a.massGrams,
+      volumeMl: a.volumeMl,
+      carriedWaterMol: a.carriedWaterMol,
+      carriedSolventGrams: a.carriedSolventGrams,
+    });
+    carriedWaterMol = carriedWaterMol.plus(a.carriedWaterMol);
+    groupsReplacedMol = groupsReplacedMol.plus(a.groupsReplacedMol);
+    if (a.bondedGrams.greaterThan(0)) {
+      const previous = ligandPhases.get(plan.entry.material.id);
+      ligandPhases.set(plan.entry.material.id, {
+        grams: previous ? previous.grams.plus(a.bondedGrams) : a.bondedGrams,
+        formula: plan.data.bondedFormula,
+        density: plan.data.bondedDensity,
+      });
+    }
+    modifierResults.push({
+      materialId: plan.entry.material.id,
+      precursorId: plan.spec.precursorId,
+      molPerMetal: plan.spec.molPerMetal,
+      ligandMol: toNumber(a.moles),
+      groupsReplacedMol: toNumber(a.groupsReplacedMol),
+      bondedGrams: toNumber(a.bondedGrams),
+      ...(plan.removedBy ? { removedInStep: plan.removedBy.name } : {}),
+    });
+  }
+  for (const [materialId, ligand] of ligandPhases) {
+    const weightFraction = ligand.grams.div(solidMass);
+    phases.push({
+      materialId,
+      residueFormula: ligand.formula,
+      weightFraction,
+      weightFractionValue: toNumber(weightFraction),
+      density: dec(ligand.density),
+      densityValue: ligand.density,
+    });
+  }
+  notices.push(...modifierNotices(plans, ligandPhases.size > 0));
+  // Σg': hydrolysable groups left after ligand exchange.
+  const groupMol = pass.hydrolysableGroupMol.minus(groupsReplacedMol);
+
+  const water = input.water;
+  if (water.ratio === "h" && !groupMol.greaterThan(0)) {
     throw new FormulationError(
       "no_hydrolysable_groups",
-      "components",
-      "the composition has no hydrolysable groups, so the water ratio cannot be referred to them; add an alkoxide precursor",
+      "water.ratio",
+      "the composition has no hydrolysable (alkoxy) groups, so a water ratio h per group cannot be used; set R (water per network-forming atom) instead",
     );
   }
 
@@ -202,24 +188,40 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
   if (input.catalyst && input.catalyst.molPerNetworkAtom > 0) {
     const entry = materialById(byId, input.catalyst.materialId, "catalyst.materialId");
     const a = dosePerNetworkAtom(entry, dec(input.catalyst.molPerNetworkAtom), networkAtomMol);
-    addLine({ materialId: entry.material.id, role: "catalyst", ...a });
+    lines.push({ materialId: entry.material.id, role: "catalyst", ...a });
     carriedWaterMol = carriedWaterMol.plus(a.carriedWaterMol);
+    notices.push(...catalystRatioNotices(input.catalyst.molPerNetworkAtom, entry.material.name));
   }
 
-  // Solvent by molar ratio (a fill is solved together with the water below).
+  // Solvent by molar ratio, counting the same solvent carried by precursor solutions (a fill is solved below).
   let solventEntry: IndexedMaterial | undefined;
+  let solventSummary: SolventResult | undefined;
   if (input.solvent) {
     solventEntry = materialById(byId, input.solvent.materialId, "solvent.materialId");
-    if (input.solvent.mode === "molPerNetworkAtom" && input.solvent.value > 0) {
-      const a = dosePerNetworkAtom(solventEntry, dec(input.solvent.value), networkAtomMol);
-      addLine({ materialId: solventEntry.material.id, role: "solvent", ...a });
-      carriedWaterMol = carriedWaterMol.plus(a.carriedWaterMol);
+    if (input.solvent.mode === "molPerNetworkAtom") {
+      const carried = carriedSolventGrams(lines, byId, solventEntry.material.id);
+      const ratio = solventByRatio(solventEntry, dec(input.solvent.value), networkAtomMol, carried);
+      if (ratio.added && ratio.added.massGrams.greaterThanOrEqualTo(MIN_LINE_GRAMS)) {
+        lines.push({ materialId: solventEntry.material.id, role: "solvent", ...ratio.added });
+        carriedWaterMol = carriedWaterMol.plus(ratio.added.carriedWaterMol);
+      }
+      notices.push(...ratio.notices);
+      solventSummary = {
+        materialId: solventEntry.material.id,
+        addedGrams: toNumber(ratio.added?.massGrams ?? ZERO),
+        carriedGrams: toNumber(carried),
+        addedMol: toNumber(ratio.addedMol),
+        carriedMol: toNumber(ratio.carriedMol),
+        ...finiteField("molPerNetworkAtom", ratio.addedMol.plus(ratio.carriedMol).div(networkAtomMol)),
+      };
     }
   }
 
-  const waterEntry = materialById(byId, input.water.materialId, "water.materialId");
+  const waterEntry = materialById(byId, water.materialId, "water.materialId");
   const waterMolarMass = dec(waterEntry.material.molarMass ?? WATER_MOLAR_MASS_G_PER_MOL);
-  const targetMol = waterTarget(input.water.ratio, dec(input.water.value), networkAtomMol, hydrolysableGroupMol);
+  const referenceMol = water.ratio === "perPrecursor" ? (pass.precursorMol.get(water.referenceId ?? "")?.moles ?? ZERO) : ZERO;
+  const targetMol = waterTarget(water.ratio, dec(water.value), { networkAtomMol, groupMol, referenceMol });
+  const countCarried = water.countCarried ?? true;
 
   let addMol: Dec;
   const basis = input.basis;
@@ -227,49 +229,42 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
     if (basis.type === "solidMass") {
       throw new FormulationError("nothing_to_fill", "solvent.mode", "a dry-solid-mass basis leaves nothing to fill");
     }
-    const fill = solveFill({
-      target:
-        basis.type === "gelBody"
-          ? { kind: "volume", amount: dec(basis.volumeMl) }
-          : { kind: "mass", amount: dec(basis.solMassGrams) },
-      otherGrams: solMass,
-      otherMl: solVolume,
-      waterNeededMol: targetMol.minus(carriedWaterMol),
-      solvent: solventEntry,
-      water: waterEntry,
-    });
-    const solventMaterial = solventEntry.material;
-    const solventCarried = fill.solventGrams.times(waterFractionOf(solventMaterial)).div(WATER_MOLAR_MASS);
-    if (fill.solventGrams.greaterThan(0)) {
-      addLine({
-        materialId: solventMaterial.id,
-        role: "solvent",
-        moles:
-          solventMaterial.molarMass === undefined
-            ? undefined
-            : fill.solventGrams.times(dec(solventMaterial.assay ?? 1)).div(dec(solventMaterial.molarMass)),
-        massGrams: fill.solventGrams,
-        volumeMl: fill.solventGrams.div(requireDensity(solventEntry)),
-        carriedWaterMol: solventCarried,
-        carriedSolventGrams: ZERO,
-      });
-    }
-    carriedWaterMol = carriedWaterMol.plus(solventCarried);
+    const fill = fillSolvent({ basis, lines, solventEntry, waterEntry, solidMass, waterNeededMol: countCarried ? targetMol.minus(carriedWaterMol) : targetMol });
+    if (fill.line) lines.push(fill.line);
+    carriedWaterMol = carriedWaterMol.plus(fill.carriedWaterMol);
     addMol = fill.addWaterMol;
+    const carried = carriedSolventGrams(lines, byId, solventEntry.material.id);
+    const carriedMol = solventMol(solventEntry, carried);
+    const addedMol = fill.line?.moles;
+    solventSummary = {
+      materialId: solventEntry.material.id,
+      addedGrams: toNumber(fill.line?.massGrams ?? ZERO),
+      carriedGrams: toNumber(carried),
+      ...(addedMol ? { addedMol: toNumber(addedMol) } : {}),
+      ...(carriedMol ? { carriedMol: toNumber(carriedMol) } : {}),
+      ...(addedMol && carriedMol ? finiteField("molPerNetworkAtom", addedMol.plus(carriedMol).div(networkAtomMol)) : {}),
+    };
   } else {
-    addMol = waterToAdd(targetMol, carriedWaterMol);
+    addMol = countCarried ? waterToAdd(targetMol, carriedWaterMol) : targetMol;
   }
 
   let addGrams = ZERO;
   let addMl = ZERO;
+  if (addMol.times(waterMolarMass).lessThan(MIN_LINE_GRAMS)) addMol = ZERO;
   if (addMol.greaterThan(0)) {
     addGrams = addMol.times(waterMolarMass);
     addMl = addGrams.div(requireDensity(waterEntry));
-    addLine({ materialId: waterEntry.material.id, role: "water", moles: addMol, massGrams: addGrams, volumeMl: addMl });
+    lines.push({ materialId: waterEntry.material.id, role: "water", moles: addMol, massGrams: addGrams, volumeMl: addMl });
   }
   const totalWaterMol = carriedWaterMol.plus(addMol);
 
-  // Sol figures (ideal mixing): solMass and solVolume are the running totals.
+  // Sol figures (ideal mixing).
+  let solMass = ZERO;
+  let solVolume = ZERO;
+  for (const line of lines) {
+    solMass = solMass.plus(line.massGrams);
+    solVolume = solVolume.plus(line.volumeMl);
+  }
   const perLitre = dec(ML_PER_L).div(solVolume); // 1 / (sol volume in L)
 
   // Dry composite.
@@ -284,17 +279,11 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
   // Thermal checks: organic phases and the substrate.
   if (input.substrateId !== undefined) {
     const entry = materialById(byId, input.substrateId, "substrateId");
-    subjects.push({
-      materialId: entry.material.id,
-      name: entry.material.name,
-      role: "substrate",
-      thermal: entry.material.thermal,
-      path: entry.path,
-    });
+    subjects.push({ materialId: entry.material.id, name: entry.material.name, role: "substrate", thermal: entry.material.thermal, path: entry.path });
   }
   const thermal = checkThermal(subjects, conversions, input.steps, marginC);
 
-  const alcohol: AlcoholRelease[] = [...alcohols.values()].map((amount) => ({
+  const alcohol: AlcoholRelease[] = [...pass.alcohols.values()].map((amount) => ({
     name: amount.name,
     mol: toNumber(amount.mol),
     grams: toNumber(amount.mol.times(dec(amount.molarMass))),
@@ -306,9 +295,12 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
     const material = byId.get(line.materialId)?.material;
     if (material && line.massGrams > 0 && !dispensed.includes(material)) dispensed.push(material);
   }
+  const effectiveR = totalWaterMol.div(networkAtomMol);
 
-  const notices: Notice[] = [
-    ...waterNotices({ targetMol, carriedMol: carriedWaterMol, totalMol: totalWaterMol, networkAtomMol, hydrolysableGroupMol }),
+  notices.push(
+    ...assayBalanceNotices(dispensed.map((material) => ({ material, path: byId.get(material.id)!.path }))),
+    ...fastHydrolysisNotices(pass.fastHydrolysing, plans, effectiveR),
+    ...waterNotices({ targetMol, carriedMol: carriedWaterMol, totalMol: totalWaterMol, networkAtomMol, hydrolysableGroupMol: groupMol, countCarried }),
     ...basisNotices({ basis, fill: input.solvent?.mode === "fill", solMassGrams: solMass, solVolumeMl: solVolume, solidMassGrams: solidMass }),
     ...(composite.dryGelShrinkage && composite.dryGelShrinkage.volumetric < 0
       ? [
@@ -323,9 +315,9 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
     ...thermal.notices,
     ...safetyNotices(dispensed, alcohol),
     ...IDEAL_NOTICES,
-  ];
+  );
 
-  return {
+  const result: FormulationResult = {
     engineVersion: ENGINE_VERSION,
     lines: ordered,
     water: {
@@ -334,10 +326,11 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
       addMol: toNumber(addMol),
       addGrams: toNumber(addGrams),
       addMl: toNumber(addMl),
-      hydrolysisMol: toNumber(hydrolysableGroupMol),
-      condensationMol: toNumber(hydrolysableGroupMol.div(2)),
-      effectiveR: toNumber(totalWaterMol.div(networkAtomMol)),
-      effectiveH: toNumber(totalWaterMol.div(hydrolysableGroupMol)),
+      hydrolysisMol: toNumber(groupMol),
+      condensationMol: toNumber(groupMol.div(2)),
+      effectiveR: toNumber(effectiveR),
+      ...(groupMol.isZero() ? {} : { effectiveH: toNumber(totalWaterMol.div(groupMol)) }),
+      ...(groupsReplacedMol.isZero() ? {} : { groupsReplacedMol: toNumber(groupsReplacedMol) }),
     },
     alcohol,
     sol: {
@@ -351,4 +344,7 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
     thermal: thermal.thermal,
     notices,
   };
+  if (solventSummary) result.solvent = solventSummary;
+  if (modifierResults.length > 0) result.modifiers = modifierResults;
+  return result;
 }

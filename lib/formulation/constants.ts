@@ -25,3 +25,25 @@ export const DEFAULT_THERMAL_MARGIN_C = 20;
 
 /** Millilitres per litre (exact). */
 export const ML_PER_L = 1000;
+
+/**
+ * Smallest mass a recipe line is written with, g: a solvent fill or water
+ * addition below it is rounding left over from exact arithmetic, and the
+ * line is left out. Common practice, no source: far below any balance.
+ */
+export const MIN_LINE_GRAMS = 1e-9;
+
+/**
+ * Weight fractions that sum to within this of 1 (0.5 %) are scaled to 1 with
+ * a notice (33.3 / 33.3 / 33.3 %); beyond it they are refused. Common
+ * practice, no source.
+ */
+export const WEIGHT_FRACTION_SCALE_TOLERANCE = 0.005;
+
+/**
+ * Catalyst ratio above which a caution is given, mol active per mol network
+ * atom: acid or base catalysts are used at 0.001–0.1 (Brinker & Scherer,
+ * Sol-Gel Science, 1990, ch. 3, from memory); above 1 is almost surely a
+ * unit slip (mmol typed as mol, or percent as a fraction).
+ */
+export const CATALYST_RATIO_CAUTION = 1;

@@ -32,8 +32,21 @@ export interface DosedAmounts {
  * ```
  */
 export function dosePerNetworkAtom(entry: IndexedMaterial, ratio: Dec, networkAtomMol: Dec): DosedAmounts {
+  return doseMoles(entry, ratio.times(networkAtomMol));
+}
+
+/**
+ * Amount of a reagent as supplied for `moles` mol of its active compound:
+ * mass = n · M / assay, volume = mass / ρ, with the water and solvent the
+ * stock carries.
+ *
+ * @example
+ * ```ts
+ * doseMoles(ethanol, new Dec(1)).massGrams.toNumber(); // 46.069
+ * ```
+ */
+export function doseMoles(entry: IndexedMaterial, moles: Dec): DosedAmounts {
   const material = entry.material;
-  const moles = ratio.times(networkAtomMol);
   const massGrams = divideUnlessOne(moles.times(requireMolarMass(entry)), material.assay);
   return {
     moles,

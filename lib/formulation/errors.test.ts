@@ -41,7 +41,7 @@ describe("FormulationError", () => {
     expect(error).toBeInstanceOf(FormulationError);
     expect(error.code).toBe("fractions_do_not_sum");
     expect(error.field).toBe("components");
-    expect(error.message).toBe("weight fractions sum to 0.95, they must sum to 1");
+    expect(error.message).toBe("weight fractions sum to 0.95, they must sum to 1 (a sum within 0.5 % of 1 is scaled to 1)");
   });
 
   it("accepts weight fractions within 1e-6 of 1", () => {
@@ -144,7 +144,7 @@ describe("FormulationError", () => {
       expect(parsed.success).toBe(false);
       expect(parsed.error?.issues[0]).toMatchObject({
         path: ["components"],
-        message: "weight fractions sum to 0.5, they must sum to 1",
+        message: "weight fractions sum to 0.5, they must sum to 1 (a sum within 0.5 % of 1 is scaled to 1)",
         params: { code: "fractions_do_not_sum" },
       });
     });

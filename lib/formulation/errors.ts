@@ -28,7 +28,8 @@ export type FormulationErrorCode =
   | "mould_too_small"
   | "solids_content_too_high"
   | "bulk_density_above_theoretical"
-  | "invalid_formula";
+  | "invalid_formula"
+  | "too_much_modifier";
 
 /**
  * The typed error of the formulation engine. It is thrown for infeasible or

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { WEIGHT_FRACTION_SUM_TOLERANCE } from "./constants";
+import { WEIGHT_FRACTION_SCALE_TOLERANCE } from "./constants";
 import { dec, ZERO } from "./decimal";
 import { nameText } from "./text-rules";
 import { materialSchema, type Material, type MaterialKind } from "./material-schema";
@@ -56,19 +56,29 @@ export const componentSchema = z.object(
   { error: required("component", "an object") },
 );
 
+/** How the water target is stated (chemistry: "Water"). */
+export const WATER_RATIOS = ["R", "h", "perPrecursor"] as const;
+
 /**
- * Water target: R (mol H2O per mol network-forming atom) or h (per mol hydrolysable group).
+ * Water target: R (mol H2O per mol network-forming atom, the "h = H2O/M" of
+ * many transition-metal papers), h (per mol hydrolysable group left after
+ * ligand exchange) or perPrecursor (per mol of the precursor `referenceId`,
+ * e.g. H2O : TEOS = 12). `countCarried` (default true): water carried by the
+ * other materials counts toward the target; false adds the whole target.
  *
  * @example
  * ```ts
  * waterSpecSchema.parse({ materialId: "water-di", ratio: "R", value: 4 });
+ * waterSpecSchema.parse({ materialId: "water-di", ratio: "perPrecursor", referenceId: "teos", value: 12, countCarried: false });
  * ```
  */
 export const waterSpecSchema = z.object(
   {
     materialId: nonEmptyString("water", "choose the water"),
-    ratio: z.enum(["R", "h"], { error: 'water ratio must be "R" or "h"' }),
+    ratio: z.enum(WATER_RATIOS, { error: "water ratio must be R (per network-forming atom), h (per alkoxy group) or per mol of a precursor" }),
     value: rangedNumber("water ratio", MOLAR_RATIO),
+    referenceId: nonEmptyString("reference precursor", "choose the precursor the water ratio refers to").optional(),
+    countCarried: z.boolean({ error: "count carried water must be true or false" }).optional(),
   },
   { error: required("water", "an object") },
 );
@@ -110,12 +120,18 @@ export const catalystSpecSchema = z.object(
   { error: required("catalyst", "an object") },
 );
 
+/** Where a step happens: in the liquid sol, while drying, or while curing (annealing included). */
+export const STEP_STAGES = ["sol", "drying", "curing"] as const;
+/** The gas over a step. */
+export const STEP_ATMOSPHERES = ["air", "inert"] as const;
+
 /**
- * A process step: name, temperature (°C) and duration (h).
+ * A process step: name, temperature (°C), duration (h), stage (default
+ * "curing", so stored schedules keep their checks) and atmosphere (default "air").
  *
  * @example
  * ```ts
- * processStepSchema.parse({ name: "Thermal cure", temperatureC: 120, durationH: 2 });
+ * processStepSchema.parse({ name: "Thermal cure", temperatureC: 120, durationH: 2, stage: "curing" });
  * ```
  */
 export const processStepSchema = z.object(
@@ -123,8 +139,28 @@ export const processStepSchema = z.object(
     name: nameText("step name", { max: 200 }),
     temperatureC: rangedNumber("step temperature (°C)", TEMPERATURE_C),
     durationH: rangedNumber("step duration (h)", DURATION_H),
+    stage: z.enum(STEP_STAGES, { error: 'step stage must be "sol", "drying" or "curing"' }).optional(),
+    atmosphere: z.enum(STEP_ATMOSPHERES, { error: 'step atmosphere must be "air" or "inert"' }).optional(),
   },
   { error: required("process step", "an object") },
+);
+
+/**
+ * A modifier line: `molPerMetal` mol of the modifier `materialId` per mol of
+ * network-forming atoms of the precursor `precursorId` (x = 0.5–2 is usual).
+ *
+ * @example
+ * ```ts
+ * modifierSpecSchema.parse({ materialId: "acac", precursorId: "ti-isopropoxide", molPerMetal: 1 });
+ * ```
+ */
+export const modifierSpecSchema = z.object(
+  {
+    materialId: nonEmptyString("modifier", "choose the modifier"),
+    precursorId: nonEmptyString("modified precursor", "choose the precursor it modifies"),
+    molPerMetal: rangedNumber("modifier ratio (mol per mol metal)", MOLAR_RATIO),
+  },
+  { error: required("modifier", "an object") },
 );
 
 type Ctx = z.RefinementCtx;
@@ -140,6 +176,7 @@ const KIND_WORDS: Record<MaterialKind, string> = {
   solvent: "a solvent",
   water: "water",
   catalyst: "a catalyst",
+  modifier: "a modifier",
 };
 
 function checkReference(
@@ -163,7 +200,7 @@ function checkReference(
 /**
  * Everything the engine needs, inline (the engine never reads a database).
  * Shapes and ranges are checked field by field; cross-field checks (weight
- * fractions summing to 1 within 1e-6, references to known materials of the
+ * fractions summing to 1 within 0.5 %, scaled to 1 by the engine; references to known materials of the
  * right kind, no fill without a sol mass or mould volume) are custom issues
  * whose `params.code` is the FormulationError code.
  *
@@ -184,6 +221,7 @@ export const formulationInputSchema = z
       water: waterSpecSchema,
       solvent: solventSpecSchema.optional(),
       catalyst: catalystSpecSchema.optional(),
+      modifiers: z.array(modifierSpecSchema, { error: required("modifiers", "a list") }).optional(),
       substrateId: nonEmptyString("substrate", "choose the substrate").optional(),
       steps: z.array(processStepSchema, { error: required("process steps", "a list") }),
       marginC: rangedNumber("thermal margin (°C)", MARGIN_C).optional(),
@@ -214,16 +252,35 @@ export const formulationInputSchema = z
       seen.add(component.materialId);
       total = total.plus(dec(component.weightFraction));
     });
-    if (total.minus(1).abs().greaterThan(WEIGHT_FRACTION_SUM_TOLERANCE)) {
+    if (total.minus(1).abs().greaterThan(WEIGHT_FRACTION_SCALE_TOLERANCE)) {
       addIssue(
         ctx,
         ["components"],
         "fractions_do_not_sum",
-        `weight fractions sum to ${Number(total.toPrecision(8))}, they must sum to 1`,
+        `weight fractions sum to ${Number(total.toPrecision(8))}, they must sum to 1 (a sum within 0.5 % of 1 is scaled to 1)`,
       );
     }
 
     checkReference(ctx, byId, input.water.materialId, ["water", "materialId"], ["water"]);
+    const componentPrecursor = (id: string): boolean => seen.has(id) && byId.get(id)?.kind === "precursor";
+    const nameOf = (id: string): string => (byId.has(id) ? `"${byId.get(id)!.name}"` : "the chosen material");
+    if (input.water.ratio === "perPrecursor") {
+      if (input.water.referenceId === undefined) {
+        addIssue(ctx, ["water", "referenceId"], "invalid_input", "choose the precursor the water ratio refers to");
+      } else if (!componentPrecursor(input.water.referenceId)) {
+        addIssue(ctx, ["water", "referenceId"], "invalid_input", `${nameOf(input.water.referenceId)} is not a precursor of this composition`);
+      }
+    }
+    input.modifiers?.forEach((modifier, index) => {
+      checkReference(ctx, byId, modifier.materialId, ["modifiers", index, "materialId"], ["modifier"]);
+      const material = byId.get(modifier.materialId);
+      if (material?.kind === "modifier" && !material.modifier) {
+        addIssue(ctx, ["modifiers", index, "materialId"], "invalid_input", `"${material.name}" has no modifier data (groups replaced, bonded ligand)`);
+      }
+      if (!componentPrecursor(modifier.precursorId)) {
+        addIssue(ctx, ["modifiers", index, "precursorId"], "invalid_input", `${nameOf(modifier.precursorId)} is not a precursor of this composition`);
+      }
+    });
     if (input.solvent) {
       checkReference(ctx, byId, input.solvent.materialId, ["solvent", "materialId"], ["solvent"]);
       if (input.solvent.mode === "fill" && input.basis.type === "solidMass") {
@@ -254,5 +311,7 @@ export type FormulationInput = z.infer<typeof formulationInputSchema>;
 export type Basis = z.infer<typeof basisSchema>;
 /** A dry-composite component, see `componentSchema`. */
 export type Component = z.infer<typeof componentSchema>;
+/** A modifier line, see `modifierSpecSchema`. */
+export type ModifierSpec = z.infer<typeof modifierSpecSchema>;
 /** A process step, see `processStepSchema`. */
 export type ProcessStep = z.infer<typeof processStepSchema>;

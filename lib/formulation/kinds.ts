@@ -7,7 +7,7 @@
  * MATERIAL_KINDS.includes("precursor"); // true
  * ```
  */
-export const MATERIAL_KINDS = ["precursor", "organic", "substrate", "solvent", "water", "catalyst"] as const;
+export const MATERIAL_KINDS = ["precursor", "organic", "substrate", "solvent", "water", "catalyst", "modifier"] as const;
 
 /** A material's kind. */
 export type MaterialKind = (typeof MATERIAL_KINDS)[number];

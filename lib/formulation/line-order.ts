@@ -1,12 +1,12 @@
 import type { LineRole, RecipeLine } from "./result-types";
 
-/** Default order of addition: precursors, organics, solvent, water, catalyst. */
-const ROLE_ORDER: Record<LineRole, number> = { precursor: 0, organic: 1, solvent: 2, water: 3, catalyst: 4 };
+/** Default order of addition: precursors, modifiers (before any water), organics, solvent, water, catalyst. */
+const ROLE_ORDER: Record<LineRole, number> = { precursor: 0, modifier: 1, organic: 2, solvent: 3, water: 4, catalyst: 5 };
 
 /**
  * Orders recipe lines for addition: by their position in `additionOrder`
  * when listed there, the others after them in the default order
- * (precursors, organics, solvent, water, catalyst; components in input order).
+ * (precursors, modifiers, organics, solvent, water, catalyst; components in input order).
  * The sort is stable.
  *
  * @param lines - recipe lines, components in input order

@@ -102,20 +102,50 @@ export const precursorDataSchema = z.object(
 );
 
 /**
- * Thermal limits, °C: glass transition, melting, degradation onset (e.g.
- * onset of mass loss in thermogravimetry) and a grade-specific maximum
+ * What a modifier (a chelating or exchanging ligand: acetylacetone, ethyl
+ * acetoacetate, methacrylic acid …) does to the alkoxide it is added to
+ * (chemistry: "Modifiers"):
+ * - groupsReplacedPerMolecule: alkoxy groups each ligand replaces (q, 1 for these ligands);
+ * - bondedFormula / bondedMolarMass (g/mol): the ligand as it stays in the dry solid,
+ *   the anion's molar mass less half an oxygen atom (acac⁻ C5H7O2 99.11 → 91.11 g/mol);
+ * - bondedDensity (g/cm³): density of the bonded-ligand phase in the dry composite;
+ * - removalTemperatureC (°C): a step at or above it burns the ligand out.
+ *
+ * @example
+ * ```ts
+ * modifierDataSchema.parse({ groupsReplacedPerMolecule: 1, bondedFormula: "C5H7O1.5", bondedMolarMass: 91.11, bondedDensity: 1.3 });
+ * ```
+ */
+export const modifierDataSchema = z.object(
+  {
+    groupsReplacedPerMolecule: rangedNumber("alkoxy groups replaced per ligand", PER_MOLECULE),
+    bondedFormula: nonEmptyString("bonded ligand formula"),
+    bondedMolarMass: rangedNumber("bonded ligand molar mass (g/mol)", MOLAR_MASS_G_PER_MOL),
+    bondedDensity: rangedNumber("bonded ligand density (g/cm³)", DENSITY_G_PER_CM3),
+    removalTemperatureC: rangedNumber("ligand removal temperature (°C)", TEMPERATURE_C).optional(),
+  },
+  { error: required("modifier data", "an object") },
+);
+
+/**
+ * Thermal limits, °C: glass transition, melting, degradation onset in air
+ * (e.g. onset of mass loss in thermogravimetry) and, optionally, in inert
+ * gas; for plastics a short-term limit, the heat deflection temperature at
+ * 1.8 MPa (ISO 75-2 method A), and a grade-specific long-term maximum
  * service temperature.
  *
  * @example
  * ```ts
- * thermalDataSchema.parse({ glassTransitionC: 147, degradationOnsetC: 450, maxServiceC: 125 });
+ * thermalDataSchema.parse({ glassTransitionC: 147, degradationOnsetC: 450, heatDeflectionC: 132, maxServiceC: 125 });
  * ```
  */
 export const thermalDataSchema = z.object(
   {
     glassTransitionC: rangedNumber("glass transition (°C)", TEMPERATURE_C).optional(),
     meltingC: rangedNumber("melting point (°C)", TEMPERATURE_C).optional(),
-    degradationOnsetC: rangedNumber("degradation onset (°C)", TEMPERATURE_C).optional(),
+    degradationOnsetC: rangedNumber("degradation onset in air (°C)", TEMPERATURE_C).optional(),
+    degradationOnsetInertC: rangedNumber("degradation onset in inert gas (°C)", TEMPERATURE_C).optional(),
+    heatDeflectionC: rangedNumber("heat deflection temperature at 1.8 MPa (°C)", TEMPERATURE_C).optional(),
     maxServiceC: rangedNumber("maximum service temperature (°C)", TEMPERATURE_C).optional(),
   },
   { error: required("thermal data", "an object") },
@@ -156,6 +186,13 @@ export const materialSchema = z
       crystalWaterPerFormula: zeroOrRangedNumber("water of crystallisation per formula unit", PER_MOLECULE).optional(),
       phaseDensity: rangedNumber("dry phase density (g/cm³)", DENSITY_G_PER_CM3).optional(),
       precursor: precursorDataSchema.optional(),
+      modifier: modifierDataSchema.optional(),
+      /** The solvent this material carries (its solventFraction): a material id, e.g. "1-propanol" in a zirconium propoxide solution. */
+      solventId: nonEmptyString("carried solvent").optional(),
+      /** A Ti, Zr or Al alkoxide that hydrolyses far faster than a silicon alkoxide and wants a modifier. */
+      fastHydrolysing: z.boolean({ error: "fast-hydrolysing must be true or false" }).optional(),
+      /** Moisture-sensitive and flammable like the alkoxides (default: a precursor with hydrolysable groups). */
+      moistureSensitive: z.boolean({ error: "moisture-sensitive must be true or false" }).optional(),
       thermal: thermalDataSchema.optional(),
       hazards: z
         .array(
@@ -188,5 +225,7 @@ export const materialSchema = z
 export type Material = z.infer<typeof materialSchema>;
 /** Precursor data of a material, see `precursorDataSchema`. */
 export type PrecursorData = z.infer<typeof precursorDataSchema>;
+/** Modifier data of a material, see `modifierDataSchema`. */
+export type ModifierData = z.infer<typeof modifierDataSchema>;
 /** Thermal limits of a material, see `thermalDataSchema`. */
 export type ThermalData = z.infer<typeof thermalDataSchema>;

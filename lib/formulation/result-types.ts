@@ -4,7 +4,7 @@
  */
 
 /** Role of a dispensed material in the batch. */
-export type LineRole = "precursor" | "organic" | "solvent" | "water" | "catalyst";
+export type LineRole = "precursor" | "organic" | "modifier" | "solvent" | "water" | "catalyst";
 
 /** One dispensed material of the batch recipe. */
 export interface RecipeLine {
@@ -44,8 +44,37 @@ export interface WaterResult {
   condensationMol: number;
   /** (C + added) / Σa. */
   effectiveR: number;
-  /** (C + added) / Σg. */
-  effectiveH: number;
+  /** (C + added) / Σg'; absent when there are no hydrolysable groups (colloidal silica alone). */
+  effectiveH?: number;
+  /** q · Σ n_L: alkoxy groups replaced by modifier ligands, when there are any (Σg' = Σg − this). */
+  groupsReplacedMol?: number;
+}
+
+/** The solvent: what was added, what precursor solutions carried in, and the molar ratio they make together. */
+export interface SolventResult {
+  materialId: string;
+  addedGrams: number;
+  carriedGrams: number;
+  addedMol?: number;
+  carriedMol?: number;
+  /** (added + carried) / Σa, mol/mol. */
+  molPerNetworkAtom?: number;
+}
+
+/** One modifier line (chemistry: "Modifiers"). */
+export interface ModifierResult {
+  materialId: string;
+  precursorId: string;
+  /** x, mol ligand per mol metal of that precursor. */
+  molPerMetal: number;
+  /** n_L = x · a_p. */
+  ligandMol: number;
+  /** q · n_L. */
+  groupsReplacedMol: number;
+  /** g of bonded ligand in the dry composite (0 when burnt out). */
+  bondedGrams: number;
+  /** The step that reaches the ligand's removal temperature, when one does. */
+  removedInStep?: string;
 }
 
 /** Alcohol released on full hydrolysis. */
@@ -103,7 +132,14 @@ export interface CompositeResult {
 export type ThermalStatus = "clear" | "caution" | "fail";
 
 /** Which thermal limit a check or the allowed maximum refers to. */
-export type ThermalLimit = "degradationOnset" | "maxService" | "melting" | "glassTransition" | "conversion";
+export type ThermalLimit =
+  | "degradationOnset"
+  | "degradationOnsetInert"
+  | "heatDeflection"
+  | "maxService"
+  | "melting"
+  | "glassTransition"
+  | "conversion";
 
 /** One (material × step) thermal check. */
 export interface ThermalCheck {
@@ -117,6 +153,10 @@ export interface ThermalCheck {
   /** °C margin applied. */
   marginC: number;
   status: ThermalStatus;
+  /** The step's stage ("curing" when the step did not say); absent in results stored before stages existed. */
+  stage?: "sol" | "drying" | "curing";
+  /** The step's atmosphere ("air" when the step did not say); absent in results stored before atmospheres existed. */
+  atmosphere?: "air" | "inert";
 }
 
 /** Thermal compatibility of the process steps. */
@@ -143,6 +183,10 @@ export interface FormulationResult {
   water: WaterResult;
   alcohol: AlcoholRelease[];
   sol: SolResult;
+  /** The solvent's added and carried amounts, when there is a solvent. */
+  solvent?: SolventResult;
+  /** Modifier lines, when there are any. */
+  modifiers?: ModifierResult[];
   composite: CompositeResult;
   thermal: ThermalResult;
   notices: Notice[];

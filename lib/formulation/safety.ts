@@ -21,7 +21,8 @@ function names(materials: readonly Material[]): string {
 
 /**
  * Safety notices for the dispensed materials (chemistry: "Safety"): alkoxides
- * moisture-sensitive and flammable; methanol released by methoxy precursors;
+ * moisture-sensitive and flammable (the material flag `moistureSensitive`,
+ * else any precursor with alkoxy groups); methanol released by methoxy precursors;
  * materials acutely toxic by inhalation (GHS H330/H331, e.g.
  * tetramethoxysilane, with H318 severe eye damage); corrosive stocks (H314,
  * strong acids, ammonia). Each defers to the supplier's safety data sheet.
@@ -37,8 +38,9 @@ function names(materials: readonly Material[]): string {
  */
 export function safetyNotices(dispensed: readonly Material[], alcohols: readonly AlcoholRelease[]): Notice[] {
   const notices: Notice[] = [];
+  // The material's own flag decides; without one, a precursor with alkoxy groups is taken to be an alkoxide.
   const alkoxides = dispensed.filter(
-    (material) => material.kind === "precursor" && (material.precursor?.hydrolysableGroupsPerMolecule ?? 0) > 0,
+    (material) => material.moistureSensitive ?? (material.kind === "precursor" && (material.precursor?.hydrolysableGroupsPerMolecule ?? 0) > 0),
   );
   if (alkoxides.length > 0) {
     notices.push({

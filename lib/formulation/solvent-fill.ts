@@ -1,4 +1,6 @@
-import { WATER_MOLAR_MASS_G_PER_MOL } from "./constants";
+import type { DecLine } from "./composition";
+import { MIN_LINE_GRAMS, WATER_MOLAR_MASS_G_PER_MOL } from "./constants";
+import type { Basis } from "./input-schema";
 import { type Dec, dec, ONE, WATER_MOLAR_MASS, ZERO } from "./decimal";
 import { FormulationError } from "./errors";
 import { requireDensity, waterFractionOf, type IndexedMaterial } from "./material-index";
@@ -45,6 +47,8 @@ export function solveFill(p: {
   waterNeededMol: Dec;
   solvent: IndexedMaterial;
   water: IndexedMaterial;
+  /** S, g of dry composite: lets the error state the highest reachable solids content. */
+  solidGrams?: Dec;
 }): FillResult {
   const isVolume = p.target.kind === "volume";
   const needMol = p.waterNeededMol.greaterThan(0) ? p.waterNeededMol : ZERO;
@@ -81,9 +85,12 @@ export function solveFill(p: {
     }
   }
 
+  // No room left: a remainder within rounding of zero is no solvent at all, not a 1e-14 g line or an error.
+  if (solventGrams.abs().lessThan(MIN_LINE_GRAMS)) solventGrams = ZERO;
   if (solventGrams.isNegative()) {
     const unit = isVolume ? "mL" : "g";
     const show = (value: Dec): string => String(Number(value.toPrecision(5)));
+    const show4 = (value: Dec): string => String(Number(value.toPrecision(4)));
     if (isVolume) {
       throw new FormulationError(
         "mould_too_small",
@@ -96,8 +103,72 @@ export function solveFill(p: {
       "solids_content_too_high",
       "basis.solidsFraction",
       `the reagents alone weigh ${show(reagentsAlone)} ${unit}, more than the ${show(p.target.amount)} ${unit} sol; ` +
-        "lower the solids content",
+        (p.solidGrams
+          ? `lower the solids content: the highest these reagents reach is ${show4(p.solidGrams.div(reagentsAlone))} (with no solvent added)`
+          : "lower the solids content"),
     );
   }
   return { solventGrams, addWaterMol };
+}
+
+/** The solvent line of a fill and the water it leaves to add. */
+export interface FillOutcome {
+  /** The solvent line, absent when there is no room left. */
+  line?: DecLine;
+  /** mol water the added solvent carries. */
+  carriedWaterMol: Dec;
+  /** mol water still to add. */
+  addWaterMol: Dec;
+}
+
+/**
+ * A solvent fill for a solids-content or gel-body basis: makes the sol up to
+ * the basis's sol mass or mould volume around the lines already in it (see
+ * `solveFill`), and returns the solvent's line.
+ *
+ * @param p - basis, lines so far, solvent and water materials, S (g), water still needed (mol)
+ * @example
+ * ```ts
+ * fillSolvent({ basis, lines, solventEntry: ethanol, waterEntry: waterDi, solidMass: new Dec(20), waterNeededMol: new Dec(0.5) }).line?.massGrams;
+ * ```
+ */
+export function fillSolvent(p: {
+  basis: Exclude<Basis, { type: "solidMass" }>;
+  lines: readonly DecLine[];
+  solventEntry: IndexedMaterial;
+  waterEntry: IndexedMaterial;
+  solidMass: Dec;
+  waterNeededMol: Dec;
+}): FillOutcome {
+  let otherGrams = ZERO;
+  let otherMl = ZERO;
+  for (const line of p.lines) {
+    otherGrams = otherGrams.plus(line.massGrams);
+    otherMl = otherMl.plus(line.volumeMl);
+  }
+  const fill = solveFill({
+    target: p.basis.type === "gelBody" ? { kind: "volume", amount: dec(p.basis.volumeMl) } : { kind: "mass", amount: dec(p.basis.solMassGrams) },
+    otherGrams,
+    otherMl,
+    waterNeededMol: p.waterNeededMol,
+    solvent: p.solventEntry,
+    water: p.waterEntry,
+    solidGrams: p.solidMass,
+  });
+  const material = p.solventEntry.material;
+  const carriedWaterMol = fill.solventGrams.times(waterFractionOf(material)).div(WATER_MOLAR_MASS);
+  if (!fill.solventGrams.greaterThan(0)) return { carriedWaterMol, addWaterMol: fill.addWaterMol };
+  return {
+    line: {
+      materialId: material.id,
+      role: "solvent",
+      moles: material.molarMass === undefined ? undefined : fill.solventGrams.times(dec(material.assay ?? 1)).div(dec(material.molarMass)),
+      massGrams: fill.solventGrams,
+      volumeMl: fill.solventGrams.div(requireDensity(p.solventEntry)),
+      carriedWaterMol,
+      carriedSolventGrams: ZERO,
+    },
+    carriedWaterMol,
+    addWaterMol: fill.addWaterMol,
+  };
 }

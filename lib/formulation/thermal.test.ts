@@ -1,8 +1,11 @@
 /**
  * Thermal compatibility, against the rules of the formulation chemistry:
- * hard limit H = min(Td, grade maximum[, Tm for a substrate]); fail at T ≥ H;
- * caution at T ≥ H − margin, at T ≥ Tg of a substrate, at T ≥ Tm of an organic
- * phase; highest allowed step = lowest H − margin. Limits used are those of
+ * hard limit H = Td of an organic phase (under the step's atmosphere), and for
+ * a substrate min(heat deflection temperature or else grade maximum, Td, Tm);
+ * fail at T ≥ H; caution at T ≥ H − margin, above a substrate's service rating
+ * when its short-term limit is known, at T ≥ Tg of an amorphous substrate, at
+ * T ≥ Tm of an organic phase in drying and curing; highest allowed step =
+ * lowest H − margin. Limits used are those of
  * data/materials.ts, restated in the comments.
  */
 import { describe, expect, it } from "vitest";
@@ -33,47 +36,52 @@ function onPolycarbonate(cureC: number, marginC?: number): FormulationInput {
 }
 
 describe("thermal checks on a polycarbonate substrate", () => {
-  // H = min(450, 125) = 125 °C (Tm not set: amorphous); caution from 125 − 20 = 105 °C
+  // Polycarbonate (data/materials.ts): Tg 147, Td 450, heat deflection temperature 132 °C (1.8 MPa,
+  // ISO 75-2 method A), continuous-use rating 125 °C. Hard limit H = min(450, 132) = 132 °C (Tm not set:
+  // amorphous); caution from 132 − 20 = 112 °C, and above the 125 °C rating (keep it short).
   it("returns clear for a 100 °C cure", () => {
     const { thermal } = computeFormulation(onPolycarbonate(100));
     expect(thermal.status).toBe("clear");
-    expect(thermal.maxAllowedC).toBe(105);
-    expect(thermal.binding).toEqual({ materialId: "polycarbonate", limit: "maxService" });
+    expect(thermal.maxAllowedC).toBe(112);
+    expect(thermal.binding).toEqual({ materialId: "polycarbonate", limit: "heatDeflection" });
     expect(thermal.checks).toHaveLength(2);
     expect(thermal.checks[1]).toEqual({
       materialId: "polycarbonate",
       stepName: "Cure",
       temperatureC: 100,
-      limit: "maxService",
-      limitC: 125,
+      limit: "heatDeflection",
+      limitC: 132,
       marginC: 20,
       status: "clear",
+      stage: "curing",
+      atmosphere: "air",
     });
   });
 
-  it("returns caution for a 110 °C cure within the 20 °C margin", () => {
-    // 105 ≤ 110 < 125
-    const result = computeFormulation(onPolycarbonate(110));
+  it("returns caution for a 115 °C cure within the 20 °C margin", () => {
+    // 112 ≤ 115 < 132
+    const result = computeFormulation(onPolycarbonate(115));
     expect(result.thermal.status).toBe("caution");
     expect(result.thermal.checks[1]?.status).toBe("caution");
     expect(result.notices.find((n) => n.code === "thermal_limit_near")?.level).toBe("caution");
+    expect(result.notices.map((n) => n.code)).not.toContain("above_service_rating");
   });
 
-  it("returns fail for a 130 °C cure at or above the grade maximum", () => {
-    // 130 ≥ 125
-    const result = computeFormulation(onPolycarbonate(130));
+  it("returns fail for a 135 °C cure at or above the heat deflection temperature", () => {
+    // 135 ≥ 132
+    const result = computeFormulation(onPolycarbonate(135));
     expect(result.thermal.status).toBe("fail");
     expect(result.thermal.checks[0]?.status).toBe("clear");
-    expect(result.thermal.checks[1]).toMatchObject({ status: "fail", limit: "maxService", limitC: 125 });
+    expect(result.thermal.checks[1]).toMatchObject({ status: "fail", limit: "heatDeflection", limitC: 132 });
     expect(result.notices.find((n) => n.code === "thermal_limit_exceeded")?.level).toBe("error");
   });
 
   it("fails exactly at the hard limit and uses the formulation's own margin", () => {
-    // T = H = 125 → fail (T ≥ H); margin 5 → caution from 120, so 118 is clear and maxAllowed 120
-    expect(computeFormulation(onPolycarbonate(125)).thermal.status).toBe("fail");
-    const relaxed = computeFormulation(onPolycarbonate(118, 5)).thermal;
+    // T = H = 132 → fail (T ≥ H); margin 5 → caution from 127, so 120 is clear and maxAllowed 127
+    expect(computeFormulation(onPolycarbonate(132)).thermal.status).toBe("fail");
+    const relaxed = computeFormulation(onPolycarbonate(120, 5)).thermal;
     expect(relaxed.status).toBe("clear");
-    expect(relaxed.maxAllowedC).toBe(120);
+    expect(relaxed.maxAllowedC).toBe(127);
     expect(relaxed.checks[1]?.marginC).toBe(5);
   });
 });
@@ -112,8 +120,13 @@ describe("checkThermal", () => {
   });
 
   it("includes the melting point in a substrate's hard limit but not in an organic phase's", () => {
-    // UHMWPE substrate: Tm 135, Td 400, grade maximum 80 → H = 80
+    // UHMWPE substrate: Tm 135, Td 400, heat deflection 47 (so the 80 °C rating is not the hard limit) → H = 47
     expect(hardLimit({ materialId: "u", name: "U", role: "substrate", path: "", thermal: ref("uhmwpe").thermal })).toEqual({
+      limit: "heatDeflection",
+      limitC: 47,
+    });
+    // without a short-term limit the grade maximum is the hard limit
+    expect(hardLimit({ materialId: "u", name: "U", role: "substrate", path: "", thermal: { meltingC: 135, degradationOnsetC: 400, maxServiceC: 80 } })).toEqual({
       limit: "maxService",
       limitC: 80,
     });
@@ -126,14 +139,14 @@ describe("checkThermal", () => {
   });
 
   it("names the material and limit that bind the highest allowed step", () => {
-    // PCL organic: H = 350 → 330; polycarbonate: H = 125 → 105 → binding polycarbonate, maxService
+    // PCL organic: H = 350 → 330; polycarbonate: H = 132 (heat deflection) → 112 → binding polycarbonate
     const subjects: ThermalSubject[] = [
       { materialId: "pcl", name: "PCL", role: "organic", path: "materials.0", thermal: ref("pcl").thermal },
       { materialId: "polycarbonate", name: "PC", role: "substrate", path: "materials.1", thermal: ref("polycarbonate").thermal },
     ];
     const { thermal } = checkThermal(subjects, [], [step(25)], 20);
-    expect(thermal.maxAllowedC).toBe(105);
-    expect(thermal.binding).toEqual({ materialId: "polycarbonate", limit: "maxService" });
+    expect(thermal.maxAllowedC).toBe(112);
+    expect(thermal.binding).toEqual({ materialId: "polycarbonate", limit: "heatDeflection" });
     expect(thermal.checks).toHaveLength(2);
   });
 
@@ -157,7 +170,7 @@ describe("checkThermal", () => {
     const reached = checkThermal([], [conversion], [step(25), step(550, "Anneal")], 20);
     expect(reached.thermal.status).toBe("clear");
     expect(reached.thermal.checks).toEqual([
-      { materialId: "ca", stepName: "Anneal", temperatureC: 550, limit: "conversion", limitC: 550, marginC: 20, status: "clear" },
+      { materialId: "ca", stepName: "Anneal", temperatureC: 550, limit: "conversion", limitC: 550, marginC: 20, status: "clear", stage: "curing", atmosphere: "air" },
     ]);
   });
 

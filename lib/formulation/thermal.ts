@@ -28,62 +28,150 @@ export interface NamedLimit {
   limitC: number;
 }
 
+/** Where a step happens: in the liquid sol, while drying, or while curing (annealing included). */
+export type StepStage = "sol" | "drying" | "curing";
+/** The gas over a step. */
+export type StepAtmosphere = "air" | "inert";
+
+/** A step's stage; stored schedules without one keep today's checks ("curing"). */
+export const stageOf = (step: Pick<ProcessStep, "stage">): StepStage => step.stage ?? "curing";
+/** A step's atmosphere; "air" when not stated. */
+export const atmosphereOf = (step: Pick<ProcessStep, "atmosphere">): StepAtmosphere => step.atmosphere ?? "air";
+
 const STATUS_RANK: Record<ThermalStatus, number> = { clear: 0, caution: 1, fail: 2 };
 
 const LIMIT_WORDS: Record<ThermalLimit, string> = {
-  degradationOnset: "degradation onset",
+  degradationOnset: "degradation onset in air",
+  degradationOnsetInert: "degradation onset in inert gas",
+  heatDeflection: "heat deflection temperature (1.8 MPa)",
   maxService: "maximum service temperature",
   melting: "melting point",
   glassTransition: "glass transition",
   conversion: "conversion temperature",
 };
 
+/** The degradation onset that holds under `atmosphere`: the inert value when known, else the air value. */
+function degradation(t: ThermalData, atmosphere: StepAtmosphere): NamedLimit | undefined {
+  if (atmosphere === "inert" && t.degradationOnsetInertC !== undefined) {
+    return { limit: "degradationOnsetInert", limitC: t.degradationOnsetInertC };
+  }
+  return t.degradationOnsetC === undefined ? undefined : { limit: "degradationOnset", limitC: t.degradationOnsetC };
+}
+
 /**
- * Hard limit H, °C: the lowest of the degradation onset and the grade
- * maximum, and for a substrate also the melting point (the part must keep
- * its shape). Undefined when none is known.
+ * Hard limit H, °C (chemistry: "Thermal compatibility"): a step fails at
+ * T ≥ H. For an organic phase, its degradation onset under the step's
+ * atmosphere (inert falls back to air). For a substrate, the lowest of its
+ * short-term limit (heat deflection temperature at 1.8 MPa, ISO 75-2 method
+ * A) — or, when that is unknown, its maximum service temperature —, its
+ * degradation onset and its melting point (the part must keep its shape).
+ * Undefined when none is known.
  *
+ * @param subject - an organic phase or the substrate
+ * @param atmosphere - the step's atmosphere, default "air"
  * @example
  * ```ts
  * hardLimit({ materialId: "pc", name: "PC", role: "substrate", path: "materials.0",
- *   thermal: { glassTransitionC: 147, degradationOnsetC: 450, maxServiceC: 125 } });
- * // { limit: "maxService", limitC: 125 }
+ *   thermal: { glassTransitionC: 147, degradationOnsetC: 450, heatDeflectionC: 132, maxServiceC: 125 } });
+ * // { limit: "heatDeflection", limitC: 132 }
  * ```
  */
-export function hardLimit(subject: ThermalSubject): NamedLimit | undefined {
+export function hardLimit(subject: ThermalSubject, atmosphere: StepAtmosphere = "air"): NamedLimit | undefined {
   const t = subject.thermal;
   if (!t) return undefined;
   const candidates: NamedLimit[] = [];
-  if (t.degradationOnsetC !== undefined) candidates.push({ limit: "degradationOnset", limitC: t.degradationOnsetC });
-  if (t.maxServiceC !== undefined) candidates.push({ limit: "maxService", limitC: t.maxServiceC });
-  if (subject.role === "substrate" && t.meltingC !== undefined) candidates.push({ limit: "melting", limitC: t.meltingC });
+  const td = degradation(t, atmosphere);
+  if (td) candidates.push(td);
+  if (subject.role === "substrate") {
+    if (t.heatDeflectionC !== undefined) candidates.push({ limit: "heatDeflection", limitC: t.heatDeflectionC });
+    else if (t.maxServiceC !== undefined) candidates.push({ limit: "maxService", limitC: t.maxServiceC });
+    if (t.meltingC !== undefined) candidates.push({ limit: "melting", limitC: t.meltingC });
+  }
   let lowest: NamedLimit | undefined;
   for (const candidate of candidates) if (!lowest || candidate.limitC < lowest.limitC) lowest = candidate;
   return lowest;
 }
 
-/** The softening or melting limit that brings a caution: Tg of a substrate, Tm of an organic phase. */
-function softLimit(subject: ThermalSubject): NamedLimit | undefined {
+/**
+ * The limits that bring a caution (not a failure) in a step of this stage:
+ * a substrate's continuous-use rating when a short-term limit is also known,
+ * an amorphous substrate's glass transition (one without a melting point),
+ * an organic phase's melting point in drying and curing, and the glass
+ * transition of an organic phase known by nothing else, in curing.
+ */
+function softLimits(subject: ThermalSubject, stage: StepStage): NamedLimit[] {
   const t = subject.thermal;
-  if (subject.role === "substrate" && t?.glassTransitionC !== undefined) {
-    return { limit: "glassTransition", limitC: t.glassTransitionC };
+  if (!t) return [];
+  const out: NamedLimit[] = [];
+  if (subject.role === "substrate") {
+    if (t.heatDeflectionC !== undefined && t.maxServiceC !== undefined) out.push({ limit: "maxService", limitC: t.maxServiceC });
+    if (t.glassTransitionC !== undefined && t.meltingC === undefined) out.push({ limit: "glassTransition", limitC: t.glassTransitionC });
+  } else {
+    if (t.meltingC !== undefined && stage !== "sol") out.push({ limit: "melting", limitC: t.meltingC });
+    const onlyTg = t.glassTransitionC !== undefined && t.meltingC === undefined && t.degradationOnsetC === undefined && t.degradationOnsetInertC === undefined;
+    if (onlyTg && stage === "curing") out.push({ limit: "glassTransition", limitC: t.glassTransitionC! });
   }
-  if (subject.role === "organic" && t?.meltingC !== undefined) return { limit: "melting", limitC: t.meltingC };
-  return undefined;
+  return out;
+}
+
+/** The limit a row names when nothing was passed: the hard limit in air, else the first soft limit of any stage. */
+function anyLimit(subject: ThermalSubject): NamedLimit | undefined {
+  return hardLimit(subject, "air") ?? softLimits(subject, "curing")[0];
 }
 
 function show(value: number): string {
   return String(Number(value.toPrecision(6)));
 }
 
+/** One step checked against one subject; `limit` is the subject's `anyLimit`. */
+function checkStep(subject: ThermalSubject, limit: NamedLimit, step: ProcessStep, marginC: number): ThermalCheck {
+  const stage = stageOf(step);
+  const atmosphere = atmosphereOf(step);
+  const t = step.temperatureC;
+  const hard = hardLimit(subject, atmosphere);
+  let status: ThermalStatus = "clear";
+  let reference: NamedLimit | undefined = hard;
+  if (hard && t >= hard.limitC) {
+    status = "fail";
+  } else if (hard && t >= new Dec(hard.limitC).minus(marginC).toNumber()) {
+    status = "caution";
+  } else {
+    for (const soft of softLimits(subject, stage)) {
+      if (t >= soft.limitC) {
+        status = "caution";
+        reference = soft;
+        break;
+      }
+    }
+  }
+  // A row names the limit it was judged against; a material with soft limits only names the first of them.
+  reference ??= softLimits(subject, stage)[0] ?? limit;
+  return {
+    materialId: subject.materialId,
+    stepName: step.name,
+    temperatureC: t,
+    limit: reference.limit,
+    limitC: reference.limitC,
+    marginC,
+    status,
+    stage,
+    atmosphere,
+  };
+}
+
 /**
  * Thermal compatibility of the process steps (chemistry: "Thermal
  * compatibility"). For every organic phase and the substrate, per step:
- * fail at T ≥ H; caution at T ≥ H − margin, at T ≥ Tg of a substrate, at
- * T ≥ Tm of an organic phase; clear otherwise. maxAllowedC is the lowest
- * H − margin, with the material and limit that bind it. A precursor's
- * conversion temperature gets one row on the hottest step: caution when no
- * step reaches it. Temperatures in °C.
+ * fail at T ≥ H (the hard limit under the step's atmosphere, see
+ * `hardLimit`); caution at T ≥ H − margin, and at the soft limits that apply
+ * in the step's stage (a substrate's service rating when its short-term
+ * limit is known, with the hours spent above it; an amorphous substrate's
+ * Tg; an organic phase's Tm in drying and curing; the Tg of an organic phase
+ * known by nothing else, in curing); clear otherwise. maxAllowedC is the
+ * lowest H − margin (air limits unless every step is inert), with the
+ * material and limit that bind it. A precursor's conversion temperature gets
+ * one row on the hottest step: caution when no step reaches it.
+ * Temperatures in °C, durations in h.
  *
  * @param subjects - organic phases and the substrate
  * @param conversions - precursors with a conversion temperature
@@ -92,8 +180,8 @@ function show(value: number): string {
  * @returns the thermal result and its notices
  * @example
  * ```ts
- * const { thermal } = checkThermal([polycarbonate], [], [{ name: "cure", temperatureC: 130, durationH: 2 }], 20);
- * thermal.status; // "fail" when the grade maximum is 125 °C
+ * const { thermal } = checkThermal([polycarbonate], [], [{ name: "cure", temperatureC: 135, durationH: 2 }], 20);
+ * thermal.status; // "fail" when the heat deflection temperature is 132 °C
  * ```
  */
 export function checkThermal(
@@ -105,11 +193,11 @@ export function checkThermal(
   const checks: ThermalCheck[] = [];
   const notices: Notice[] = [];
   let maxAllowed: { value: number; materialId: string; limit: ThermalLimit } | undefined;
+  const allInert = steps.length > 0 && steps.every((step) => atmosphereOf(step) === "inert");
 
   for (const subject of subjects) {
-    const hard = hardLimit(subject);
-    const soft = softLimit(subject);
-    if (!hard && !soft) {
+    const any = anyLimit(subject);
+    if (!any) {
       notices.push({
         level: "info",
         code: "no_thermal_data",
@@ -118,31 +206,28 @@ export function checkThermal(
       });
       continue;
     }
-    const cautionFrom = hard ? new Dec(hard.limitC).minus(marginC).toNumber() : undefined;
-    if (hard && cautionFrom !== undefined && (!maxAllowed || cautionFrom < maxAllowed.value)) {
-      maxAllowed = { value: cautionFrom, materialId: subject.materialId, limit: hard.limit };
+    const hard = hardLimit(subject, allInert ? "inert" : "air");
+    if (hard) {
+      const cautionFrom = new Dec(hard.limitC).minus(marginC).toNumber();
+      if (!maxAllowed || cautionFrom < maxAllowed.value) maxAllowed = { value: cautionFrom, materialId: subject.materialId, limit: hard.limit };
     }
-    for (const step of steps) {
-      const t = step.temperatureC;
-      let status: ThermalStatus = "clear";
-      let reference = (hard ?? soft) as NamedLimit;
-      if (hard && t >= hard.limitC) {
-        status = "fail";
-      } else if (hard && cautionFrom !== undefined && t >= cautionFrom) {
-        status = "caution";
-      } else if (soft && t >= soft.limitC) {
-        status = "caution";
-        reference = soft;
+    for (const step of steps) checks.push(checkStep(subject, any, step, marginC));
+
+    const service = subject.role === "substrate" ? subject.thermal : undefined;
+    if (service?.heatDeflectionC !== undefined && service.maxServiceC !== undefined) {
+      const above = steps.filter((step) => step.temperatureC >= service.maxServiceC!);
+      if (above.length > 0) {
+        const hours = above.reduce((sum, step) => sum.plus(step.durationH), new Dec(0));
+        notices.push({
+          level: "caution",
+          code: "above_service_rating",
+          field: "steps",
+          message:
+            `${subject.name} spends ${show(hours.toNumber())} h at or above its continuous-use rating of ${show(service.maxServiceC)} °C ` +
+            `(${above.map((step) => `"${step.name}" ${show(step.temperatureC)} °C`).join(", ")}): keep such steps short; ` +
+            `its short-term limit is the heat deflection temperature, ${show(service.heatDeflectionC)} °C.`,
+        });
       }
-      checks.push({
-        materialId: subject.materialId,
-        stepName: step.name,
-        temperatureC: t,
-        limit: reference.limit,
-        limitC: reference.limitC,
-        marginC,
-        status,
-      });
     }
   }
 
@@ -160,6 +245,8 @@ export function checkThermal(
           limitC: precursor.conversionTemperatureC,
           marginC,
           status: reached ? "clear" : "caution",
+          stage: stageOf(hottest),
+          atmosphere: atmosphereOf(hottest),
         });
       }
       if (!reached) {
@@ -191,10 +278,10 @@ export function checkThermal(
       message: "No process steps yet: thermal compatibility is checked once steps are added.",
     });
   }
+  const names = new Map(subjects.map((subject) => [subject.materialId, subject.name]));
   for (const level of ["fail", "caution"] as const) {
     const rows = checks.filter((check) => check.status === level && check.limit !== "conversion");
     if (rows.length === 0) continue;
-    const names = new Map(subjects.map((subject) => [subject.materialId, subject.name]));
     const detail = rows
       .map((row) => `"${row.stepName}" at ${show(row.temperatureC)} °C vs ${names.get(row.materialId) ?? row.materialId} ${LIMIT_WORDS[row.limit]} ${show(row.limitC)} °C`)
       .join("; ");
@@ -205,7 +292,7 @@ export function checkThermal(
       message:
         level === "fail"
           ? `Process steps at or above a hard thermal limit: ${detail}.`
-          : `Process steps within the ${show(marginC)} °C margin of a limit, or past a glass transition or melting point: ${detail}.`,
+          : `Process steps within the ${show(marginC)} °C margin of a limit, past a glass transition or melting point, or above a service rating: ${detail}.`,
     });
   }
 

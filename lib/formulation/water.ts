@@ -2,21 +2,21 @@ import { Dec, ZERO } from "./decimal";
 import type { Notice } from "./result-types";
 
 /**
- * Target water W, mol: R · Σa (R = mol H2O per mol network-forming atom) or
- * h · Σg (h = mol H2O per mol hydrolysable group).
+ * Target water W, mol (chemistry: "Water"): R · Σa (R = mol H2O per mol
+ * network-forming atom), h · Σg' (h = mol H2O per mol hydrolysable group
+ * left after ligand exchange) or value · n_ref (per mol of one precursor).
  *
- * @param ratio - "R" or "h"
+ * @param ratio - "R", "h" or "perPrecursor"
  * @param value - the ratio's value
- * @param networkAtomMol - Σa, mol
- * @param hydrolysableGroupMol - Σg, mol
+ * @param mol - Σa, Σg' and n_ref, mol
  * @returns W in mol (decimal)
  * @example
  * ```ts
- * waterTarget("R", new Dec(4), new Dec(0.1), new Dec(0.4)).toNumber(); // 0.4 mol
+ * waterTarget("R", new Dec(4), { networkAtomMol: new Dec(0.1), groupMol: new Dec(0.4), referenceMol: new Dec(0.1) }).toNumber(); // 0.4 mol
  * ```
  */
-export function waterTarget(ratio: "R" | "h", value: Dec, networkAtomMol: Dec, hydrolysableGroupMol: Dec): Dec {
-  return value.times(ratio === "R" ? networkAtomMol : hydrolysableGroupMol);
+export function waterTarget(ratio: "R" | "h" | "perPrecursor", value: Dec, mol: { networkAtomMol: Dec; groupMol: Dec; referenceMol: Dec }): Dec {
+  return value.times(ratio === "R" ? mol.networkAtomMol : ratio === "h" ? mol.groupMol : mol.referenceMol);
 }
 
 /**
@@ -32,6 +32,27 @@ export function waterTarget(ratio: "R" | "h", value: Dec, networkAtomMol: Dec, h
 export function waterToAdd(targetMol: Dec, carriedMol: Dec): Dec {
   const add = targetMol.minus(carriedMol);
   return add.isNegative() ? ZERO : add;
+}
+
+/**
+ * Relative tolerance of the water-ratio comparisons (dimensionless): R = 4
+ * with two tetra-alkoxides is exactly the full-hydrolysis ratio even when
+ * the two sums differ in the 20th digit. Common practice, no source.
+ */
+export const WATER_RATIO_TOLERANCE = 1e-9;
+
+/**
+ * True when `value` is below `reference` by more than the relative
+ * tolerance WATER_RATIO_TOLERANCE.
+ *
+ * @example
+ * ```ts
+ * clearlyBelow(new Dec("3.99999999999999999999"), new Dec(4)); // false
+ * clearlyBelow(new Dec(3.99), new Dec(4)); // true
+ * ```
+ */
+export function clearlyBelow(value: Dec, reference: Dec): boolean {
+  return value.lessThan(reference.times(1 - WATER_RATIO_TOLERANCE));
 }
 
 /** Formats a number for a notice (display only). */
@@ -59,21 +80,25 @@ export function waterNotices(p: {
   totalMol: Dec;
   networkAtomMol: Dec;
   hydrolysableGroupMol: Dec;
+  /** False when the carried water does not count toward the target (then no "exceeds" caution). */
+  countCarried?: boolean;
 }): Notice[] {
   const notices: Notice[] = [];
   const effectiveR = (): Dec => p.totalMol.div(p.networkAtomMol);
-  if (p.carriedMol.greaterThan(p.targetMol)) {
+  if ((p.countCarried ?? true) && clearlyBelow(p.targetMol, p.carriedMol)) {
     notices.push({
       level: "caution",
       code: "carried_water_exceeds_target",
       field: "water.value",
       message:
         `The other materials already bring ${show(p.carriedMol)} mol water, more than the target ${show(p.targetMol)} mol; ` +
-        `no water is added and the ratio reached is R = ${show(effectiveR())} (h = ${show(p.totalMol.div(p.hydrolysableGroupMol))}).`,
+        `no water is added and the ratio reached is R = ${show(effectiveR())}` +
+        (p.hydrolysableGroupMol.isZero() ? "." : ` (h = ${show(p.totalMol.div(p.hydrolysableGroupMol))}).`),
     });
   }
   const netCondensation = p.hydrolysableGroupMol.div(2);
-  if (p.totalMol.lessThan(netCondensation)) {
+  if (p.hydrolysableGroupMol.isZero()) return notices;
+  if (clearlyBelow(p.totalMol, netCondensation)) {
     notices.push({
       level: "caution",
       code: "below_net_condensation",
@@ -82,7 +107,7 @@ export function waterNotices(p: {
         `Effective R = ${show(effectiveR())} is below the net-condensation ratio ${show(netCondensation.div(p.networkAtomMol))}: ` +
         "not enough water for complete condensation, alkoxy groups will remain in the gel.",
     });
-  } else if (p.totalMol.lessThan(p.hydrolysableGroupMol)) {
+  } else if (clearlyBelow(p.totalMol, p.hydrolysableGroupMol)) {
     notices.push({
       level: "info",
       code: "below_full_hydrolysis",

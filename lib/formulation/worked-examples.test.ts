@@ -18,7 +18,7 @@ const WATER = 18.015; // g/mol, 2 × 1.008 + 15.999 (IUPAC/CIAAW 2021 abridged)
 describe("computeFormulation worked examples", () => {
   it("returns the recipe for TEOS + titanium isopropoxide + PCL (dry solid mass basis, molar solvent)", () => {
     // 10 g dry composite: 60 wt% SiO2 from TEOS, 10 wt% TiO2 from Ti(OiPr)4, 30 wt% PCL.
-    // TEOS M 208.329, ρ 0.933; SiO2 60.083, 2.20 | Ti(OiPr)4 M 284.219, ρ 0.96; TiO2 79.865, 3.90
+    // TEOS M 208.329, ρ 0.933; SiO2 60.083, 2.20 | Ti(OiPr)4 M 284.219, ρ 0.96; TiO2 79.865, 2.70 (amorphous titania of a low-temperature hybrid)
     // PCL ρ 1.145 | ethanol M 46.069, ρ 0.7893 | water M 18.015, ρ 0.9982
     //
     // n(TEOS) = 6 g / 60.083 = 0.0998619 mol → 0.0998619 × 208.329 = 20.8041 g → / 0.933 = 22.2981 mL
@@ -28,8 +28,8 @@ describe("computeFormulation worked examples", () => {
     // water R = 2: W = 0.224766 mol → 4.04916 g → 4.05646 mL (no carried water)
     // ethanol 4 mol/mol: 0.449532 mol → 20.7095 g → 26.2378 mL
     // sol 52.1215 g, 58.9195 mL; solids 10 / 52.1215 = 0.191859
-    // Σ w/ρ = 0.6/2.2 + 0.1/3.9 + 0.3/1.145 = 0.560377 → ρth = 1.78451 g/cm³
-    // φ = 0.486685 (SiO2), 0.0457567 (TiO2), 0.467558 (PCL)
+    // Σ w/ρ = 0.6/2.2 + 0.1/2.7 + 0.3/1.145 = 0.571773 → ρth = 1.74895 g/cm³
+    // φ = 0.476985 (SiO2), 0.0647758 (TiO2), 0.458239 (PCL)
     // ethanol released 4 × 0.0998619 = 0.399447 mol (18.4021 g); 2-propanol 0.0500845 mol (3.00988 g)
     const input: FormulationInput = {
       materials: [ref("teos"), ref("ti-isopropoxide"), ref("pcl"), ref("ethanol"), ref("water-di")],
@@ -54,7 +54,7 @@ describe("computeFormulation worked examples", () => {
     expect(line(result, "ethanol").massGrams).toBeCloseTo(20.7095, 3);
     expect(result.sol.massGrams).toBeCloseTo(52.1215, 3);
     expect(result.sol.solidsFraction).toBeCloseTo(0.191859, 5);
-    expect(result.composite.theoreticalDensity).toBeCloseTo(1.78451, 4);
+    expect(result.composite.theoreticalDensity).toBeCloseTo(1.74895, 4);
 
     // plain-number recomputation at full precision
     const nSi = 6 / 60.083;
@@ -85,10 +85,10 @@ describe("computeFormulation worked examples", () => {
     expectClose(result.sol.volumeMl, solVolume);
     expectClose(result.sol.residueGramsPerL, 10 / (solVolume / 1000));
     expectClose(result.sol.networkAtomMolarity, a / (solVolume / 1000));
-    const specific = 0.6 / 2.2 + 0.1 / 3.9 + 0.3 / 1.145;
+    const specific = 0.6 / 2.2 + 0.1 / 2.7 + 0.3 / 1.145;
     expectClose(result.composite.theoreticalDensity, 1 / specific);
     expectClose(result.composite.phases[0]?.volumeFraction, 0.6 / 2.2 / specific);
-    expectClose(result.composite.phases[1]?.volumeFraction, 0.1 / 3.9 / specific);
+    expectClose(result.composite.phases[1]?.volumeFraction, 0.1 / 2.7 / specific);
     expectClose(result.composite.phases[2]?.volumeFraction, 0.3 / 1.145 / specific);
     expectClose(result.composite.denseShrinkage.volumetric, 1 - (10 * specific) / solVolume);
     expectClose(result.composite.denseShrinkage.linear, 1 - Math.cbrt((10 * specific) / solVolume), 1e-12);
@@ -172,7 +172,7 @@ describe("computeFormulation worked examples", () => {
     // water of crystallisation 4 × 0.0534979 = 0.213991 mol
     // Σa = 0.116506 (Ca is a network modifier); Σg = 4 × 0.116506 = 0.466022
     // R = 4: W = 0.466022 → add 0.466022 − 0.213991 = 0.252031 mol = 4.54033 g
-    // highest step 120 °C < 550 °C nitrate decomposition: caution, residue not CaO yet
+    // highest step 120 °C < 600 °C nitrate decomposition: caution, residue not CaO yet
     const result = computeFormulation({
       materials: [ref("teos"), ref("ca-nitrate-4h2o"), ref("water-di"), ref("ethanol")],
       basis: { type: "solidMass", grams: 10 },
@@ -198,7 +198,7 @@ describe("computeFormulation worked examples", () => {
 
     expect(result.thermal.status).toBe("caution");
     const conversion = result.thermal.checks.find((c) => c.limit === "conversion");
-    expect(conversion).toMatchObject({ materialId: "ca-nitrate-4h2o", stepName: "Dry", temperatureC: 120, limitC: 550, status: "caution" });
+    expect(conversion).toMatchObject({ materialId: "ca-nitrate-4h2o", stepName: "Dry", temperatureC: 120, limitC: 600, status: "caution" });
     expect(result.notices.find((n) => n.code === "conversion_not_reached")?.message).toContain("CaO");
 
     // the same batch annealed at 600 °C reaches the conversion: clear
@@ -214,7 +214,7 @@ describe("computeFormulation worked examples", () => {
     });
     expect(annealed.thermal.status).toBe("clear");
     expect(annealed.thermal.checks).toEqual([
-      { materialId: "ca-nitrate-4h2o", stepName: "Anneal", temperatureC: 600, limit: "conversion", limitC: 550, marginC: 20, status: "clear" },
+      { materialId: "ca-nitrate-4h2o", stepName: "Anneal", temperatureC: 600, limit: "conversion", limitC: 600, marginC: 20, status: "clear", stage: "curing", atmosphere: "air" },
     ]);
   });
 
@@ -288,6 +288,8 @@ describe("computeFormulation worked examples", () => {
     // Zr solution = 0.101443 × 327.576 / 0.7 = 47.4718 g, of which 30 % = 14.2415 g 1-propanol
     // Σg = 3 × 0.224235 + 4 × 0.101443 = 1.07848 mol; h = 0.5 → W = 0.539238 mol
     // HNO3 65 wt% at 0.02 mol/mol: 0.00651356 mol × 63.012 / 0.65 = 0.631434 g, carrying 0.0122677 mol water
+    // 1-propanol 6 mol/mol: 6 × 0.325678 = 1.95407 mol wanted; the solution carries 14.2415 / 60.096 = 0.236980 mol,
+    // so 1.71709 mol = 103.190 g is added (chemistry.md, "Solvent": carried solvent counts toward the ratio)
     const result = computeFormulation({
       materials: [ref("gptms"), ref("zr-propoxide-70"), ref("1-propanol"), ref("water-di"), ref("hno3-65")],
       basis: { type: "solidMass", grams: 50 },
@@ -312,7 +314,10 @@ describe("computeFormulation worked examples", () => {
     const hno3 = (0.02 * (nG + nZr) * 63.012) / 0.65;
     expect(line(result, "hno3-65").massGrams).toBeCloseTo(0.631434, 6);
     expectClose(result.water.carriedMol, (hno3 * 0.35) / WATER);
-    expectClose(line(result, "1-propanol").massGrams, 6 * (nG + nZr) * 60.096);
+    expectClose(line(result, "1-propanol").massGrams, (6 * (nG + nZr) - (0.3 * zr) / 60.096) * 60.096, 1e-12);
+    expect(line(result, "1-propanol").massGrams).toBeCloseTo(103.19, 2);
+    expectClose(result.solvent?.molPerNetworkAtom, 6, 1e-12);
+    expectClose(result.solvent?.carriedGrams, 0.3 * zr, 1e-12);
     expectClose(result.alcohol.find((x) => x.name === "methanol")?.mol, 3 * nG);
     expectClose(result.alcohol.find((x) => x.name === "1-propanol")?.mol, 4 * nZr);
     expect(result.notices.map((n) => n.code)).toEqual(expect.arrayContaining(["methanol_released", "corrosive", "alkoxide_handling"]));

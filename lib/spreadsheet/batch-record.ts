@@ -72,7 +72,7 @@ export function batchWorkbook(batch: BatchForExport): Buffer {
         [null, null, null],
         ["Dry composite mass (g)", c.solidGrams.target, c.solidGrams.actual],
         ["Effective water ratio R (mol H2O per mol network atom)", c.effectiveR.target, c.effectiveR.actual],
-        ["Effective water ratio h (mol H2O per mol hydrolysable group)", c.effectiveH.target, c.effectiveH.actual],
+        ...(c.effectiveH ? [["Effective water ratio h (mol H2O per mol hydrolysable group)", c.effectiveH.target, c.effectiveH.actual] as Cell[]] : []),
         ...("composite" in c.engine
           ? [["Theoretical density of the composite made (g/cm³)", null, c.engine.composite.theoreticalDensity] as Cell[]]
           : [["Composite not computed", null, c.engine.error] as Cell[]]),

@@ -122,7 +122,7 @@ function overviewRows(revision: RevisionForExport): Cell[][] {
     ["Solids content", result.sol.solidsFraction, "mass fraction"],
     ["Dry composite mass", result.composite.massGrams, "g"],
     ["Water: effective R", result.water.effectiveR, "mol H2O per mol network atom"],
-    ["Water: effective h", result.water.effectiveH, "mol H2O per mol hydrolysable group"],
+    ["Water: effective h", result.water.effectiveH ?? null, "mol H2O per mol hydrolysable group (none: no alkoxy groups)"],
     ["Thermal check", result.thermal.status, ""],
   );
   const safety = result.notices.filter((n) => SAFETY_CODES.has(n.code));

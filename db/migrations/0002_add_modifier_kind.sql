@@ -1,0 +1,1 @@
+ALTER TABLE `materials` MODIFY COLUMN `kind` enum('precursor','organic','substrate','solvent','water','catalyst','modifier') NOT NULL;
