@@ -4,7 +4,7 @@
  * Framework-free; each map is typed over the engine's own union, so a new
  * code without words fails type-checking.
  */
-import type { LineRole, MaterialKind, ThermalLimit } from "@/lib/formulation";
+import type { LineRole, MaterialKind } from "@/lib/formulation";
 
 /** Words for a recipe line's role. */
 export const LINE_ROLE_LABELS: Record<LineRole, string> = {
@@ -27,13 +27,5 @@ export const KIND_LABELS: Record<MaterialKind, string> = {
   modifier: "Modifier",
 };
 
-/** Words for a thermal limit. */
-export const LIMIT_LABELS: Record<ThermalLimit, string> = {
-  degradationOnset: "degradation onset in air",
-  degradationOnsetInert: "degradation onset in inert gas",
-  heatDeflection: "heat deflection temperature (1.8 MPa)",
-  maxService: "maximum service temperature",
-  melting: "melting point",
-  glassTransition: "glass transition",
-  conversion: "conversion temperature",
-};
+/** Words for a thermal limit: the engine's own, so its messages and the screens agree. */
+export { LIMIT_LABELS } from "@/lib/formulation";

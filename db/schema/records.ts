@@ -1,4 +1,5 @@
 import { bigint, double, index, json, mysqlEnum, mysqlTable, text, timestamp, varchar } from "drizzle-orm/mysql-core";
+import type { LineValues } from "../../lib/batches/lines";
 import { BATCH_STATES, IMPORT_KINDS, IMPORT_STATES, type AuditAction } from "../../lib/enums";
 export { BATCH_STATES, IMPORT_KINDS, IMPORT_STATES };
 import { organization, user } from "./auth";
@@ -25,22 +26,8 @@ export const auditEvents = mysqlTable(
 );
 
 
-/** One line of a batch record: target from the released revision, actual values from production. */
-export interface BatchLine {
-  materialId: string;
-  /** Material name at the time the batch started. */
-  name?: string;
-  role?: "precursor" | "organic" | "solvent" | "water" | "catalyst";
-  /** g as supplied, from the revision's recipe. */
-  targetGrams?: number;
-  /** mL as supplied, from the revision's recipe. */
-  targetMl?: number;
-  actualGrams: number | null;
-  lotNumber: string | null;
-  /** ISO time the line was entered. */
-  at?: string;
-  initials?: string;
-}
+/** One line of a batch record: target from the released revision, actual values from production (lib/batches/lines.ts). */
+export type BatchLine = LineValues;
 
 /** A team's batch settings; when absent, the defaults in lib/batches apply. */
 export const batchSettings = mysqlTable("batch_settings", {

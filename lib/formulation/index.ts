@@ -32,7 +32,7 @@ export { parseFormulationInput } from "./validate";
 export { textProblem, nameText, multilineText } from "./text-rules";
 export { parseFormula, molarMassOf } from "./formula";
 export { residueYield } from "./precursor";
-export { hardLimit } from "./thermal";
+export { hardLimit, LIMIT_LABELS } from "./thermal";
 export type {
   FormulationResult,
   RecipeLine,

@@ -24,28 +24,8 @@ function mix(ids: [string, number][], ratio: number, extra: Material[] = []): Fo
   };
 }
 
-/**
- * Colloidal silica, 30 wt% SiO2 in water (chemistry.md, "Colloidal and
- * oligomeric precursors"): one SiO2 unit per "molecule", no alkoxy groups,
- * the rest water. Molar mass of SiO2 60.083 g/mol (CIAAW 2021).
- */
-const colloidalSilica: Material = {
-  id: "colloidal-silica-30",
-  name: "Colloidal silica, 30 wt% in water",
-  kind: "precursor",
-  molarMass: 60.083,
-  density: 1.21,
-  assay: 0.3,
-  waterFraction: 0.7,
-  precursor: {
-    residueFormula: "SiO2",
-    residueMolarMass: 60.083,
-    residuePerMolecule: 1,
-    residueDensity: 2.2,
-    networkAtomsPerMolecule: 1,
-    hydrolysableGroupsPerMolecule: 0,
-  },
-};
+/** Colloidal silica, 30 wt% SiO2 in water (data/materials.ts; chemistry.md, "Colloidal and oligomeric precursors"). */
+const colloidalSilica: Material = ref("colloidal-silica-30");
 
 describe("bug 1: water notices compare with a relative tolerance", () => {
   it("returns no full-hydrolysis note for TEOS + TMOS at R = 4 (4 OR per Si: exactly the full-hydrolysis ratio)", () => {

@@ -40,7 +40,8 @@ export const atmosphereOf = (step: Pick<ProcessStep, "atmosphere">): StepAtmosph
 
 const STATUS_RANK: Record<ThermalStatus, number> = { clear: 0, caution: 1, fail: 2 };
 
-const LIMIT_WORDS: Record<ThermalLimit, string> = {
+/** Words for each thermal limit, in the engine's messages and on the screens and sheets (lib/labels.ts). */
+export const LIMIT_LABELS: Record<ThermalLimit, string> = {
   degradationOnset: "degradation onset in air",
   degradationOnsetInert: "degradation onset in inert gas",
   heatDeflection: "heat deflection temperature (1.8 MPa)",
@@ -283,7 +284,7 @@ export function checkThermal(
     const rows = checks.filter((check) => check.status === level && check.limit !== "conversion");
     if (rows.length === 0) continue;
     const detail = rows
-      .map((row) => `"${row.stepName}" at ${show(row.temperatureC)} °C vs ${names.get(row.materialId) ?? row.materialId} ${LIMIT_WORDS[row.limit]} ${show(row.limitC)} °C`)
+      .map((row) => `"${row.stepName}" at ${show(row.temperatureC)} °C vs ${names.get(row.materialId) ?? row.materialId} ${LIMIT_LABELS[row.limit]} ${show(row.limitC)} °C`)
       .join("; ");
     notices.push({
       level: level === "fail" ? "error" : "caution",
