@@ -38,7 +38,7 @@ export function indexMaterials(materials: readonly Material[]): Map<string, Inde
  */
 export function materialById(byId: Map<string, IndexedMaterial>, id: string, field = "materials"): IndexedMaterial {
   const entry = byId.get(id);
-  if (!entry) throw new FormulationError("unknown_material", field, `material "${id}" is not in the materials list`);
+  if (!entry) throw new FormulationError("unknown_material", field, "the chosen material is not in the materials list");
   return entry;
 }
 
