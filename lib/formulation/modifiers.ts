@@ -35,9 +35,10 @@ export function planModifiers(
   return specs.map((spec, index) => {
     const entry = materialById(byId, spec.materialId, `modifiers.${index}.materialId`);
     const data = entry.material.modifier;
-    const precursor = materialById(byId, spec.precursorId, `modifiers.${index}.precursorId`).material.precursor;
+    const target = materialById(byId, spec.precursorId, `modifiers.${index}.precursorId`).material;
+    const precursor = target.precursor;
     if (!data || !precursor) {
-      throw new FormulationError("invalid_input", `modifiers.${index}.materialId`, `${entry.material.name} cannot modify ${spec.precursorId}`);
+      throw new FormulationError("invalid_input", `modifiers.${index}.materialId`, `${entry.material.name} cannot modify ${target.name}`);
     }
     const removal = data.removalTemperatureC;
     const removedBy = removal === undefined ? undefined : steps.find((step) => step.temperatureC >= removal);
