@@ -3,7 +3,7 @@
  */
 
 /** Engine version, reported with every stored result (semantic versioning). */
-export const ENGINE_VERSION = "1.0.0";
+export const ENGINE_VERSION = "2.0.0";
 
 /**
  * Molar mass of water, g/mol: 2 × 1.008 + 15.999 = 18.015.
