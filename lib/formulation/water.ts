@@ -52,8 +52,11 @@ export const WATER_RATIO_TOLERANCE = 1e-9;
  * ```
  */
 export function clearlyBelow(value: Dec, reference: Dec): boolean {
-  return value.lessThan(reference.times(1 - WATER_RATIO_TOLERANCE));
+  return value.lessThan(reference.times(BELOW_FACTOR));
 }
+
+/** 1 − WATER_RATIO_TOLERANCE, made once. */
+const BELOW_FACTOR = new Dec(1).minus(WATER_RATIO_TOLERANCE);
 
 /** Formats a number for a notice (display only). */
 function show(value: Dec): string {
