@@ -60,6 +60,7 @@ describe("revision workbook", () => {
       "Thermal check",
       "Input",
       "Components",
+      "Modifiers",
       "Process steps",
       "Addition order",
       "Materials",
