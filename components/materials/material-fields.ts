@@ -6,7 +6,8 @@ export interface PropertyField {
   path: string;
   label: string;
   unit: string;
-  type: "number" | "text";
+  /** "flag": yes / no / not set; "solvent": one of the library's solvents (its id). */
+  type: "number" | "text" | "flag" | "solvent";
   /** Kinds for which the field is shown (all when absent). */
   kinds?: readonly MaterialKind[];
 }
@@ -27,6 +28,7 @@ export const PROPERTY_GROUPS: PropertyGroup[] = [
       { path: "assay", label: "Assay", unit: "mass fraction, 0–1", type: "number" },
       { path: "waterFraction", label: "Carried water", unit: "mass fraction, 0–1", type: "number" },
       { path: "solventFraction", label: "Carried solvent", unit: "mass fraction, 0–1", type: "number" },
+      { path: "solventId", label: "Which solvent it carries", unit: "a solvent of the library", type: "solvent" },
       { path: "crystalWaterPerFormula", label: "Water of crystallisation", unit: "mol per formula unit", type: "number" },
       { path: "phaseDensity", label: "Dry phase density", unit: "g/cm³", type: "number", kinds: ["organic"] },
     ],
@@ -44,6 +46,19 @@ export const PROPERTY_GROUPS: PropertyGroup[] = [
       { path: "precursor.leavingAlcohol.name", label: "Alcohol released", unit: "name", type: "text" },
       { path: "precursor.leavingAlcohol.molarMass", label: "Molar mass of that alcohol", unit: "g/mol", type: "number" },
       { path: "precursor.conversionTemperatureC", label: "Conversion temperature", unit: "°C", type: "number" },
+      { path: "fastHydrolysing", label: "Hydrolyses fast (Ti, Zr, Al alkoxides): wants a modifier", unit: "yes / no", type: "flag" },
+      { path: "moistureSensitive", label: "Moisture-sensitive and flammable", unit: "not set: decided by the kind", type: "flag" },
+    ],
+  },
+  {
+    title: "Modifier: the ligand bonded to the alkoxide",
+    kinds: ["modifier"],
+    fields: [
+      { path: "modifier.groupsReplacedPerMolecule", label: "Alkoxy groups replaced per ligand", unit: "–", type: "number" },
+      { path: "modifier.bondedFormula", label: "Bonded ligand formula", unit: "as it stays in the dry solid, e.g. C5H7O1.5", type: "text" },
+      { path: "modifier.bondedMolarMass", label: "Bonded ligand molar mass", unit: "g/mol", type: "number" },
+      { path: "modifier.bondedDensity", label: "Density of the bonded ligand", unit: "g/cm³", type: "number" },
+      { path: "modifier.removalTemperatureC", label: "Removal temperature (ligand burnt out)", unit: "°C", type: "number" },
     ],
   },
   {
@@ -52,8 +67,10 @@ export const PROPERTY_GROUPS: PropertyGroup[] = [
     fields: [
       { path: "thermal.glassTransitionC", label: "Glass transition Tg", unit: "°C", type: "number" },
       { path: "thermal.meltingC", label: "Melting point Tm", unit: "°C", type: "number" },
-      { path: "thermal.degradationOnsetC", label: "Degradation onset Td", unit: "°C", type: "number" },
-      { path: "thermal.maxServiceC", label: "Grade maximum", unit: "°C", type: "number" },
+      { path: "thermal.degradationOnsetC", label: "Degradation onset Td in air", unit: "°C", type: "number" },
+      { path: "thermal.degradationOnsetInertC", label: "Degradation onset in inert gas", unit: "°C", type: "number" },
+      { path: "thermal.heatDeflectionC", label: "Heat deflection temperature at 1.8 MPa (ISO 75-2 method A)", unit: "°C, short-term limit", type: "number", kinds: ["substrate"] },
+      { path: "thermal.maxServiceC", label: "Grade maximum (continuous use)", unit: "°C", type: "number" },
     ],
   },
 ];

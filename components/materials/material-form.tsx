@@ -12,7 +12,7 @@ import { OutcomeMessage, type Outcome } from "@/components/ui/outcome";
 import { MATERIAL_KINDS, materialSchema, type Material, type MaterialKind } from "@/lib/formulation";
 import { ApiRequestError, errorMessage } from "@/lib/client/fetcher";
 import { useInvalidate } from "@/lib/client/invalidate";
-import { createMaterial, deleteMaterial, updateMaterial, type LibraryMaterial } from "@/lib/client/materials";
+import { createMaterial, deleteMaterial, updateMaterial, useLibrary, type LibraryMaterial } from "@/lib/client/materials";
 import { ALL_FIELDS, formKey, PROPERTY_GROUPS } from "./material-fields";
 
 type FormValues = Record<string, string>;
@@ -41,7 +41,7 @@ function toForm(m: Partial<LibraryMaterial>): FormValues {
   };
   for (const f of ALL_FIELDS) {
     const value = get(m, f.path);
-    v[formKey(f.path)] = value === undefined || value === null ? "" : String(value);
+    v[formKey(f.path)] = value === undefined || value === null ? "" : typeof value === "boolean" ? (value ? "yes" : "no") : String(value);
     v[`src__${formKey(f.path)}`] = m.sources?.[f.path] ?? "";
   }
   v.src__hazards = m.sources?.hazards ?? "";
@@ -58,7 +58,8 @@ function toMaterial(v: FormValues, id: string): Material {
     for (const f of group.fields) {
       if (f.kinds && !f.kinds.includes(kind)) continue;
       const raw = (v[formKey(f.path)] ?? "").trim();
-      if (raw !== "") set(m, f.path, f.type === "number" ? Number(raw.replace(",", ".")) : raw);
+      if (f.path === "solventId" && !(v.solventFraction ?? "").trim()) continue;
+      if (raw !== "") set(m, f.path, f.type === "number" ? Number(raw.replace(",", ".")) : f.type === "flag" ? raw === "yes" : raw);
       const src = (v[`src__${formKey(f.path)}`] ?? "").trim();
       if (src) sources[f.path] = src;
     }
@@ -115,6 +116,9 @@ export function MaterialForm({ material, canSave, canDelete }: MaterialFormProps
   const kind = useWatch({ control, name: "kind" }) as MaterialKind;
   const hazardsText = useWatch({ control, name: "hazards" }) ?? "";
   const nameText = useWatch({ control, name: "name" }) ?? "";
+  const solventFraction = useWatch({ control, name: "solventFraction" }) ?? "";
+  const library = useLibrary();
+  const solvents = (library.data?.rows ?? []).filter((m) => m.kind === "solvent" && m.id !== material?.id);
   const errors = formState.errors;
 
   const onSubmit = handleSubmit(
@@ -194,13 +198,32 @@ export function MaterialForm({ material, canSave, canDelete }: MaterialFormProps
         <fieldset key={g.title} className="flex flex-col gap-2 rounded border border-rule bg-panel p-3">
           <legend className="px-1 text-sm font-semibold">{g.title}</legend>
           {g.fields
-            .filter((f) => !f.kinds || f.kinds.includes(kind))
+            .filter((f) => (!f.kinds || f.kinds.includes(kind)) && (f.type !== "solvent" || solventFraction.trim() !== ""))
             .map((f) => {
               const key = formKey(f.path);
+              const input =
+                f.type === "flag" ? (
+                  <select {...text(key)} disabled={!canSave}>
+                    <option value="">not set</option>
+                    <option value="yes">yes</option>
+                    <option value="no">no</option>
+                  </select>
+                ) : f.type === "solvent" ? (
+                  <select {...text(key)} disabled={!canSave}>
+                    <option value="">not named</option>
+                    {solvents.map((o) => (
+                      <option key={o.id} value={o.id}>
+                        {o.name}
+                      </option>
+                    ))}
+                  </select>
+                ) : (
+                  <input {...text(key, f.type === "number" ? "num" : "")} inputMode={f.type === "number" ? "decimal" : undefined} />
+                );
               return (
                 <div key={f.path} className="grid gap-2 border-b border-rule/60 pb-2 last:border-0 sm:grid-cols-[minmax(0,2fr)_minmax(0,3fr)]">
                   <Field id={`m-${key}`} label={f.label} hint={f.unit ? `(${f.unit})` : undefined} error={errors[key]?.message}>
-                    <input {...text(key, f.type === "number" ? "num" : "")} inputMode={f.type === "number" ? "decimal" : undefined} />
+                    {input}
                   </Field>
                   <Field id={`m-src__${key}`} label={<span className="font-normal text-muted">Source of this value</span>}>
                     <input {...text(`src__${key}`, "text-xs")} placeholder="e.g. supplier data sheet, handbook, measured" />

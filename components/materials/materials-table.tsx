@@ -21,10 +21,14 @@ function keyProperty(m: LibraryMaterial): string {
       t.glassTransitionC !== undefined ? `Tg ${fmtTemp(t.glassTransitionC)}` : "",
       t.meltingC !== undefined ? `Tm ${fmtTemp(t.meltingC)}` : "",
       t.degradationOnsetC !== undefined ? `Td ${fmtTemp(t.degradationOnsetC)}` : "",
+      t.heatDeflectionC !== undefined ? `HDT ${fmtTemp(t.heatDeflectionC)}` : "",
       t.maxServiceC !== undefined ? `max ${fmtTemp(t.maxServiceC)}` : "",
     ]
       .filter(Boolean)
       .join(" · ");
+  }
+  if (m.kind === "modifier" && m.modifier) {
+    return `replaces ${m.modifier.groupsReplacedPerMolecule} alkoxy group(s), bonded as ${m.modifier.bondedFormula}`;
   }
   if (m.assay !== undefined && m.assay < 1) return `assay ${fmtPercent(m.assay)}`;
   return "";

@@ -5,7 +5,10 @@ import { referenceMaterials } from "@/data/materials";
 
 /**
  * Copies the reference materials (data/materials.ts) into a team's library,
- * skipping names the team already has. Copies keep their sources.
+ * skipping names the team already has and references it already copied
+ * (under another name). Copies keep their sources. Teams created before a
+ * reference material existed get it from a data migration
+ * (db/migrations/0003_add_reference_materials.sql), once.
  * Returns a map from reference id to the team's material id.
  */
 export async function copyReferenceMaterials(dbx: DbOrTx, teamId: string, userId: string | null): Promise<Map<string, string>> {
@@ -14,9 +17,10 @@ export async function copyReferenceMaterials(dbx: DbOrTx, teamId: string, userId
     .from(materials)
     .where(eq(materials.teamId, teamId));
   const byName = new Map(existing.map((e) => [e.name, e.id]));
+  const byReference = new Map(existing.filter((e) => e.referenceId).map((e) => [e.referenceId!, e.id]));
   const ids = new Map<string, string>();
   const added = referenceMaterials.filter((ref) => {
-    const found = byName.get(ref.name);
+    const found = byName.get(ref.name) ?? byReference.get(ref.id);
     ids.set(ref.id, found ?? crypto.randomUUID());
     return !found;
   });

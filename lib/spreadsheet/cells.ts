@@ -1,5 +1,6 @@
 /** Reading single cells of an uploaded sheet into text and numbers, with plain messages. */
 import { restoreText } from "./neutralise";
+import { NO_WORDS, YES_WORDS } from "./template";
 import { columnLetter, type Cell, type ImportProblem, type SheetGrid } from "./types";
 
 const NUMBER = /^[-+]?(\d+\.?\d*|\.\d+)([eE][-+]?\d+)?$/;
@@ -42,6 +43,26 @@ export function readNumber(cell: Cell | undefined, unit?: string): { value?: num
     return { error: `“${text}” has a unit in it: write the number alone (${number}); the unit is in the column header${where}` };
   }
   return { error: `“${text.length > 40 ? `${text.slice(0, 40)}…` : text}” is not a number` };
+}
+
+/**
+ * A yes / no cell: yes, y, true, 1, x → true; no, n, false, 0 → false;
+ * blank → undefined (not set).
+ *
+ * @example
+ * ```ts
+ * readFlag("Yes"); // { value: true }
+ * readFlag("maybe").error; // "“maybe” is not yes or no"
+ * ```
+ */
+export function readFlag(cell: Cell | undefined): { value?: boolean; error?: string } {
+  if (cell === null || cell === undefined) return {};
+  if (typeof cell === "boolean") return { value: cell };
+  const text = restoreText(String(cell).trim()).toLowerCase();
+  if (text === "") return {};
+  if ((YES_WORDS as readonly string[]).includes(text)) return { value: true };
+  if ((NO_WORDS as readonly string[]).includes(text)) return { value: false };
+  return { error: `“${String(cell).trim()}” is not yes or no (leave it blank when not known)` };
 }
 
 /** Collects problems for one sheet, turning row indexes into spreadsheet rows or CSV lines. */

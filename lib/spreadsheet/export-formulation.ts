@@ -123,6 +123,19 @@ function overviewRows(revision: RevisionForExport): Cell[][] {
     ["Dry composite mass", result.composite.massGrams, "g"],
     ["Water: effective R", result.water.effectiveR, "mol H2O per mol network atom"],
     ["Water: effective h", result.water.effectiveH ?? null, "mol H2O per mol hydrolysable group (none: no alkoxy groups)"],
+  );
+  const names = materialNames(revision.input);
+  const nameOf = (id: string) => names.get(id)?.name ?? id;
+  for (const m of result.modifiers ?? []) {
+    rows.push([`Modifier: ${nameOf(m.materialId)} on ${nameOf(m.precursorId)}`, m.molPerMetal, "mol per mol metal"]);
+  }
+  if (result.solvent) {
+    rows.push(
+      [`Solvent: ${nameOf(result.solvent.materialId)} added`, result.solvent.addedGrams, "g"],
+      [`Solvent: ${nameOf(result.solvent.materialId)} carried by other materials`, result.solvent.carriedGrams, "g"],
+    );
+  }
+  rows.push(
     ["Thermal check", result.thermal.status, ""],
   );
   const safety = result.notices.filter((n) => SAFETY_CODES.has(n.code));
@@ -173,14 +186,19 @@ function compositeRows(revision: RevisionForExport): Cell[][] {
   return rows;
 }
 
+/** A step's column heading: name, stage, gas, temperature and time (a step stored without stage or gas is a cure in air). */
+export function stepHeading(step: FormulationInput["steps"][number]): string {
+  return `${step.name} (${step.stage ?? "curing"}, ${step.atmosphere === "inert" ? "inert gas" : "air"}, ${step.temperatureC} °C, ${step.durationH} h)`;
+}
+
 function thermalSheet(revision: RevisionForExport): SheetSpec {
   const steps = revision.input.steps;
   const header: Cell[] = [
     "Material",
-    "Hard limit (°C)",
+    "Hard limit in air (°C)",
     "Glass transition (°C)",
     "Melting point (°C)",
-    ...steps.map((s) => `${s.name} (${s.temperatureC} °C, ${s.durationH} h)`),
+    ...steps.map(stepHeading),
   ];
   const result = revision.result;
   if (!result) return { name: SHEET.thermal, header: [header], rows: [["Cannot be computed", revision.computeError ?? ""]] };

@@ -14,7 +14,8 @@ import {
   type Material,
 } from "@/lib/formulation";
 import { Dec, ZERO } from "@/lib/formulation/decimal";
-import { headerKey, headerStem, isBlankRow, readNumber, readText, SheetProblems } from "./cells";
+import { headerKey, headerStem, isBlankRow, readFlag, readNumber, readText, SheetProblems } from "./cells";
+import { optionalColumn, readModifiersSheet, readStepWord } from "./import-modifiers";
 import {
   DISPENSED_KINDS,
   proposeMaterials,
@@ -31,13 +32,17 @@ import {
   ORDER_COLUMNS,
   SHEET,
   SOLVENT_MODE_LABELS,
+  ATMOSPHERE_WORDS,
+  STAGE_WORDS,
   STEP_COLUMNS,
+  STEP_EXTRA_COLUMNS,
+  WATER_RATIO_LABELS,
   type InputSettingKey,
 } from "./template";
 import { columnLetter, type Cell, type ImportProblem, type SheetGrid } from "./types";
 
 /** Where a value of the input came from, for locating problems. */
-interface Location {
+export interface Location {
   sheet: SheetGrid;
   rowIndex: number | null;
   col: { index: number; header: string } | null;
@@ -284,12 +289,26 @@ export function previewFormulationImport(
   const ratio = text("waterRatio");
   locations.set("water.ratio", locOf("waterRatio"));
   locations.set("water", locOf("water"));
-  const waterRatio = ratio === "R" || ratio === "h" ? ratio : ratio?.toLowerCase() === "r" ? "R" : ratio?.toLowerCase() === "h" ? "h" : undefined;
-  if (inputSheet && ratio !== undefined && !waterRatio) problemAt(locOf("waterRatio"), "error", `Water ratio must be R or h (not “${ratio}”).`);
+  const ratioWord = ratio?.toLowerCase().replace(/\s+/g, " ");
+  const waterRatio = (Object.entries(WATER_RATIO_LABELS).find(([id, word]) => ratioWord === word.toLowerCase() || ratioWord === id.toLowerCase())?.[0]) as
+    | keyof typeof WATER_RATIO_LABELS
+    | undefined;
+  if (inputSheet && ratio !== undefined && !waterRatio) {
+    problemAt(locOf("waterRatio"), "error", `Water ratio must be R, h or per precursor (not “${ratio}”).`);
+  }
+  const referenceId = materialRef("waterReference", "water.referenceId");
+  if (waterRatio === "perPrecursor" && referenceId === undefined) {
+    problemAt(locOf("waterReference"), "error", `${INPUT_SETTINGS.waterReference.label} is required with a water ratio per precursor: name the precursor.`);
+  }
+  locations.set("water.countCarried", locOf("waterCountCarried"));
+  const carried = readFlag(settings.get("waterCountCarried")?.cell);
+  if (carried.error) problemAt(locOf("waterCountCarried"), "error", `${INPUT_SETTINGS.waterCountCarried.label}: ${carried.error}.`);
   const water = {
     materialId: inputSheet ? required(waterId, "water", "") : undefined,
-    ratio: inputSheet && ratio === undefined ? required(undefined, "waterRatio", "(R or h)") : waterRatio,
+    ratio: inputSheet && ratio === undefined ? required(undefined, "waterRatio", "(R, h or per precursor)") : waterRatio,
     value: inputSheet ? required(number("waterValue", "water.value"), "waterValue", "") : undefined,
+    ...(referenceId !== undefined ? { referenceId } : {}),
+    ...(carried.value !== undefined ? { countCarried: carried.value } : {}),
   };
 
   let solvent: unknown;
@@ -367,13 +386,14 @@ export function previewFormulationImport(
   }
 
   // Process steps.
-  const steps: { name?: string; temperatureC?: number; durationH?: number }[] = [];
+  const steps: { name?: string; temperatureC?: number; durationH?: number; stage?: string; atmosphere?: string }[] = [];
   const stepsSheet = findSheet(sheets, SHEET.steps);
   if (stepsSheet) {
     const p = new SheetProblems(problems, stepsSheet);
     const cols = tableColumns(stepsSheet, STEP_COLUMNS, p);
     if (cols.every((c) => c !== undefined)) {
       const [nameCol, tempCol, durCol] = cols as number[];
+      const [stageCol, atmosphereCol] = STEP_EXTRA_COLUMNS.map((header) => optionalColumn(stepsSheet, header));
       for (const r of dataRows(stepsSheet)) {
         const row = stepsSheet.rows[r]!;
         const i = steps.length;
@@ -386,10 +406,23 @@ export function previewFormulationImport(
         const d = readNumber(row[durCol!], "h");
         if (t.error) p.error(r, { index: tempCol!, header: STEP_COLUMNS[1] }, `Temperature: ${t.error}.`);
         if (d.error) p.error(r, { index: durCol!, header: STEP_COLUMNS[2] }, `Duration: ${d.error}.`);
-        steps.push({ name: readText(row[nameCol!]), temperatureC: t.value, durationH: d.value });
+        const stage = readStepWord(row, stageCol, STEP_EXTRA_COLUMNS[0], STAGE_WORDS, "Stage", "curing", p, r);
+        const atmosphere = readStepWord(row, atmosphereCol, STEP_EXTRA_COLUMNS[1], ATMOSPHERE_WORDS, "Atmosphere", "air", p, r);
+        if (stageCol !== undefined) locations.set(`steps.${i}.stage`, at(stageCol, STEP_EXTRA_COLUMNS[0]));
+        if (atmosphereCol !== undefined) locations.set(`steps.${i}.atmosphere`, at(atmosphereCol, STEP_EXTRA_COLUMNS[1]));
+        steps.push({
+          name: readText(row[nameCol!]),
+          temperatureC: t.value,
+          durationH: d.value,
+          ...(stage !== undefined ? { stage } : {}),
+          ...(atmosphere !== undefined ? { atmosphere } : {}),
+        });
       }
     }
   }
+
+  // Modifiers (optional sheet).
+  const modifiers = readModifiersSheet(findSheet(sheets, SHEET.modifiers), problems, resolve, (path, loc) => locations.set(path, loc));
 
   // Addition order.
   let additionOrder: string[] | undefined;
@@ -422,6 +455,7 @@ export function previewFormulationImport(
   const candidate: Record<string, unknown> = { materials, basis, components, water, steps };
   if (solvent !== undefined) candidate.solvent = solvent;
   if (catalyst !== undefined) candidate.catalyst = catalyst;
+  if (modifiers.length > 0) candidate.modifiers = modifiers;
   if (substrateId !== undefined) candidate.substrateId = substrateId;
   if (marginC !== undefined) candidate.marginC = marginC;
   if (measuredBulkDensity !== undefined) candidate.measuredBulkDensity = measuredBulkDensity;

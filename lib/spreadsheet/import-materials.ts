@@ -8,7 +8,8 @@
  * from our own column list, never from the file.
  */
 import { materialSchema, MATERIAL_KINDS, type Material, type MaterialKind } from "@/lib/formulation";
-import { headerKey, headerStem, isBlankRow, readNumber, readText, SheetProblems } from "./cells";
+import { headerKey, headerStem, isBlankRow, readFlag, readNumber, readText, SheetProblems } from "./cells";
+import { resolveCarriedSolvents } from "./carried-solvent";
 import { MATERIAL_COLUMNS, NO_HAZARDS, SHEET, SOURCE_COLUMNS, type MaterialColumn } from "./template";
 import { sourcePropertyKey } from "./source-properties";
 import type { Cell, ImportProblem, SheetGrid } from "./types";
@@ -40,6 +41,8 @@ export interface MaterialProposal {
 export interface MaterialDraft {
   rowIndex: number;
   material: Material;
+  /** Where the carried solvent's name was read (its `solventId` holds the name until the names are resolved). */
+  solventAt?: { index: number; header: string };
 }
 
 const KIND_ALIASES: Record<string, MaterialKind> = {
@@ -48,6 +51,8 @@ const KIND_ALIASES: Record<string, MaterialKind> = {
   alkoxide: "precursor",
   acid: "catalyst",
   base: "catalyst",
+  ligand: "modifier",
+  "chelating agent": "modifier",
 };
 /** Kinds that are weighed out into the batch and so need a density. */
 export const DISPENSED_KINDS: readonly MaterialKind[] = ["precursor", "organic", "solvent", "water", "catalyst"];
@@ -157,6 +162,14 @@ export function readMaterialsSheets(
         } else if (value !== undefined) setPath(record, column.path, value);
         continue;
       }
+      if (column.type === "flag") {
+        const { value, error } = readFlag(cell);
+        if (error) {
+          p.error(r, at, `${column.header.replace(/\s*\(.*\)$/, "")}: ${error}.`);
+          rowOk = false;
+        } else if (value !== undefined) setPath(record, column.path, value);
+        continue;
+      }
       const text = readText(cell);
       if (text === undefined) continue;
       if (column.type === "kind") {
@@ -209,7 +222,8 @@ export function readMaterialsSheets(
       p.add(opts.densityLevel, r, null, `“${name}” is a precursor without residue data (residue formula, residue molar mass, residue units per molecule, residue density, network-forming atoms, hydrolysable groups).`);
       if (opts.densityLevel === "error") continue;
     }
-    if (rowOk) drafts.push({ rowIndex: r, material });
+    const solventColumn = [...columns.values()].find((c) => c.type === "material");
+    if (rowOk) drafts.push({ rowIndex: r, material, ...(material.solventId !== undefined && solventColumn ? { solventAt: { index: solventColumn.index, header: solventColumn.header } } : {}) });
   }
   readSources(sheets, drafts, problems);
   return drafts;
@@ -285,17 +299,22 @@ export function proposeMaterials(
   const byName = new Map(library.map((entry) => [entry.name.toLowerCase(), entry]));
   const byCas = new Map(library.filter((entry) => entry.casNumber).map((entry) => [entry.casNumber!, entry]));
   const p = sheet ? new SheetProblems(problems, sheet) : undefined;
-  return drafts.map((draft) => {
+  // First the id each material gets (library match or a new id), then the carried solvents' names become ids.
+  const matched = drafts.map((draft) => {
     const material = draft.material;
-    const row = p ? p.rowNumber(draft.rowIndex) : null;
     let entry = byName.get(material.name.toLowerCase());
     let matchedBy: MaterialProposal["matchedBy"] = entry ? "name" : undefined;
     if (!entry && material.casNumber) {
       entry = byCas.get(material.casNumber);
       if (entry) matchedBy = "casNumber";
     }
+    return { draft, entry, matchedBy, id: entry ? entry.id : opts.newId() };
+  });
+  resolveCarriedSolvents(matched, library, p);
+  return matched.map(({ draft, entry, matchedBy, id }): MaterialProposal => {
+    const material = draft.material;
+    const row = p ? p.rowNumber(draft.rowIndex) : null;
     if (!entry) {
-      const id = opts.newId();
       return { row, name: material.name, kind: material.kind, action: "create", id, material: { ...material, id } };
     }
     if (entry.material.kind !== material.kind) {

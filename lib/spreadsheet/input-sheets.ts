@@ -10,12 +10,15 @@ import {
   INPUT_COLUMNS,
   INPUT_SETTINGS,
   MATERIAL_COLUMNS,
+  MODIFIER_COLUMNS,
   NO_HAZARDS,
   ORDER_COLUMNS,
   SHEET,
   SOLVENT_MODE_LABELS,
   SOURCE_COLUMNS,
   STEP_COLUMNS,
+  STEP_EXTRA_COLUMNS,
+  WATER_RATIO_LABELS,
   type InputSettingKey,
 } from "./template";
 import { sourcePropertyLabel } from "./source-properties";
@@ -38,8 +41,12 @@ function readPath(material: Material, path: string): unknown {
   return value;
 }
 
-/** One Materials-sheet row for a material. */
-export function materialRow(material: Material): Cell[] {
+/**
+ * One Materials-sheet row for a material. `nameOf` turns a material id (the
+ * carried solvent) into the name written in the sheet; an unknown id is
+ * written as it is.
+ */
+export function materialRow(material: Material, nameOf: (id: string) => string | undefined = () => undefined): Cell[] {
   return MATERIAL_COLUMNS.map((column) => {
     const value = readPath(material, column.path);
     if (column.type === "hazards") {
@@ -47,12 +54,16 @@ export function materialRow(material: Material): Cell[] {
       return value.length === 0 ? NO_HAZARDS : value.join("; ");
     }
     if (value === undefined || value === null) return null;
+    if (column.type === "flag") return value === true ? "yes" : "no";
+    if (column.type === "material" && typeof value === "string") return nameOf(value) ?? value;
     return typeof value === "number" || typeof value === "string" ? value : String(value);
   });
 }
 
 /** The Materials and Material sources sheets for a list of materials. */
 export function materialSheets(materials: readonly Material[]): SheetSpec[] {
+  const names = new Map(materials.map((m) => [m.id, m.name]));
+  const nameOf = (id: string) => names.get(id);
   const sources: Cell[][] = [];
   for (const material of materials) {
     for (const [property, source] of Object.entries(material.sources ?? {})) {
@@ -63,7 +74,7 @@ export function materialSheets(materials: readonly Material[]): SheetSpec[] {
     {
       name: SHEET.materials,
       header: [MATERIAL_COLUMNS.map((c) => c.header)],
-      rows: materials.map(materialRow),
+      rows: materials.map((m) => materialRow(m, nameOf)),
       widths: MATERIAL_COLUMNS.map((c) => c.width),
     },
     { name: SHEET.sources, header: [[...SOURCE_COLUMNS]], rows: sources, widths: [34, 34, 90] },
@@ -80,8 +91,10 @@ export function inputSheets(input: FormulationInput, meta: FormulationMeta): She
     description: meta.description ?? null,
     basis: BASIS_LABELS[input.basis.type],
     water: name(input.water.materialId),
-    waterRatio: input.water.ratio,
+    waterRatio: WATER_RATIO_LABELS[input.water.ratio],
     waterValue: input.water.value,
+    waterReference: name(input.water.referenceId),
+    waterCountCarried: input.water.countCarried === undefined ? null : input.water.countCarried ? "yes" : "no",
     solvent: name(input.solvent?.materialId),
     solventMode: input.solvent ? SOLVENT_MODE_LABELS[input.solvent.mode] : null,
     solventValue: input.solvent?.mode === "molPerNetworkAtom" ? input.solvent.value : null,
@@ -116,10 +129,16 @@ export function inputSheets(input: FormulationInput, meta: FormulationMeta): She
       widths: [40, 22],
     },
     {
+      name: SHEET.modifiers,
+      header: [[...MODIFIER_COLUMNS]],
+      rows: (input.modifiers ?? []).map((m) => [name(m.materialId), name(m.precursorId), m.molPerMetal]),
+      widths: [36, 36, 22],
+    },
+    {
       name: SHEET.steps,
-      header: [[...STEP_COLUMNS]],
-      rows: input.steps.map((s) => [s.name, s.temperatureC, s.durationH]),
-      widths: [36, 18, 14],
+      header: [[...STEP_COLUMNS, ...STEP_EXTRA_COLUMNS]],
+      rows: input.steps.map((s) => [s.name, s.temperatureC, s.durationH, s.stage ?? null, s.atmosphere ?? null]),
+      widths: [36, 18, 14, 22, 18],
     },
     {
       name: SHEET.order,

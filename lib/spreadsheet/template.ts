@@ -16,6 +16,7 @@ export const SHEET = {
   thermal: "Thermal check",
   input: "Input",
   components: "Components",
+  modifiers: "Modifiers",
   steps: "Process steps",
   order: "Addition order",
   materials: "Materials",
@@ -25,11 +26,15 @@ export const SHEET = {
 } as const;
 
 /** Sheets the formulation import reads; every other sheet is for people and is ignored. */
-export const FORMULATION_INPUT_SHEETS = [SHEET.input, SHEET.components, SHEET.steps, SHEET.order, SHEET.materials, SHEET.sources] as const;
+export const FORMULATION_INPUT_SHEETS = [SHEET.input, SHEET.components, SHEET.modifiers, SHEET.steps, SHEET.order, SHEET.materials, SHEET.sources] as const;
 /** Sheets the materials import reads. */
 export const MATERIALS_INPUT_SHEETS = [SHEET.materials, SHEET.sources] as const;
 
-export type ColumnType = "text" | "number" | "kind" | "hazards";
+/**
+ * How a Materials column is read: "material" holds another material's name
+ * (the solvent a material carries), "flag" holds yes / no (blank = not set).
+ */
+export type ColumnType = "text" | "number" | "kind" | "hazards" | "material" | "flag";
 
 /** One column of the Materials sheet and the Material field it holds (dotted path). */
 export interface MaterialColumn {
@@ -50,6 +55,7 @@ export const MATERIAL_COLUMNS: readonly MaterialColumn[] = [
   { header: "Assay (mass fraction)", path: "assay", type: "number", width: 11 },
   { header: "Water fraction (mass fraction)", path: "waterFraction", type: "number", width: 12 },
   { header: "Solvent fraction (mass fraction)", path: "solventFraction", type: "number", width: 12 },
+  { header: "Carried solvent (material name)", path: "solventId", type: "material", width: 24 },
   { header: "Water of crystallisation (mol per formula unit)", path: "crystalWaterPerFormula", type: "number", width: 14 },
   { header: "Dry phase density (g/cm³)", path: "phaseDensity", type: "number", width: 12 },
   { header: "Residue formula", path: "precursor.residueFormula", type: "text", width: 14 },
@@ -61,9 +67,18 @@ export const MATERIAL_COLUMNS: readonly MaterialColumn[] = [
   { header: "Leaving alcohol", path: "precursor.leavingAlcohol.name", type: "text", width: 12 },
   { header: "Leaving alcohol molar mass (g/mol)", path: "precursor.leavingAlcohol.molarMass", type: "number", width: 12 },
   { header: "Conversion temperature (°C)", path: "precursor.conversionTemperatureC", type: "number", width: 12 },
+  { header: "Hydrolyses fast, wants a modifier (yes/no)", path: "fastHydrolysing", type: "flag", width: 12 },
+  { header: "Moisture-sensitive and flammable (yes/no)", path: "moistureSensitive", type: "flag", width: 12 },
+  { header: "Alkoxy groups replaced per ligand", path: "modifier.groupsReplacedPerMolecule", type: "number", width: 12 },
+  { header: "Bonded ligand formula", path: "modifier.bondedFormula", type: "text", width: 14 },
+  { header: "Bonded ligand molar mass (g/mol)", path: "modifier.bondedMolarMass", type: "number", width: 12 },
+  { header: "Bonded ligand density (g/cm³)", path: "modifier.bondedDensity", type: "number", width: 12 },
+  { header: "Ligand removal temperature (°C)", path: "modifier.removalTemperatureC", type: "number", width: 12 },
   { header: "Glass transition (°C)", path: "thermal.glassTransitionC", type: "number", width: 11 },
   { header: "Melting point (°C)", path: "thermal.meltingC", type: "number", width: 11 },
   { header: "Degradation onset (°C)", path: "thermal.degradationOnsetC", type: "number", width: 11 },
+  { header: "Degradation onset in inert gas (°C)", path: "thermal.degradationOnsetInertC", type: "number", width: 12 },
+  { header: "Heat deflection temperature at 1.8 MPa, ISO 75-2 method A (°C)", path: "thermal.heatDeflectionC", type: "number", width: 14 },
   { header: "Maximum service temperature (°C)", path: "thermal.maxServiceC", type: "number", width: 12 },
   { header: "GHS hazard statements", path: "hazards", type: "hazards", width: 24 },
 ];
@@ -74,6 +89,10 @@ export const SOURCE_COLUMNS = ["Material", "Property", "Source"] as const;
 export const COMPONENT_COLUMNS = ["Material", "Weight fraction (mass fraction of the dry composite)"] as const;
 /** Columns of the Process steps sheet. */
 export const STEP_COLUMNS = ["Step", "Temperature (°C)", "Duration (h)"] as const;
+/** Optional columns of the Process steps sheet (older files have none: every step is then a cure in air). */
+export const STEP_EXTRA_COLUMNS = ["Stage (sol | drying | curing)", "Atmosphere (air | inert)"] as const;
+/** Columns of the Modifiers sheet. */
+export const MODIFIER_COLUMNS = ["Modifier", "Precursor modified", "Modifier ratio (mol per mol metal)"] as const;
 /** Columns of the Addition order sheet. */
 export const ORDER_COLUMNS = ["Position", "Material"] as const;
 /** Columns of the Input sheet. */
@@ -95,8 +114,10 @@ export const INPUT_SETTINGS = {
   bulkDensity: { label: "Bulk density", unit: "g/cm³", type: "number" },
   linearShrinkage: { label: "Linear shrinkage", unit: "fraction", type: "number" },
   water: { label: "Water material", unit: "material name", type: "text" },
-  waterRatio: { label: "Water ratio", unit: "R | h", type: "text" },
-  waterValue: { label: "Water ratio value", unit: "mol H2O per mol network atom (R) or hydrolysable group (h)", type: "number" },
+  waterRatio: { label: "Water ratio", unit: "R | h | per precursor", type: "text" },
+  waterValue: { label: "Water ratio value", unit: "mol H2O per mol network atom (R), per mol alkoxy group (h) or per mol of the reference precursor", type: "number" },
+  waterReference: { label: "Water ratio reference precursor", unit: "material name (for per precursor)", type: "text" },
+  waterCountCarried: { label: "Count water carried by other materials", unit: "yes | no (blank = yes)", type: "text" },
   solvent: { label: "Solvent material", unit: "material name", type: "text" },
   solventMode: { label: "Solvent amount", unit: "molar ratio | fill", type: "text" },
   solventValue: { label: "Solvent ratio", unit: "mol per mol network atom", type: "number" },
@@ -111,6 +132,15 @@ export type InputSettingKey = keyof typeof INPUT_SETTINGS;
 
 /** Plain words for the basis types, and the engine's names. */
 export const BASIS_LABELS = { solidMass: "dry solid mass", solidsContent: "solids content", gelBody: "gel body" } as const;
+/** Plain words for the water conventions, and the engine's names. */
+export const WATER_RATIO_LABELS = { R: "R", h: "h", perPrecursor: "per precursor" } as const;
+/** Plain words for the step stages and atmospheres (the engine's names are the same words). */
+export const STAGE_WORDS = ["sol", "drying", "curing"] as const;
+export const ATMOSPHERE_WORDS = ["air", "inert"] as const;
+/** Words read as yes / no in flag cells. */
+export const YES_WORDS = ["yes", "y", "true", "1", "x"] as const;
+export const NO_WORDS = ["no", "n", "false", "0"] as const;
+
 /** Plain words for the solvent modes, and the engine's names. */
 export const SOLVENT_MODE_LABELS = { molPerNetworkAtom: "molar ratio", fill: "fill" } as const;
 
@@ -144,7 +174,8 @@ export const IMPORT_LIMITS: Readonly<ImportLimits> = {
 export function readMeRows(kind: "formulation" | "materials"): string[][] {
   const common = [
     ["Materials", "One row per material as supplied. Units are in the column headers; write numbers alone (0.933, not 0.933 g/cm³), with a point as decimal separator."],
-    ["", "Kind is one of: precursor, organic, substrate, solvent, water, catalyst. Precursor columns (residue …) are needed for precursors only; dry phase density for organic phases."],
+    ["", "Kind is one of: precursor, organic, substrate, solvent, water, catalyst, modifier. Precursor columns (residue …) are needed for precursors only; dry phase density for organic phases; the ligand columns (alkoxy groups replaced, bonded ligand …) for modifiers (chelating or exchanging ligands such as acetylacetone)."],
+    ["", "Carried solvent: the name of the solvent a solution carries (its solvent fraction), e.g. 1-propanol in zirconium propoxide 70 %. Hydrolyses fast / moisture-sensitive and flammable: yes or no; blank leaves the usual choice by kind."],
     ["", `GHS hazard statements: codes separated by semicolons (H225; H319). Write "${NO_HAZARDS}" when the material has none; leave blank when not recorded.`],
     ["", "A material whose name or CAS number matches one in your team's library is linked to it; any other is offered for creation in the library."],
     ["Material sources", "Optional: where each value comes from. One row per material and property (property as in the column header, e.g. Density as supplied (g/cm³))."],
@@ -152,7 +183,8 @@ export function readMeRows(kind: "formulation" | "materials"): string[][] {
   const formulation = [
     ["Input", "Settings of the formulation, one per row: the setting in column A, its value in column B; the unit is in column C."],
     ["Components", "The dry composite: one row per precursor or organic phase with its weight fraction. Weight fractions must sum to 1."],
-    ["Process steps", "Every drying, curing or annealing step with its temperature and duration."],
+    ["Modifiers", "Optional: chelating or exchanging ligands, one row per modifier and the precursor it modifies, in mol of modifier per mol of that precursor's metal atoms."],
+    ["Process steps", "Every step with its temperature and duration, its stage (sol, drying or curing; blank = curing) and atmosphere (air or inert; blank = air)."],
     ["Addition order", "Optional: the order in which the batch is made up, by material name. Materials not listed follow in the usual order."],
     ["Overview, Batch sheet, Dry composite, Thermal check", "Written by Gelwright when a revision is exported; they are for reading and printing and are ignored on import."],
   ];

@@ -98,7 +98,7 @@ describe("import of a formulation workbook in the browser", () => {
     const wb = XLSX.readFile(path);
     expect(wb.Sheets.Input!.B2!.v).toBe(NAME);
     const steps = XLSX.utils.sheet_to_json<unknown[]>(wb.Sheets["Process steps"]!, { header: 1, raw: true });
-    expect(steps[2]).toEqual(["Ageing of the sol", 25, 24]);
+    expect(steps[2]).toEqual(["Ageing of the sol", 25, 24, "sol"]); // with its stage; no atmosphere stated (air)
   });
 
   describe("edge cases", () => {

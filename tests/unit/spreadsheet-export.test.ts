@@ -60,6 +60,7 @@ describe("revision workbook", () => {
       "Thermal check",
       "Input",
       "Components",
+      "Modifiers",
       "Process steps",
       "Addition order",
       "Materials",
@@ -131,7 +132,9 @@ describe("revision workbook", () => {
 
   it("writes the thermal check as materials × steps with the binding limit", () => {
     const rows = grid(wb, "Thermal check");
-    expect(rows[0]!.slice(4)).toEqual(rev.input.steps.map((s) => `${s.name} (${s.temperatureC} °C, ${s.durationH} h)`));
+    expect(rows[0]!.slice(4)).toEqual(rev.input.steps.map((s) => `${s.name} (${s.stage ?? "curing"}, ${s.atmosphere === "inert" ? "inert gas" : "air"}, ${s.temperatureC} °C, ${s.durationH} h)`));
+    // The demo sets each step's stage: the sol stage shows as such.
+    expect(rows[0]!.slice(4).some((heading) => String(heading).includes("(sol, air,"))).toBe(true);
     const pc = rows.find((row) => row[0] === "Polycarbonate (bisphenol A)")!;
     expect(pc).toBeDefined();
     // Cure at 120 °C is within 20 °C of the polycarbonate's hard limit: a caution (demo comment on HC-3 r2).

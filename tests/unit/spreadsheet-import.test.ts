@@ -43,7 +43,9 @@ describe("formulation import", () => {
   it("returns a clean preview for the unchanged template and links every material by name", async () => {
     const preview = await previewXlsx(sheetsOf(demo.input));
     expect(errors(preview.problems)).toEqual([]);
-    expect(preview.counts).toMatchObject({ materials: 7, toLink: 7, toCreate: 0, components: 3, steps: 4, errors: 0 });
+    // Seven materials and acetylacetone, the modifier chelating the titanium isopropoxide.
+    expect(preview.counts).toMatchObject({ materials: 8, toLink: 8, toCreate: 0, components: 3, steps: 4, errors: 0 });
+    expect(preview.input?.modifiers).toEqual([{ materialId: "lib-acac", precursorId: "lib-ti-isopropoxide", molPerMetal: 1 }]);
     expect(preview.materials.every((m) => m.id.startsWith("lib-"))).toBe(true);
     expect(preview.computed.ok).toBe(true);
     expect(preview.input?.components.map((c) => c.materialId)).toEqual(["lib-gptms", "lib-teos", "lib-ti-isopropoxide"]);

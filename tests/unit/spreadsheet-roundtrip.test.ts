@@ -7,6 +7,7 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { computeFormulation, type FormulationInput, type Material } from "@/lib/formulation";
+import { STEP_ATMOSPHERES, STEP_STAGES, WATER_RATIOS } from "@/lib/formulation/input-schema";
 import { demoInputs } from "@/lib/spreadsheet/example";
 import { revisionWorkbook, type RevisionForExport } from "@/lib/spreadsheet/export-formulation";
 import { inputSheets } from "@/lib/spreadsheet/input-sheets";
@@ -92,7 +93,17 @@ describe("spreadsheet round trip", () => {
       f1: fc.double({ min: 0.01, max: 0.98, noNaN: true }),
       grams: fc.double({ min: 0.001, max: 1e5, noNaN: true }),
       r: fc.double({ min: 0, max: 20, noNaN: true }),
-      temps: fc.array(fc.record({ t: fc.double({ min: -40, max: 400, noNaN: true }), h: fc.double({ min: 0, max: 500, noNaN: true }) }), { maxLength: 6 }),
+      temps: fc.array(
+        fc.record({
+          t: fc.double({ min: -40, max: 400, noNaN: true }),
+          h: fc.double({ min: 0, max: 500, noNaN: true }),
+          stage: fc.option(fc.constantFrom(...STEP_STAGES), { nil: undefined }),
+          atmosphere: fc.option(fc.constantFrom(...STEP_ATMOSPHERES), { nil: undefined }),
+        }),
+        { maxLength: 6 },
+      ),
+      waterRatio: fc.constantFrom(...WATER_RATIOS),
+      countCarried: fc.option(fc.boolean(), { nil: undefined }),
       margin: fc.option(fc.double({ min: 0, max: 100, noNaN: true }), { nil: undefined }),
       order: fc.boolean(),
       stepName: awkwardName,
@@ -113,11 +124,25 @@ describe("spreadsheet round trip", () => {
               { materialId: teos!.materialId, weightFraction: f2 },
             ],
             solvent: { materialId: demo.solvent!.materialId, mode: "molPerNetworkAtom", value: g.r * 2 },
-            water: { ...demo.water, value: g.r },
-            steps: g.temps.map((s, i) => ({ name: `${g.stepName} ${i}`, temperatureC: s.t, durationH: s.h })),
+            water: {
+              materialId: demo.water.materialId,
+              ratio: g.waterRatio,
+              value: g.r,
+              ...(g.waterRatio === "perPrecursor" ? { referenceId: teos!.materialId } : {}),
+              ...(g.countCarried !== undefined ? { countCarried: g.countCarried } : {}),
+            },
+            steps: g.temps.map((s, i) => ({
+              name: `${g.stepName} ${i}`,
+              temperatureC: s.t,
+              durationH: s.h,
+              ...(s.stage ? { stage: s.stage } : {}),
+              ...(s.atmosphere ? { atmosphere: s.atmosphere } : {}),
+            })),
             marginC: g.margin,
             additionOrder: g.order ? [teos!.materialId, gptms!.materialId] : undefined,
           };
+          // Only GPTMS and TEOS here: the demo's modifier of its titanium alkoxide does not apply.
+          delete input.modifiers;
           if (input.marginC === undefined) delete input.marginC;
           if (input.additionOrder === undefined) delete input.additionOrder;
           const back = await roundTripXlsx(`Generated ${g.name}`, input);
