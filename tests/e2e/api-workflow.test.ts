@@ -136,7 +136,8 @@ describe("revision lifecycle over HTTP", () => {
     expect((await json<{ error: { code: string } }>(refused)).error.code).toBe("thermal_fail");
     expect((await revision(reviewer, fail.revisionId)).state).toBe("in_review");
 
-    const near = await create(`Near the limit ${stamp}`, coatInput(lib, { cureC: 110 }));
+    // Polycarbonate: heat deflection 132 °C (the hard limit), so 118 °C is within the 20 °C margin: a caution.
+    const near = await create(`Near the limit ${stamp}`, coatInput(lib, { cureC: 118 }));
     expect((await revision(formulator, near.revisionId)).result?.thermal.status).toBe("caution");
     expect((await formulator.fetch(`/api/revisions/${near.revisionId}/submit`, { method: "POST", json: {} })).status).toBe(200);
     const bare = await reviewer.fetch(`/api/revisions/${near.revisionId}/approve`, { method: "POST", json: {} });
@@ -144,7 +145,7 @@ describe("revision lifecycle over HTTP", () => {
     expect((await json<{ error: { fields: Record<string, string> } }>(bare)).error.fields.comment).toMatch(/caution/);
     const withComment = await reviewer.fetch(`/api/revisions/${near.revisionId}/approve`, {
       method: "POST",
-      json: { comment: "110 °C for 2 h is inside the visor grade's rating." },
+      json: { comment: "118 °C for 2 h is inside the visor grade's rating." },
     });
     expect(withComment.status).toBe(200);
   });
