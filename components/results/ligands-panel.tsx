@@ -19,7 +19,7 @@ export function LigandsPanel({ input, result, resolution }: LigandsPanelProps) {
   return (
     <div className="@container"><div className="grid gap-4 @2xl:grid-cols-2">
       {mods.length > 0 ? (
-        <div className="overflow-x-auto">
+        <div className="overflow-x-auto" tabIndex={0} role="region" aria-label="Modifiers">
           <h3 className="mb-1 text-xs font-semibold text-muted">Modifiers</h3>
           <table className="w-full text-sm" data-testid="modifiers-table">
             <caption className="sr-only">Modifiers and the precursors they modify</caption>

@@ -136,7 +136,8 @@ describe("revision lifecycle over HTTP", () => {
     expect((await json<{ error: { code: string } }>(refused)).error.code).toBe("thermal_fail");
     expect((await revision(reviewer, fail.revisionId)).state).toBe("in_review");
 
-    const near = await create(`Near the limit ${stamp}`, coatInput(lib, { cureC: 110 }));
+    // Polycarbonate: heat deflection temperature 132 °C less the 20 °C margin = 112 °C; 120 °C is within the margin.
+    const near = await create(`Near the limit ${stamp}`, coatInput(lib, { cureC: 120 }));
     expect((await revision(formulator, near.revisionId)).result?.thermal.status).toBe("caution");
     expect((await formulator.fetch(`/api/revisions/${near.revisionId}/submit`, { method: "POST", json: {} })).status).toBe(200);
     const bare = await reviewer.fetch(`/api/revisions/${near.revisionId}/approve`, { method: "POST", json: {} });
