@@ -35,11 +35,19 @@ function inputView(input: FormulationInput): Record<string, unknown> {
   return {
     basis: input.basis,
     components: Object.fromEntries(input.components.map((c) => [name(c.materialId)!, c.weightFraction])),
-    water: { ...input.water, materialId: name(input.water.materialId) },
+    modifiers: Object.fromEntries((input.modifiers ?? []).map((m) => [`${name(m.materialId)} on ${name(m.precursorId)}`, m.molPerMetal])),
+    // Defaults written out, so a draft saved before the water conventions existed compares equal to one that states them.
+    water: {
+      materialId: name(input.water.materialId),
+      ratio: input.water.ratio,
+      value: input.water.value,
+      referenceId: input.water.ratio === "perPrecursor" ? (name(input.water.referenceId) ?? null) : null,
+      countCarried: input.water.countCarried ?? true,
+    },
     solvent: input.solvent ? { ...input.solvent, materialId: name(input.solvent.materialId) } : null,
     catalyst: input.catalyst ? { ...input.catalyst, materialId: name(input.catalyst.materialId) } : null,
     substrate: name(input.substrateId) ?? null,
-    steps: input.steps,
+    steps: input.steps.map((st) => ({ ...st, stage: st.stage ?? "curing", atmosphere: st.atmosphere ?? "air" })),
     marginC: input.marginC ?? 20,
     measuredBulkDensity: input.measuredBulkDensity ?? null,
     materialProperties: Object.fromEntries(
@@ -59,6 +67,10 @@ function resultView(result: FormulationResult | null, input: FormulationInput): 
     lines: Object.fromEntries(result.lines.map((l) => [names.get(l.materialId) ?? l.materialId, { massGrams: l.massGrams, volumeMl: l.volumeMl }])),
     waterToAddGrams: result.water.addGrams,
     effectiveR: result.water.effectiveR,
+    effectiveH: result.water.effectiveH ?? null,
+    modifiers: Object.fromEntries(
+      (result.modifiers ?? []).map((m) => [`${names.get(m.materialId) ?? m.materialId} on ${names.get(m.precursorId) ?? m.precursorId}`, { bondedGrams: m.bondedGrams, removedInStep: m.removedInStep ?? null }]),
+    ),
     solidsFraction: result.sol.solidsFraction,
     theoreticalDensity: result.composite.theoreticalDensity,
     thermalStatus: result.thermal.status,

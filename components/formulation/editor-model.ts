@@ -6,9 +6,13 @@
 import { z } from "zod";
 import { ALL_FIELDS } from "@/components/materials/material-fields";
 import type { FormulationInput, Material, MaterialKind } from "@/lib/formulation";
+import { STEP_ATMOSPHERES, STEP_STAGES, WATER_RATIOS } from "@/lib/formulation/input-schema";
 
 export type BasisType = "solidMass" | "solidsContent" | "gelBody";
 export type SolventMode = "none" | "molPerNetworkAtom" | "fill";
+export type StepStage = (typeof STEP_STAGES)[number];
+export type StepAtmosphere = (typeof STEP_ATMOSPHERES)[number];
+export type WaterRatio = (typeof WATER_RATIOS)[number];
 
 export interface EditorValues {
   name: string;
@@ -24,12 +28,16 @@ export interface EditorValues {
     linearShrinkagePercent: number;
   };
   components: { materialId: string; weightPercent: number }[];
-  water: { materialId: string; ratio: "R" | "h" | "perPrecursor"; value: number; referenceId?: string; countCarried?: boolean };
+  /** Chelating or exchanging ligands: mol modifier per mol metal of one precursor. */
+  modifiers: { materialId: string; precursorId: string; molPerMetal: number }[];
+  water: { materialId: string; ratio: WaterRatio; value: number; referenceId: string; countCarried: boolean };
   solvent: { mode: SolventMode; materialId: string; value: number };
   catalyst: { materialId: string; molPerNetworkAtom: number };
   substrateId: string;
-  steps: { name: string; temperatureC: number; durationH: number }[];
+  steps: { name: string; temperatureC: number; durationH: number; stage: StepStage; atmosphere: StepAtmosphere }[];
   marginC: number;
+  /** The saved order of addition, kept as it was (the editor does not change it). */
+  additionOrder?: string[];
   /** g/cm³; NaN when not measured. */
   measuredBulkDensity: number;
 }
@@ -59,7 +67,20 @@ export const editorSchema = z.object({
       weightPercent: num("weight fraction"),
     }),
   ),
-  water: z.object({ materialId: z.string().min(1, "Pick the water"), ratio: z.enum(["R", "h", "perPrecursor"]), value: num("water ratio"), referenceId: z.string().optional(), countCarried: z.boolean().optional() }),
+  modifiers: z.array(
+    z.object({
+      materialId: z.string().min(1, "choose a modifier"),
+      precursorId: z.string().min(1, "choose the precursor it modifies"),
+      molPerMetal: num("modifier ratio"),
+    }),
+  ),
+  water: z.object({
+    materialId: z.string().min(1, "Pick the water"),
+    ratio: z.enum(WATER_RATIOS),
+    value: num("water ratio"),
+    referenceId: z.string(),
+    countCarried: z.boolean(),
+  }),
   solvent: z.object({ mode: z.enum(["none", "molPerNetworkAtom", "fill"]), materialId: z.string(), value: z.number() }),
   catalyst: z.object({ materialId: z.string(), molPerNetworkAtom: z.number() }),
   substrateId: z.string(),
@@ -68,10 +89,13 @@ export const editorSchema = z.object({
       name: z.string().trim().min(1, "Name the step"),
       temperatureC: num("temperature"),
       durationH: num("duration"),
+      stage: z.enum(STEP_STAGES),
+      atmosphere: z.enum(STEP_ATMOSPHERES),
     }),
   ),
   marginC: num("margin"),
   measuredBulkDensity: z.number().or(z.nan()),
+  additionOrder: z.array(z.string()).optional(),
 });
 
 const clean = (x: number) => (Number.isFinite(x) ? Number(x.toPrecision(12)) : x);
@@ -95,13 +119,14 @@ export function blankValues(library: Material[]): EditorValues {
     description: "",
     basis: { type: "solidMass", grams: 10, solMassGrams: 100, solidsPercent: 20, volumeMl: 50, bulkDensity: 0.5, linearShrinkagePercent: 0 },
     components: [{ materialId: "", weightPercent: 100 }],
-    water: { materialId: first("water"), ratio: "R", value: 4 },
+    modifiers: [],
+    water: { materialId: first("water"), ratio: "R", value: 4, referenceId: "", countCarried: true },
     solvent: { mode: "molPerNetworkAtom", materialId: first("solvent", /^ethanol/i), value: 4 },
     catalyst: { materialId: first("catalyst", /hydrochloric/i), molPerNetworkAtom: 0.01 },
     substrateId: "",
     steps: [
-      { name: "Hydrolysis, stirred", temperatureC: 25, durationH: 2 },
-      { name: "Drying", temperatureC: 60, durationH: 24 },
+      { name: "Hydrolysis, stirred", temperatureC: 25, durationH: 2, stage: "sol", atmosphere: "air" },
+      { name: "Drying", temperatureC: 60, durationH: 24, stage: "drying", atmosphere: "air" },
     ],
     marginC: 20,
     measuredBulkDensity: Number.NaN,
@@ -125,15 +150,24 @@ export function valuesFromInput(input: FormulationInput, meta: { name: string; p
       linearShrinkagePercent: b.type === "gelBody" ? pct(b.linearShrinkage, 0) : 0,
     },
     components: input.components.map((c) => ({ materialId: c.materialId, weightPercent: pct(c.weightFraction, 0) })),
-    water: { ...input.water },
+    modifiers: (input.modifiers ?? []).map((m) => ({ materialId: m.materialId, precursorId: m.precursorId, molPerMetal: m.molPerMetal })),
+    water: {
+      materialId: input.water.materialId,
+      ratio: input.water.ratio,
+      value: input.water.value,
+      referenceId: input.water.referenceId ?? "",
+      countCarried: input.water.countCarried ?? true,
+    },
     solvent: input.solvent
       ? { mode: input.solvent.mode, materialId: input.solvent.materialId, value: input.solvent.mode === "molPerNetworkAtom" ? input.solvent.value : 4 }
       : { mode: "none", materialId: "", value: 4 },
     catalyst: input.catalyst ? { ...input.catalyst } : { materialId: "", molPerNetworkAtom: 0.01 },
     substrateId: input.substrateId ?? "",
-    steps: input.steps.map((s) => ({ ...s })),
+    // A stored step without a stage was checked as a cure; it stays one.
+    steps: input.steps.map((s) => ({ ...s, stage: s.stage ?? "curing", atmosphere: s.atmosphere ?? "air" })),
     marginC: input.marginC ?? 20,
     measuredBulkDensity: input.measuredBulkDensity ?? Number.NaN,
+    ...(input.additionOrder ? { additionOrder: [...input.additionOrder] } : {}),
   };
 }
 
@@ -141,6 +175,7 @@ export function valuesFromInput(input: FormulationInput, meta: { name: string; p
 function referencedIds(v: EditorValues): string[] {
   const ids = [
     ...v.components.map((c) => c.materialId),
+    ...(v.modifiers ?? []).map((m) => m.materialId),
     v.water.materialId,
     v.solvent.mode !== "none" ? v.solvent.materialId : "",
     v.catalyst.materialId,
@@ -179,14 +214,25 @@ export function inputFromValues(v: EditorValues, records: (id: string) => Materi
       ...(v.water.ratio === "perPrecursor" && v.water.referenceId ? { referenceId: v.water.referenceId } : {}),
       ...(v.water.countCarried === false ? { countCarried: false } : {}),
     },
-    steps: v.steps.map((s) => ({ name: s.name, temperatureC: s.temperatureC, durationH: s.durationH })),
+    steps: v.steps.map((s) => ({
+      name: s.name,
+      temperatureC: s.temperatureC,
+      durationH: s.durationH,
+      stage: s.stage ?? "curing",
+      atmosphere: s.atmosphere ?? "air",
+    })),
     marginC: v.marginC,
   };
+  const modifiers = v.modifiers ?? [];
+  if (modifiers.length > 0) {
+    input.modifiers = modifiers.map((m) => ({ materialId: m.materialId, precursorId: m.precursorId, molPerMetal: m.molPerMetal }));
+  }
   if (v.solvent.mode === "molPerNetworkAtom") input.solvent = { materialId: v.solvent.materialId, mode: "molPerNetworkAtom", value: v.solvent.value };
   if (v.solvent.mode === "fill") input.solvent = { materialId: v.solvent.materialId, mode: "fill" };
   if (v.catalyst.materialId) input.catalyst = { materialId: v.catalyst.materialId, molPerNetworkAtom: v.catalyst.molPerNetworkAtom };
   if (v.substrateId) input.substrateId = v.substrateId;
   if (Number.isFinite(v.measuredBulkDensity)) input.measuredBulkDensity = v.measuredBulkDensity;
+  if (v.additionOrder?.length) input.additionOrder = [...v.additionOrder];
   return input;
 }
 
@@ -212,8 +258,14 @@ export function formFieldFor(path: string, v: EditorValues, input: FormulationIn
     if (key && ["grams", "solMassGrams", "volumeMl", "bulkDensity"].includes(key)) return { field: `basis.${key}` };
     return { field: "basis.type" };
   }
+  if (head === "modifiers") {
+    const key = parts[2];
+    if (parts.length >= 3 && key && ["materialId", "precursorId", "molPerMetal"].includes(key)) return { field: `modifiers.${parts[1]}.${key}` };
+    return { field: parts.length >= 2 ? `modifiers.${parts[1]}.materialId` : "modifiers" };
+  }
   if (head === "water" || head === "solvent" || head === "catalyst") {
     const key = parts[1];
+    if (head === "water" && key === "referenceId") return { field: "water.referenceId" };
     if (head === "catalyst" && key === "molPerNetworkAtom") return { field: "catalyst.molPerNetworkAtom" };
     if (key && ["materialId", "ratio", "value", "mode"].includes(key)) return { field: `${head}.${key}` };
     return { field: `${head}.materialId` };
@@ -228,6 +280,8 @@ export function formFieldFor(path: string, v: EditorValues, input: FormulationIn
       const prefix = `${material.name} (library record${property ? `, ${property}` : ""}): `;
       const ci = v.components.findIndex((c) => c.materialId === material.id);
       if (ci >= 0) return { field: `components.${ci}.materialId`, prefix };
+      const mi = (v.modifiers ?? []).findIndex((m) => m.materialId === material.id);
+      if (mi >= 0) return { field: `modifiers.${mi}.materialId`, prefix };
       if (v.water.materialId === material.id) return { field: "water.materialId", prefix };
       if (v.solvent.materialId === material.id) return { field: "solvent.materialId", prefix };
       if (v.catalyst.materialId === material.id) return { field: "catalyst.materialId", prefix };

@@ -16,12 +16,16 @@ const BASIS_LABELS: Record<string, string> = {
   linearShrinkagePercent: "Linear shrinkage",
 };
 
-const STEP_LABELS: Record<string, string> = { name: "name", temperatureC: "temperature", durationH: "duration" };
+const STEP_LABELS: Record<string, string> = { name: "name", temperatureC: "temperature", durationH: "duration", stage: "stage", atmosphere: "atmosphere" };
+
+const MODIFIER_LABELS: Record<string, string> = { materialId: "modifier", precursorId: "precursor modified", molPerMetal: "mol per mol metal" };
 
 const FIELD_LABELS: Record<string, string> = {
   "water.materialId": "Water",
   "water.ratio": "Water ratio",
   "water.value": "Water ratio",
+  "water.referenceId": "Water ratio, precursor",
+  modifiers: "Modifiers",
   "solvent.materialId": "Solvent",
   "solvent.mode": "Solvent",
   "solvent.value": "Solvent ratio",
@@ -47,6 +51,7 @@ export function fieldLabel(field: string): string | null {
   const parts = field.split(".");
   const row = Number(parts[1]) + 1;
   if (parts[0] === "components" && parts.length === 3) return `Component ${row}`;
+  if (parts[0] === "modifiers" && parts.length === 3) return `Modifier ${row}, ${MODIFIER_LABELS[parts[2] ?? ""] ?? "value"}`;
   if (parts[0] === "steps" && parts.length === 3) return `Step ${row}, ${STEP_LABELS[parts[2] ?? ""] ?? "value"}`;
   if (parts[0] === "basis") return BASIS_LABELS[parts[1] ?? ""] ?? "Basis";
   return FIELD_LABELS[field] ?? null;

@@ -19,6 +19,7 @@ import { blankValues, editorSchema, engineMaterial, valuesFromInput, type Editor
 import { fieldMessage } from "./editor-words";
 import { FirstSteps } from "./first-steps";
 import { MetaFields } from "./meta-fields";
+import { ModifiersFieldset } from "./modifiers-fieldset";
 import { ReagentsFieldset } from "./reagents-fieldset";
 import { StepsFieldset } from "./steps-fieldset";
 import { useDraftActions } from "./use-draft-actions";
@@ -118,6 +119,7 @@ export function FormulationEditor({ library, revision, canSubmit }: FormulationE
           )}
           <BasisFieldset />
           <ComponentsFieldset />
+          <ModifiersFieldset />
           <ReagentsFieldset />
           <StepsFieldset />
           {live.messages.general ? <ErrorPanel title="The engine cannot compute this" message={live.messages.general} /> : null}

@@ -7,17 +7,17 @@ import { fmtTemp } from "@/lib/format";
 import { a11y, idFor, useEditor } from "./editor-context";
 import { MaterialSelect } from "./material-select";
 import { NumberField } from "./number-field";
+import { WaterFieldset } from "./water-fieldset";
 
 /** Water ratio, solvent, catalyst and substrate. */
 export function ReagentsFieldset() {
   const { control, register, messageFor, options, record, readOnly } = useEditor();
   const solventMode = useWatch({ control, name: "solvent.mode" });
-  const ratio = useWatch({ control, name: "water.ratio" });
   const catalystId = useWatch({ control, name: "catalyst.materialId" });
   const substrateId = useWatch({ control, name: "substrateId" });
   const solventId = useWatch({ control, name: "solvent.materialId" });
   const substrate = record(substrateId);
-  const sel = (field: "water.materialId" | "solvent.materialId" | "catalyst.materialId" | "substrateId") => ({
+  const sel = (field: "solvent.materialId" | "catalyst.materialId" | "substrateId") => ({
     ...a11y(idFor(field), messageFor(field)),
     ...register(field),
     invalid: !!messageFor(field),
@@ -26,18 +26,7 @@ export function ReagentsFieldset() {
   return (
     <fieldset className="@container flex flex-col gap-3 rounded border border-rule bg-panel p-3">
       <legend className="px-1 text-sm font-semibold">Water, solvent, catalyst and substrate</legend>
-      <div className="grid gap-3 @sm:grid-cols-2">
-        <Field id={idFor("water.materialId")} label="Water" error={messageFor("water.materialId")}>
-          <MaterialSelect options={options} kinds={["water"]} emptyLabel="Pick the water" {...sel("water.materialId")} />
-        </Field>
-        <Field id={idFor("water.ratio")} label="Water ratio given as" error={messageFor("water.ratio")}>
-          <select disabled={readOnly} className={inputClass()} {...a11y(idFor("water.ratio"), messageFor("water.ratio"))} {...register("water.ratio")}>
-            <option value="R">R: mol H₂O per mol network atom</option>
-            <option value="h">h: mol H₂O per mol alkoxy group</option>
-          </select>
-        </Field>
-        <NumberField name="water.value" label={`Water ratio ${ratio}`} unit="mol/mol" />
-      </div>
+      <WaterFieldset />
       <div className="grid gap-3 @sm:grid-cols-2">
         <Field id={idFor("solvent.mode")} label="Solvent" error={messageFor("solvent.mode")}>
           <select disabled={readOnly} className={inputClass(!!messageFor("solvent.mode"))} {...a11y(idFor("solvent.mode"), messageFor("solvent.mode"))} {...register("solvent.mode")}>
@@ -73,6 +62,7 @@ export function ReagentsFieldset() {
           <p className="num self-end pb-2 text-xs text-muted">
             Tg {fmtTemp(substrate.thermal.glassTransitionC)} · Tm {fmtTemp(substrate.thermal.meltingC)} · Td {fmtTemp(substrate.thermal.degradationOnsetC)} · max{" "}
             {fmtTemp(substrate.thermal.maxServiceC)}
+            {substrate.thermal.heatDeflectionC !== undefined ? ` · HDT ${fmtTemp(substrate.thermal.heatDeflectionC)}` : ""}
           </p>
         ) : null}
       </div>

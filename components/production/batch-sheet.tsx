@@ -2,13 +2,13 @@
 
 import { useBalanceResolution } from "@/components/results/balance";
 import { BalanceSelect } from "@/components/results/balance-select";
-import { materialsById, LINE_ROLE_LABELS } from "@/components/results/words";
+import { ATMOSPHERE_LABELS, materialsById, LINE_ROLE_LABELS, STAGE_LABELS } from "@/components/results/words";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { SAFETY_REMINDER } from "@/components/ui/hazards";
 import { TableHead } from "@/components/ui/table-head";
 import type { FormulationInput, FormulationResult } from "@/lib/formulation";
-import { fmtDateTime, fmtHours, fmtMass, fmtPercent, fmtTemp, fmtVolume } from "@/lib/format";
+import { fmtDateTime, fmtHours, fmtMass, fmtPercent, fmtRatio, fmtTemp, fmtVolume } from "@/lib/format";
 
 interface BatchSheetProps {
   formulationName: string;
@@ -133,6 +133,7 @@ export function BatchSheet({ formulationName, project, revisionNumber, released,
                       {LINE_ROLE_LABELS[l.role]}
                       {m?.hazards?.length ? ` · GHS ${m.hazards.join(", ")}` : ""}
                     </span>
+                    {l.role === "modifier" ? <ModifierNote input={input} materialId={l.materialId} /> : null}
                   </td>
                   <td className={`${cell} min-w-[7rem]`} />
                   <td className={`${cell} num text-right font-semibold whitespace-nowrap`}>{fmtMass(l.massGrams, resolution)}</td>
@@ -156,7 +157,12 @@ export function BatchSheet({ formulationName, project, revisionNumber, released,
             {input.steps.map((s, i) => (
               <tr key={i} className="write-in">
                 <td className={`${cell} num`}>{i + 1}</td>
-                <td className={cell}>{s.name}</td>
+                <td className={cell}>
+                  {s.name}
+                  <span className="block text-xs text-muted">
+                    {STAGE_LABELS[s.stage ?? "curing"]} · {ATMOSPHERE_LABELS[s.atmosphere ?? "air"]}
+                  </span>
+                </td>
                 <td className={`${cell} num text-right`}>{fmtTemp(s.temperatureC)}</td>
                 <td className={`${cell} num text-right`}>{fmtHours(s.durationH)}</td>
                 <td className={`${cell} min-w-[5rem]`} />
@@ -184,5 +190,23 @@ export function BatchSheet({ formulationName, project, revisionNumber, released,
         </p>
       </footer>
     </article>
+  );
+}
+
+interface ModifierNoteProps {
+  input: FormulationInput;
+  materialId: string;
+}
+
+/** Which precursor a modifier line goes onto, and that it goes in before any water. */
+function ModifierNote({ input, materialId }: ModifierNoteProps) {
+  const names = new Map(input.materials.map((m) => [m.id, m.name]));
+  const specs = (input.modifiers ?? []).filter((m) => m.materialId === materialId);
+  if (specs.length === 0) return null;
+  return (
+    <span className="block text-xs" data-testid="modifier-note">
+      onto {specs.map((m) => `${names.get(m.precursorId) ?? m.precursorId} (${fmtRatio(m.molPerMetal)} mol/mol metal)`).join(", ")}; stir before adding
+      any water
+    </span>
   );
 }

@@ -15,10 +15,17 @@ interface CompositePanelProps {
 export function CompositePanel({ input, result, resolution }: CompositePanelProps) {
   const c = result.composite;
   const byId = materialsById(input);
-  const phases = c.phases.map((p) => ({
-    ...p,
-    label: p.residueFormula ? `${p.residueFormula} from ${byId.get(p.materialId)?.name ?? p.materialId}` : (byId.get(p.materialId)?.name ?? p.materialId),
-  }));
+  const phases = c.phases.map((p) => {
+    const m = byId.get(p.materialId);
+    const name = m?.name ?? p.materialId;
+    const label =
+      m?.kind === "modifier"
+        ? `Bonded ligand ${p.residueFormula ?? m.modifier?.bondedFormula ?? ""} from ${name}`
+        : p.residueFormula
+          ? `${p.residueFormula} from ${name}`
+          : name;
+    return { ...p, label };
+  });
   return (
     <div className="@container flex flex-col gap-3">
       <div className="overflow-x-auto">
@@ -27,7 +34,7 @@ export function CompositePanel({ input, result, resolution }: CompositePanelProp
           <TableHead columns={["Phase", { label: "Weight fraction", numeric: true }, { label: "Volume fraction", numeric: true }, { label: "Dry density", numeric: true }]} />
           <tbody>
             {phases.map((p) => (
-              <tr key={p.materialId} className="border-b border-rule/60">
+              <tr key={p.materialId} className="border-b border-rule/60" data-phase-kind={byId.get(p.materialId)?.kind}>
                 <td className={TD}>{p.label}</td>
                 <td className={TDN}>{fmtPercent(p.weightFraction, 2)}</td>
                 <td className={TDN}>{fmtPercent(p.volumeFraction, 2)}</td>

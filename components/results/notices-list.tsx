@@ -21,7 +21,7 @@ export function NoticesList({ notices }: NoticesListProps) {
     <div className="flex flex-col gap-1.5">
       <ul className="flex flex-col gap-1.5" data-testid="notices">
         {sorted.map((n, i) => (
-          <li key={`${n.code}-${i}`} className={`rounded border px-2.5 py-1.5 text-sm ${LEVEL[n.level].style}`}>
+          <li key={`${n.code}-${i}`} data-code={n.code} className={`rounded border px-2.5 py-1.5 text-sm ${LEVEL[n.level].style}`}>
             <span className={`mr-1.5 font-semibold ${TEXT[n.level]}`}>
               <span aria-hidden="true">{LEVEL[n.level].mark} </span>
               {LEVEL[n.level].word}:

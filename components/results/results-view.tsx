@@ -7,6 +7,7 @@ import type { FormulationInput, FormulationResult } from "@/lib/formulation";
 import { useBalanceResolution } from "./balance";
 import { BalanceSelect } from "./balance-select";
 import { CompositePanel } from "./composite-panel";
+import { LigandsPanel } from "./ligands-panel";
 import { NoticesList } from "./notices-list";
 import { RecipeTable } from "./recipe-table";
 import { SolPanel } from "./sol-panel";
@@ -42,6 +43,11 @@ export function ResultsView({ input, result, thermalFirst = false }: ResultsView
       <Panel title="Water and alcohol" id="water">
         <WaterPanel input={input} result={result} resolution={resolution} />
       </Panel>
+      {result.modifiers?.length || result.solvent ? (
+        <Panel title={result.modifiers?.length ? "Modifiers and solvent" : "Solvent"} id="ligands">
+          <LigandsPanel input={input} result={result} resolution={resolution} />
+        </Panel>
+      ) : null}
       <div className="grid gap-4 2xl:grid-cols-[minmax(0,1fr)_minmax(0,2fr)]">
         <Panel title="Sol" id="sol">
           <SolPanel result={result} resolution={resolution} />

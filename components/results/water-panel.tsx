@@ -2,6 +2,7 @@ import type { FormulationInput, FormulationResult } from "@/lib/formulation";
 import { fmtMass, fmtMol, fmtRatio, fmtVolume } from "@/lib/format";
 import { TableHead, TD, TDN } from "@/components/ui/table-head";
 import { FigureRows } from "./table";
+import { materialsById } from "./words";
 
 interface WaterPanelProps {
   input: FormulationInput;
@@ -12,19 +13,35 @@ interface WaterPanelProps {
 /** Water accounting (target, carried, to add, effective ratios) and alcohol released. */
 export function WaterPanel({ input, result, resolution }: WaterPanelProps) {
   const w = result.water;
-  const ratioWord = input.water.ratio === "R" ? "R (mol H₂O per mol network-forming atom)" : "h (mol H₂O per mol hydrolysable group)";
+  const byId = materialsById(input);
+  const ref = input.water.referenceId ? (byId.get(input.water.referenceId)?.name ?? input.water.referenceId) : "the precursor";
+  const ratioName = input.water.ratio === "perPrecursor" ? `H₂O : ${ref}` : input.water.ratio;
+  const ratioWord =
+    input.water.ratio === "R"
+      ? "R (mol H₂O per mol network-forming atom)"
+      : input.water.ratio === "h"
+        ? "h (mol H₂O per mol hydrolysable group after ligand exchange)"
+        : `mol H₂O per mol ${ref}`;
+  const countCarried = input.water.countCarried !== false;
   return (
     <div className="@container"><div className="grid gap-4 @2xl:grid-cols-2">
       <FigureRows
         caption="Water accounting"
         rows={[
-          { label: `Target water at ${input.water.ratio} = ${fmtRatio(input.water.value)}`, note: ratioWord, value: fmtMol(w.targetMol) },
-          { label: "Carried by other materials", note: "aqueous stocks, solutions, hydrates", value: fmtMol(w.carriedMol) },
+          { label: `Target water at ${ratioName} = ${fmtRatio(input.water.value)}`, note: ratioWord, value: fmtMol(w.targetMol) },
+          {
+            label: "Carried by other materials",
+            note: countCarried ? "aqueous stocks, solutions, hydrates; counted toward the target" : "not counted: the whole target is added",
+            value: fmtMol(w.carriedMol),
+          },
           { label: "Water to add", value: <span className="font-semibold">{`${fmtMol(w.addMol)} · ${fmtMass(w.addGrams, resolution)} · ${fmtVolume(w.addMl)}`}</span> },
+          ...(w.groupsReplacedMol !== undefined
+            ? [{ label: "Alkoxy groups replaced by modifiers", note: "no longer hydrolysable", value: <span data-testid="groups-replaced">{fmtMol(w.groupsReplacedMol)}</span> }]
+            : []),
           { label: "Full hydrolysis needs", value: fmtMol(w.hydrolysisMol) },
           { label: "Net for complete condensation", value: fmtMol(w.condensationMol) },
           { label: "Effective R", value: fmtRatio(w.effectiveR) },
-          { label: "Effective h", value: fmtRatio(w.effectiveH) },
+          ...(w.effectiveH !== undefined ? [{ label: "Effective h", value: fmtRatio(w.effectiveH) }] : []),
         ]}
       />
       <div>

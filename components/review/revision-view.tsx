@@ -10,6 +10,7 @@ import { Alert } from "@/components/ui/alert";
 import { useRevision, type Revision } from "@/lib/client/formulations";
 import { fmtDateTime } from "@/lib/format";
 import { DiffPanel } from "./diff-panel";
+import { InputSummary } from "./input-summary";
 import { RevisionActions } from "./revision-actions";
 import { ReviewPanel } from "./review-panel";
 import type { Abilities } from "./abilities";
@@ -70,6 +71,9 @@ export function RevisionView({ initial, can }: RevisionViewProps) {
           </ul>
         </Panel>
       ) : null}
+      <Panel title="Choices as entered" id="inputs">
+        <InputSummary input={rev.input} />
+      </Panel>
       {rev.number > 1 && can.readUnreleased ? (
         <Panel title={`Changes since revision ${rev.number - 1}`} id="diff">
           <DiffPanel formulationId={rev.formulationId} from={rev.number - 1} to={rev.number} />

@@ -3,7 +3,7 @@ import type { FormulationInput, FormulationResult } from "@/lib/formulation";
 import { fmtHours, fmtTemp } from "@/lib/format";
 import { LIMIT_LABELS } from "@/components/results/words";
 import { TableHead } from "@/components/ui/table-head";
-import { conversionChecks, thermalRows } from "./thermal-model";
+import { conversionChecks, serviceNotices, stepConditions, thermalRows } from "./thermal-model";
 
 const MATRIX_HEAD = "border border-rule bg-paper px-2 py-1 text-left text-xs font-semibold text-muted";
 
@@ -19,6 +19,7 @@ export function ThermalMatrix({ input, result }: ThermalMatrixProps) {
   const byId = new Map(input.materials.map((m) => [m.id, m]));
   const binding = t.binding ? byId.get(t.binding.materialId) : undefined;
   const conversions = conversionChecks(result);
+  const service = serviceNotices(result);
   return (
     <div className="flex flex-col gap-3" data-testid="thermal-matrix">
       <div className="flex flex-wrap items-center gap-x-4 gap-y-1 text-sm">
@@ -58,6 +59,9 @@ export function ThermalMatrix({ input, result }: ThermalMatrixProps) {
                       <span className="num block font-normal">
                         {fmtTemp(s.temperatureC)} · {fmtHours(s.durationH)}
                       </span>
+                      <span className="block font-normal" data-testid={`step-conditions-${i}`}>
+                        {stepConditions(s)}
+                      </span>
                     </>
                   ),
                 })),
@@ -71,6 +75,7 @@ export function ThermalMatrix({ input, result }: ThermalMatrixProps) {
                     <span className="block text-xs font-normal text-muted">
                       {r.role === "substrate" ? "substrate" : "organic phase"}
                       {r.hard ? ` · ${LIMIT_LABELS[r.hard.limit as keyof typeof LIMIT_LABELS]} ${fmtTemp(r.hard.limitC)}` : " · no hard limit"}
+                      {r.hardInert ? ` · ${LIMIT_LABELS[r.hardInert.limit as keyof typeof LIMIT_LABELS]} ${fmtTemp(r.hardInert.limitC)}` : ""}
                     </span>
                   </th>
                   {r.cells.map((c, i) => (
@@ -93,6 +98,16 @@ export function ThermalMatrix({ input, result }: ThermalMatrixProps) {
           </table>
         </div>
       )}
+      {service.length > 0 ? (
+        <ul className="flex flex-col gap-1 text-sm" data-testid="service-rating">
+          {service.map((n, i) => (
+            <li key={i} className="flex flex-wrap items-center gap-2">
+              <ThermalBadge status="caution" />
+              {n.message}
+            </li>
+          ))}
+        </ul>
+      ) : null}
       {conversions.length > 0 ? (
         <ul className="flex flex-col gap-1 text-sm">
           {conversions.map((c) => (

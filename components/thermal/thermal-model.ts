@@ -1,3 +1,4 @@
+import { ATMOSPHERE_LABELS, STAGE_LABELS } from "@/components/results/words";
 import { hardLimit, type FormulationInput, type FormulationResult, type ThermalCheck, type ThermalStatus } from "@/lib/formulation";
 
 export interface ThermalRow {
@@ -7,6 +8,8 @@ export interface ThermalRow {
   /** One check per process step, in step order (undefined when the material has no limits). */
   cells: (ThermalCheck | undefined)[];
   hard?: { limit: string; limitC: number };
+  /** The hard limit under inert gas, when it differs from the one in air. */
+  hardInert?: { limit: string; limitC: number };
   worst: ThermalStatus;
 }
 
@@ -25,14 +28,27 @@ export function thermalRows(input: FormulationInput, result: FormulationResult):
     const m = byId.get(id);
     const checks = result.thermal.checks.filter((c) => c.materialId === id && c.limit !== "conversion");
     const cells = input.steps.map((_, i) => checks[i]);
-    const hard = m ? hardLimit({ materialId: id, name: m.name, role, thermal: m.thermal, path: "" }) : undefined;
+    const subject = m ? { materialId: id, name: m.name, role, thermal: m.thermal, path: "" } : undefined;
+    const hard = subject ? hardLimit(subject) : undefined;
+    const inert = subject ? hardLimit(subject, "inert") : undefined;
+    const hardInert = inert && (inert.limit !== hard?.limit || inert.limitC !== hard?.limitC) ? inert : undefined;
     let worst: ThermalStatus = "clear";
     for (const c of checks) if (RANK[c.status] > RANK[worst]) worst = c.status;
-    return { materialId: id, name: m?.name ?? id, role, cells, hard, worst };
+    return { materialId: id, name: m?.name ?? id, role, cells, hard, ...(hardInert ? { hardInert } : {}), worst };
   });
 }
 
 /** Conversion checks of precursors that need heat. */
 export function conversionChecks(result: FormulationResult): ThermalCheck[] {
   return result.thermal.checks.filter((c) => c.limit === "conversion");
+}
+
+/** A step's stage and atmosphere in words; a step that does not say is a cure in air, as the engine checks it. */
+export function stepConditions(step: { stage?: "sol" | "drying" | "curing"; atmosphere?: "air" | "inert" }): string {
+  return `${STAGE_LABELS[step.stage ?? "curing"]} · ${ATMOSPHERE_LABELS[step.atmosphere ?? "air"]}`;
+}
+
+/** Thermal notices to show beside the matrix: the hours above a substrate's service rating. */
+export function serviceNotices(result: FormulationResult): FormulationResult["notices"] {
+  return result.notices.filter((n) => n.code === "above_service_rating");
 }
