@@ -29,3 +29,9 @@ export const KIND_LABELS: Record<MaterialKind, string> = {
 
 /** Words for a thermal limit: the engine's own, so its messages and the screens agree. */
 export { LIMIT_LABELS } from "@/lib/formulation";
+
+/** Words for a process step's stage (input "stage"; absent = curing). */
+export const STAGE_LABELS: Record<"sol" | "drying" | "curing", string> = { sol: "Sol", drying: "Drying", curing: "Curing" };
+
+/** Words for a process step's atmosphere (input "atmosphere"; absent = air). */
+export const ATMOSPHERE_LABELS: Record<"air" | "inert", string> = { air: "Air", inert: "Inert gas" };

@@ -3,7 +3,7 @@
  * composite, thermal check and the full input for re-import) and its batch
  * sheet as CSV.
  */
-import { LIMIT_LABELS, LINE_ROLE_LABELS } from "@/lib/labels";
+import { ATMOSPHERE_LABELS, LIMIT_LABELS, LINE_ROLE_LABELS, STAGE_LABELS } from "@/lib/labels";
 import { DEFAULT_BALANCE_RESOLUTION_G, VOLUME_RESOLUTION_ML } from "@/lib/batches";
 import { hardLimit, type FormulationInput, type FormulationResult, type Material } from "@/lib/formulation";
 import { inputSheets } from "./input-sheets";
@@ -188,7 +188,7 @@ function compositeRows(revision: RevisionForExport): Cell[][] {
 
 /** A step's column heading: name, stage, gas, temperature and time (a step stored without stage or gas is a cure in air). */
 export function stepHeading(step: FormulationInput["steps"][number]): string {
-  return `${step.name} (${step.stage ?? "curing"}, ${step.atmosphere === "inert" ? "inert gas" : "air"}, ${step.temperatureC} °C, ${step.durationH} h)`;
+  return `${step.name} (${STAGE_LABELS[step.stage ?? "curing"].toLowerCase()}, ${ATMOSPHERE_LABELS[step.atmosphere ?? "air"].toLowerCase()}, ${step.temperatureC} °C, ${step.durationH} h)`;
 }
 
 function thermalSheet(revision: RevisionForExport): SheetSpec {
