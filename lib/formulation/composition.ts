@@ -47,7 +47,7 @@ export interface CompositionPass {
  * weight fractions apply to; `solidMass` the whole dry composite, over
  * which the phases' weight fractions are reported.
  *
- * @param components - the components, with weight fractions already scaled to sum to 1
+ * @param components - the components, with weight fractions already scaled to sum to 1 (and the number entered when unscaled)
  * @param byId - the indexed materials
  * @param freeMass - S_free, g
  * @param solidMass - S, g
@@ -59,7 +59,7 @@ export interface CompositionPass {
  * ```
  */
 export function composeComponents(
-  components: readonly (Omit<Component, "weightFraction"> & { weightFraction: Dec })[],
+  components: readonly (Omit<Component, "weightFraction"> & { weightFraction: Dec; value?: number })[],
   byId: Map<string, IndexedMaterial>,
   freeMass: Dec,
   solidMass: Dec,
@@ -82,6 +82,8 @@ export function composeComponents(
     const material = entry.material;
     const weightFraction = component.weightFraction;
     const phaseFraction = share ? weightFraction.times(share) : weightFraction;
+    // The number as entered when nothing scaled it (saves a decimal-to-number conversion).
+    const phaseFractionValue = share || component.value === undefined ? toNumber(phaseFraction) : component.value;
     const present = !weightFraction.isZero();
     if (material.kind === "precursor") {
       const data = requirePrecursorData(entry);
@@ -91,7 +93,7 @@ export function composeComponents(
         materialId: material.id,
         residueFormula: data.residueFormula,
         weightFraction: phaseFraction,
-        weightFractionValue: toNumber(phaseFraction),
+        weightFractionValue: phaseFractionValue,
         density: dec(data.residueDensity),
         densityValue: data.residueDensity,
       });
@@ -130,7 +132,7 @@ export function composeComponents(
       pass.phases.push({
         materialId: material.id,
         weightFraction: phaseFraction,
-        weightFractionValue: toNumber(phaseFraction),
+        weightFractionValue: phaseFractionValue,
         density: dec(a.phaseDensity),
         densityValue: a.phaseDensity,
       });

@@ -98,9 +98,12 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
 
   // Fractions within 0.5 % of 1 (33.3 / 33.3 / 33.3 %) are scaled to 1; the schema refused any beyond.
   const fractionSum = input.components.reduce((sum, c) => sum.plus(dec(c.weightFraction)), ZERO);
+  // A sum within 1e-12 of 1 is float rounding of fractions that were meant to add up: used as they are.
+  const exact = fractionSum.minus(1).abs().lessThanOrEqualTo(1e-12);
   const components = input.components.map((c) => ({
-    ...c,
-    weightFraction: fractionSum.equals(1) ? dec(c.weightFraction) : dec(c.weightFraction).div(fractionSum),
+    materialId: c.materialId,
+    weightFraction: exact ? dec(c.weightFraction) : dec(c.weightFraction).div(fractionSum),
+    ...(exact ? { value: c.weightFraction } : {}),
   }));
   notices.push(...fractionsScaledNotice(fractionSum));
 
@@ -223,14 +226,33 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
   const targetMol = waterTarget(water.ratio, dec(water.value), { networkAtomMol, groupMol, referenceMol });
   const countCarried = water.countCarried ?? true;
 
+  // Running sol totals (g, mL, ideal mixing): every line so far; the fill and the water follow.
+  let solMass = ZERO;
+  let solVolume = ZERO;
+  for (const l of lines) {
+    solMass = solMass.plus(l.massGrams);
+    solVolume = solVolume.plus(l.volumeMl);
+  }
   let addMol: Dec;
   const basis = input.basis;
   if (input.solvent?.mode === "fill" && solventEntry) {
     if (basis.type === "solidMass") {
       throw new FormulationError("nothing_to_fill", "solvent.mode", "a dry-solid-mass basis leaves nothing to fill");
     }
-    const fill = fillSolvent({ basis, lines, solventEntry, waterEntry, solidMass, waterNeededMol: countCarried ? targetMol.minus(carriedWaterMol) : targetMol });
-    if (fill.line) lines.push(fill.line);
+    const fill = fillSolvent({
+      basis,
+      otherGrams: solMass,
+      otherMl: solVolume,
+      solventEntry,
+      waterEntry,
+      solidMass,
+      waterNeededMol: countCarried ? targetMol.minus(carriedWaterMol) : targetMol,
+    });
+    if (fill.line) {
+      lines.push(fill.line);
+      solMass = solMass.plus(fill.line.massGrams);
+      solVolume = solVolume.plus(fill.line.volumeMl);
+    }
     carriedWaterMol = carriedWaterMol.plus(fill.carriedWaterMol);
     addMol = fill.addWaterMol;
     const carried = carriedSolventGrams(lines, byId, solventEntry.material.id);
@@ -255,16 +277,12 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
     addGrams = addMol.times(waterMolarMass);
     addMl = addGrams.div(requireDensity(waterEntry));
     lines.push({ materialId: waterEntry.material.id, role: "water", moles: addMol, massGrams: addGrams, volumeMl: addMl });
+    solMass = solMass.plus(addGrams);
+    solVolume = solVolume.plus(addMl);
   }
   const totalWaterMol = carriedWaterMol.plus(addMol);
 
   // Sol figures (ideal mixing).
-  let solMass = ZERO;
-  let solVolume = ZERO;
-  for (const line of lines) {
-    solMass = solMass.plus(line.massGrams);
-    solVolume = solVolume.plus(line.volumeMl);
-  }
   const perLitre = dec(ML_PER_L).div(solVolume); // 1 / (sol volume in L)
 
   // Dry composite.
@@ -298,7 +316,7 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
   const effectiveR = totalWaterMol.div(networkAtomMol);
 
   notices.push(
-    ...assayBalanceNotices(dispensed.map((material) => ({ material, path: byId.get(material.id)!.path }))),
+    ...assayBalanceNotices(dispensed.filter((m) => m.assay !== undefined && m.assay < 1).map((material) => ({ material, path: byId.get(material.id)!.path }))),
     ...fastHydrolysisNotices(pass.fastHydrolysing, plans, effectiveR),
     ...waterNotices({ targetMol, carriedMol: carriedWaterMol, totalMol: totalWaterMol, networkAtomMol, hydrolysableGroupMol: groupMol, countCarried }),
     ...basisNotices({ basis, fill: input.solvent?.mode === "fill", solMassGrams: solMass, solVolumeMl: solVolume, solidMassGrams: solidMass }),

@@ -126,30 +126,26 @@ export interface FillOutcome {
  * the basis's sol mass or mould volume around the lines already in it (see
  * `solveFill`), and returns the solvent's line.
  *
- * @param p - basis, lines so far, solvent and water materials, S (g), water still needed (mol)
+ * @param p - basis, mass and volume of the rest of the sol, solvent and water materials, S (g), water still needed (mol)
  * @example
  * ```ts
- * fillSolvent({ basis, lines, solventEntry: ethanol, waterEntry: waterDi, solidMass: new Dec(20), waterNeededMol: new Dec(0.5) }).line?.massGrams;
+ * fillSolvent({ basis, otherGrams: new Dec(40), otherMl: new Dec(45), solventEntry: ethanol, waterEntry: waterDi, solidMass: new Dec(20), waterNeededMol: new Dec(0.5) }).line?.massGrams;
  * ```
  */
 export function fillSolvent(p: {
   basis: Exclude<Basis, { type: "solidMass" }>;
-  lines: readonly DecLine[];
+  /** g and mL of everything else in the sol. */
+  otherGrams: Dec;
+  otherMl: Dec;
   solventEntry: IndexedMaterial;
   waterEntry: IndexedMaterial;
   solidMass: Dec;
   waterNeededMol: Dec;
 }): FillOutcome {
-  let otherGrams = ZERO;
-  let otherMl = ZERO;
-  for (const line of p.lines) {
-    otherGrams = otherGrams.plus(line.massGrams);
-    otherMl = otherMl.plus(line.volumeMl);
-  }
   const fill = solveFill({
     target: p.basis.type === "gelBody" ? { kind: "volume", amount: dec(p.basis.volumeMl) } : { kind: "mass", amount: dec(p.basis.solMassGrams) },
-    otherGrams,
-    otherMl,
+    otherGrams: p.otherGrams,
+    otherMl: p.otherMl,
     waterNeededMol: p.waterNeededMol,
     solvent: p.solventEntry,
     water: p.waterEntry,

@@ -134,7 +134,7 @@ function checkStep(subject: ThermalSubject, limit: NamedLimit, step: ProcessStep
   let reference: NamedLimit | undefined = hard;
   if (hard && t >= hard.limitC) {
     status = "fail";
-  } else if (hard && t >= new Dec(hard.limitC).minus(marginC).toNumber()) {
+  } else if (hard && t >= hard.limitC - marginC) {
     status = "caution";
   } else {
     for (const soft of softLimits(subject, stage)) {
