@@ -12,12 +12,6 @@ export const ENGINE_VERSION = "2.0.0";
 export const WATER_MOLAR_MASS_G_PER_MOL = 18.015;
 
 /**
- * Allowed deviation of the sum of weight fractions from 1 (dimensionless).
- * Common practice, no source: a tolerance well below any balance's resolution.
- */
-export const WEIGHT_FRACTION_SUM_TOLERANCE = 1e-6;
-
-/**
  * Default safety margin below a hard thermal limit, °C.
  * Common practice, no source.
  */

@@ -3,7 +3,7 @@
  * auth imports; runs on the server and in the browser.
  */
 export { computeFormulation } from "./compute";
-export { ENGINE_VERSION, WATER_MOLAR_MASS_G_PER_MOL, DEFAULT_THERMAL_MARGIN_C, WEIGHT_FRACTION_SUM_TOLERANCE, WEIGHT_FRACTION_SCALE_TOLERANCE } from "./constants";
+export { ENGINE_VERSION, WATER_MOLAR_MASS_G_PER_MOL, DEFAULT_THERMAL_MARGIN_C, WEIGHT_FRACTION_SCALE_TOLERANCE } from "./constants";
 export { FormulationError, isFormulationError, type FieldIssue, type FormulationErrorCode } from "./errors";
 export {
   materialSchema,

@@ -9,7 +9,7 @@ import {
   computeFormulation,
   formulationInputSchema,
   isFormulationError,
-  WEIGHT_FRACTION_SUM_TOLERANCE,
+  WEIGHT_FRACTION_SCALE_TOLERANCE,
   type FormulationInput,
   type Material,
 } from "@/lib/formulation";
@@ -378,7 +378,8 @@ export function previewFormulationImport(
         components.push({ materialId: materialName ? resolve(materialName, at) : "", weightFraction: value });
       }
       if (components.length === 0) p.error(null, null, "At least one component (a precursor or organic phase with its weight fraction) is needed.");
-      else if (complete && total.minus(1).abs().greaterThan(WEIGHT_FRACTION_SUM_TOLERANCE)) {
+      else if (complete && total.minus(1).abs().greaterThan(WEIGHT_FRACTION_SCALE_TOLERANCE)) {
+        // The engine's own rule: a sum within 0.5 % of 1 is scaled to 1 (with a notice), beyond it refused.
         p.error(lastRow, fractionAt, `Weight fractions sum to ${Number(total.toPrecision(8))}; they must sum to 1.`);
         locations.set("components", { sheet: componentsSheet, rowIndex: lastRow, col: fractionAt });
       }

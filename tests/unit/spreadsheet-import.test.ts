@@ -95,6 +95,15 @@ describe("formulation import", () => {
     ]);
   });
 
+  it("accepts fractions within 0.5 % of one, as the engine does (it scales them to 1 with a notice)", async () => {
+    // 0.698 + 0.25 + 0.05 = 0.998: inside the engine's 0.5 % band (lib/formulation/constants.ts), so not a sheet error.
+    const sheets = edit(sheetsOf(demo.input), SHEET.components, (rows) => {
+      rows[0]![1] = 0.698;
+    });
+    const preview = await previewXlsx(sheets);
+    expect(errors(preview.problems)).toEqual([]);
+  });
+
   it("reports a number with a unit in it, a decimal comma and a percentage", async () => {
     const sheets = sheetsOf(demo.input);
     const solMass = rowOf(sheets, SHEET.input, "Sol mass");
