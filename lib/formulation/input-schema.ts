@@ -3,7 +3,22 @@ import { WEIGHT_FRACTION_SCALE_TOLERANCE } from "./constants";
 import { dec, ZERO } from "./decimal";
 import { nameText } from "./text-rules";
 import { materialSchema, type Material, type MaterialKind } from "./material-schema";
-import { BATCH_AMOUNT, DENSITY_G_PER_CM3, DURATION_H, MARGIN_C, MOLAR_RATIO, TEMPERATURE_C, WEIGHT_FRACTION } from "./limits";
+import {
+  AREA_M2,
+  BATCH_AMOUNT,
+  DENSITY_G_PER_CM3,
+  DRY_THICKNESS_NM,
+  DURATION_H,
+  MARGIN_C,
+  MOLAR_RATIO,
+  SPIN_RPM,
+  SURFACE_TENSION_MN_PER_M,
+  TEMPERATURE_C,
+  VISCOSITY_MPA_S,
+  WEIGHT_FRACTION,
+  WET_THICKNESS_UM,
+  WITHDRAWAL_MM_PER_S,
+} from "./limits";
 import { fraction, nonEmptyString, positiveNumber, rangedNumber, required, zeroOrRangedNumber } from "./zod-helpers";
 
 /**
@@ -163,6 +178,60 @@ export const modifierSpecSchema = z.object(
   { error: required("modifier", "an object") },
 );
 
+/** The coating methods the engine predicts a film for (chemistry: "What the coat will be"). */
+export const COATING_METHODS = ["dip", "spin", "wetFilm"] as const;
+
+/** Fields every coating method may carry: the dry thickness wanted (nm) and the area to coat (m²). */
+const coatingTargets = {
+  targetDryThicknessNm: rangedNumber("target dry thickness (nm)", DRY_THICKNESS_NM).optional(),
+  areaM2: rangedNumber("area to coat (m²)", AREA_M2).optional(),
+};
+
+/**
+ * How the coat is applied:
+ * - dip: withdrawal speed (mm/s), sol viscosity (mPa·s) and surface tension
+ *   (mN/m), Landau–Levich;
+ * - spin: spin speed (rpm) and one measured film (`calibration`: rpm and dry
+ *   thickness in nm), thickness ∝ rpm^(−1/2);
+ * - wetFilm: a wet film thickness (µm) laid by a bar, a slot die or a spray.
+ * Each may carry a target dry thickness (nm) and the area to coat (m²).
+ *
+ * @example
+ * ```ts
+ * coatingSpecSchema.parse({ method: "dip", withdrawalMmPerS: 2, viscosityMPaS: 3, surfaceTensionMNPerM: 24 });
+ * ```
+ */
+export const coatingSpecSchema = z.discriminatedUnion(
+  "method",
+  [
+    z.object({
+      method: z.literal("dip"),
+      withdrawalMmPerS: rangedNumber("withdrawal speed (mm/s)", WITHDRAWAL_MM_PER_S),
+      viscosityMPaS: rangedNumber("sol viscosity (mPa·s)", VISCOSITY_MPA_S),
+      surfaceTensionMNPerM: rangedNumber("surface tension (mN/m)", SURFACE_TENSION_MN_PER_M),
+      ...coatingTargets,
+    }),
+    z.object({
+      method: z.literal("spin"),
+      rpm: rangedNumber("spin speed (rpm)", SPIN_RPM),
+      calibration: z.object(
+        {
+          rpm: rangedNumber("calibration spin speed (rpm)", SPIN_RPM),
+          dryThicknessNm: rangedNumber("calibration dry thickness (nm)", DRY_THICKNESS_NM),
+        },
+        { error: "spin coating needs one measured film: its spin speed (rpm) and dry thickness (nm)" },
+      ),
+      ...coatingTargets,
+    }),
+    z.object({
+      method: z.literal("wetFilm"),
+      wetThicknessUm: rangedNumber("wet film thickness (µm)", WET_THICKNESS_UM),
+      ...coatingTargets,
+    }),
+  ],
+  { error: "the coating method must be dip, spin or a wet film of stated thickness" },
+);
+
 type Ctx = z.RefinementCtx;
 
 function addIssue(ctx: Ctx, path: (string | number)[], code: string, message: string): void {
@@ -227,6 +296,8 @@ export const formulationInputSchema = z
       marginC: rangedNumber("thermal margin (°C)", MARGIN_C).optional(),
       measuredBulkDensity: rangedNumber("measured bulk density (g/cm³)", DENSITY_G_PER_CM3).optional(),
       /** Optional order of addition: material ids; lines not listed follow in the default order. */
+      /** How the coat is applied, for the film predictions (optional). */
+      coating: coatingSpecSchema.optional(),
       additionOrder: z.array(nonEmptyString("addition order entry", "choose a material for each place in the addition order"), { error: required("addition order", "a list") }).optional(),
     },
     { error: required("formulation input", "an object") },
@@ -313,5 +384,7 @@ export type Basis = z.infer<typeof basisSchema>;
 export type Component = z.infer<typeof componentSchema>;
 /** A modifier line, see `modifierSpecSchema`. */
 export type ModifierSpec = z.infer<typeof modifierSpecSchema>;
+/** The coating method and its settings, see `coatingSpecSchema`. */
+export type CoatingSpec = z.infer<typeof coatingSpecSchema>;
 /** A process step, see `processStepSchema`. */
 export type ProcessStep = z.infer<typeof processStepSchema>;

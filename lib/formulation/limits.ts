@@ -37,3 +37,33 @@ export const DURATION_H = { min: 0, max: 1e5 } as const;
 
 /** Thermal safety margin, °C. */
 export const MARGIN_C = { min: 0, max: 1000 } as const;
+
+/** Refractive index n_D: from vacuum (1) to above the highest known solids (rutile ≈ 2.9, diamond 2.42; CRC Handbook). */
+export const REFRACTIVE_INDEX = { min: 1, max: 5 } as const;
+
+/** Equivalent weights (EEW, AHEW), g/eq: from small amines (≈ 15) to long prepolymers. */
+export const EQUIVALENT_WEIGHT_G_PER_EQ = { min: 1, max: 1e6 } as const;
+
+/** Price per kg as supplied, in the team's currency: 0 (free sample) to 10⁹. */
+export const PRICE_PER_KG = { min: 0, max: 1e9 } as const;
+
+/** Sol viscosity, mPa·s: below the thinnest solvents (diethyl ether 0.22) to a paste. */
+export const VISCOSITY_MPA_S = { min: 0.01, max: 1e6 } as const;
+
+/** Surface tension, mN/m: from fluorinated liquids (≈ 10) to mercury (485); 1 to 1000 admitted. */
+export const SURFACE_TENSION_MN_PER_M = { min: 1, max: 1000 } as const;
+
+/** Dip-coating withdrawal speed, mm/s (0.1 µm/s to 10 m/s). */
+export const WITHDRAWAL_MM_PER_S = { min: 1e-4, max: 1e4 } as const;
+
+/** Spin speed, rpm. */
+export const SPIN_RPM = { min: 1, max: 1e5 } as const;
+
+/** Dry film thickness, nm (a monolayer to 10 mm). */
+export const DRY_THICKNESS_NM = { min: 0.1, max: 1e7 } as const;
+
+/** Wet film thickness, µm (10 nm to 100 mm). */
+export const WET_THICKNESS_UM = { min: 0.01, max: 1e5 } as const;
+
+/** Coated area, m². */
+export const AREA_M2 = { min: 1e-6, max: 1e6 } as const;

@@ -2,8 +2,11 @@ import { z } from "zod";
 import {
   ASSAY,
   DENSITY_G_PER_CM3,
+  EQUIVALENT_WEIGHT_G_PER_EQ,
   MOLAR_MASS_G_PER_MOL,
   PER_MOLECULE,
+  PRICE_PER_KG,
+  REFRACTIVE_INDEX,
   RESIDUE_UNITS_PER_MOLECULE,
   TEMPERATURE_C,
 } from "./limits";
@@ -71,7 +74,9 @@ const HAZARD_CODE = /^(EUH|H)\d{3}[A-Za-z]{0,2}$/;
  * - networkAtomsPerMolecule: Si, Ti, Zr, Al, P atoms per molecule;
  * - hydrolysableGroupsPerMolecule: alkoxy groups per molecule;
  * - leavingAlcohol: alcohol released by hydrolysis (name, molar mass g/mol);
- * - conversionTemperatureC (°C): temperature needed to turn it into the stated residue.
+ * - conversionTemperatureC (°C): temperature needed to turn it into the stated residue;
+ * - residueRefractiveIndex (n_D, 589 nm, 20–25 °C): of the residue as it is in the dry coat
+ *   (amorphous, low-temperature hybrid), for the coat's refractive index.
  *
  * @example
  * ```ts
@@ -97,6 +102,7 @@ export const precursorDataSchema = z.object(
       )
       .optional(),
     conversionTemperatureC: rangedNumber("conversion temperature (°C)", TEMPERATURE_C).optional(),
+    residueRefractiveIndex: rangedNumber("residue refractive index", REFRACTIVE_INDEX).optional(),
   },
   { error: required("precursor data", "an object") },
 );
@@ -156,7 +162,12 @@ export const thermalDataSchema = z.object(
  * (including water of crystallisation); density g/cm³ as supplied;
  * phaseDensity g/cm³ of the dry organic phase; assay, waterFraction and
  * solventFraction are mass fractions of the material as supplied. For
- * polymers, `formula` is the repeat unit.
+ * polymers, `formula` is the repeat unit. For the coat's predictions:
+ * refractiveIndex (n_D, 589 nm, 20–25 °C) of an organic phase, a substrate or
+ * a modifier's bonded ligand; boilingPointC (°C at 101.3 kPa, for VOC);
+ * epoxyEquivalentWeight / amineHydrogenEquivalentWeight (g/eq of the active
+ * compound); pricePerKg (the team's price per kg as supplied, in the team's
+ * currency).
  *
  * @example
  * ```ts
@@ -194,6 +205,16 @@ export const materialSchema = z
       /** Moisture-sensitive and flammable like the alkoxides (default: a precursor with hydrolysable groups). */
       moistureSensitive: z.boolean({ error: "moisture-sensitive must be true or false" }).optional(),
       thermal: thermalDataSchema.optional(),
+      /** n_D (589 nm, 20–25 °C) of the organic phase, the substrate or a modifier's bonded ligand. */
+      refractiveIndex: rangedNumber("refractive index", REFRACTIVE_INDEX).optional(),
+      /** °C at 101.3 kPa (initial boiling point); decides what counts as VOC. */
+      boilingPointC: rangedNumber("boiling point (°C)", TEMPERATURE_C).optional(),
+      /** g of active compound per mol of epoxy groups (EEW). */
+      epoxyEquivalentWeight: rangedNumber("epoxy equivalent weight (g/eq)", EQUIVALENT_WEIGHT_G_PER_EQ).optional(),
+      /** g of active compound per mol of amine hydrogens (AHEW). */
+      amineHydrogenEquivalentWeight: rangedNumber("amine hydrogen equivalent weight (g/eq)", EQUIVALENT_WEIGHT_G_PER_EQ).optional(),
+      /** The team's price per kg as supplied, in the team's currency. */
+      pricePerKg: rangedNumber("price per kg", PRICE_PER_KG).optional(),
       hazards: z
         .array(
           z.string({ error: required("hazard statement", "text") }).regex(HAZARD_CODE, {

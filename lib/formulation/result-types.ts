@@ -176,6 +176,74 @@ export interface Notice {
   field?: string;
 }
 
+/**
+ * The coat's film (chemistry: "What the coat will be"), when the input states a coating method.
+ * Thicknesses: wet in µm, dry in nm.
+ */
+export interface CoatingResult {
+  method: "dip" | "spin" | "wetFilm";
+  /** φ_s = (S / ρ_th) / V_sol: dense dry solid per sol volume (dimensionless). */
+  solidVolumeFraction: number;
+  /** µm of wet film (dip: Landau–Levich; spin: back-computed from the dry film; wet film: as stated). */
+  wetThicknessUm: number;
+  /** nm of dry film, h_wet · φ_s / (1 − P). */
+  dryThicknessNm: number;
+  /** m² per litre of sol, no losses: 1000 / h_wet[µm]. */
+  coverageM2PerL: number;
+  /** mL of sol for the stated area, no losses. */
+  solMlForArea?: number;
+  /** Ca = η U / γ (dip only); Landau–Levich holds for Ca ≪ 1. */
+  capillaryNumber?: number;
+  /** mm/s that gives the target dry thickness (dip with a target). */
+  withdrawalMmPerSForTarget?: number;
+  /** rpm that gives the target dry thickness (spin with a target). */
+  rpmForTarget?: number;
+}
+
+/** The dry coat's refractive index (Lorentz–Lorenz, porosity as air), beside the substrate's. */
+export interface OpticsResult {
+  /** n_D of the dry coat. */
+  refractiveIndex: number;
+  /** n_D of the substrate, when it has one. */
+  substrateIndex?: number;
+  /** coat − substrate. */
+  mismatch?: number;
+}
+
+/** Volatile organic compounds the sol emits (EU 2004/42/EC definition). */
+export interface VocResult {
+  /** g of VOC for the batch, the hydrolysis alcohol included. */
+  massGrams: number;
+  /** g per litre of sol. */
+  gramsPerLitre: number;
+  /** g per litre of sol less water (ASTM D3960, US EPA Method 24). */
+  gramsPerLitreLessWater: number;
+  /** mL of water in the sol (added and carried). */
+  waterMl: number;
+}
+
+/** Epoxy–amine balance, when either group is present. */
+export interface CureResult {
+  /** mol of epoxy groups. */
+  epoxyEq: number;
+  /** mol of amine hydrogens. */
+  amineHydrogenEq: number;
+  /** amine-H eq / epoxy eq; absent when there are no epoxy groups. */
+  ratio?: number;
+}
+
+/** Cost of the batch in the team's currency, when every dispensed line has a price. */
+export interface CostResult {
+  /** For the whole batch. */
+  total: number;
+  /** Per kg of dry composite. */
+  perKgDry: number;
+  /** Per litre of sol. */
+  perLitreSol: number;
+  /** Per m² at the predicted coverage, when a coat is set. */
+  perM2?: number;
+}
+
 /** Everything computeFormulation derives from a FormulationInput. */
 export interface FormulationResult {
   engineVersion: string;
@@ -189,5 +257,15 @@ export interface FormulationResult {
   modifiers?: ModifierResult[];
   composite: CompositeResult;
   thermal: ThermalResult;
+  /** The film, when the input sets a coating method. */
+  coating?: CoatingResult;
+  /** The coat's refractive index, when every phase of the dry composite has one (otherwise a notice names those without). */
+  optics?: OpticsResult;
+  /** VOC of the sol (results stored before engine 2.1 lack it). */
+  voc?: VocResult;
+  /** Epoxy–amine balance, when an epoxy or amine equivalent weight is present. */
+  cure?: CureResult;
+  /** Cost, when every dispensed line has a price (otherwise a notice names those without). */
+  cost?: CostResult;
   notices: Notice[];
 }
