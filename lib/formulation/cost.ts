@@ -52,6 +52,7 @@ export function batchCost(
   }
   if (priced === 0) return { notices: [] };
   if (unpriced.length > 0) {
+    unpriced.sort((a, b) => a.index - b.index); // in the order of the materials list
     return {
       notices: [
         {

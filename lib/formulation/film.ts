@@ -34,7 +34,7 @@ export interface FilmSol {
  * @returns wet thickness in µm and Ca (dimensionless)
  * @example
  * ```ts
- * // η 2 mPa·s, U 1 mm/s, γ 22 mN/m, ρ 0.85 g/cm³ → h ≈ 2.01 µm, Ca ≈ 9.1e-5
+ * // η 2 mPa·s, U 1 mm/s, γ 22 mN/m, ρ 0.85 g/cm³ → h ≈ 3.0875 µm, Ca ≈ 9.09e-5
  * landauLevich(dec(2), dec(1), dec(22), dec(0.85)).wetUm.toNumber();
  * ```
  */
