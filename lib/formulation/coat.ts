@@ -51,11 +51,12 @@ export function addCoatPredictions(result: FormulationResult, context: CoatConte
   const { input, byId, lines, solidMass, solVolume } = context;
   const notices = result.notices;
   const porosity = result.composite.porosity === undefined ? ZERO : dec(result.composite.porosity);
+  const theoreticalDensity = dec(result.composite.theoreticalDensity);
 
   let coverage: Dec | undefined;
   if (input.coating) {
     // φ_s = (S / ρ_th) / V_sol; ρ of the sol = sol mass / sol volume
-    const solidVolumeFraction = solidMass.div(dec(result.composite.theoreticalDensity)).div(solVolume);
+    const solidVolumeFraction = solidMass.div(theoreticalDensity).div(solVolume);
     const film = filmPrediction(input.coating, { solidVolumeFraction, porosity, densityGPerCm3: context.solMass.div(solVolume) });
     result.coating = film.coating;
     coverage = dec(film.coating.coverageM2PerL);
@@ -63,7 +64,7 @@ export function addCoatPredictions(result: FormulationResult, context: CoatConte
   }
 
   const substrate = input.substrateId === undefined ? undefined : byId.get(input.substrateId);
-  const optics = coatOptics(context.phases, byId, porosity, substrate, input.coating !== undefined);
+  const optics = coatOptics(context.phases, byId, porosity, theoreticalDensity, substrate, input.coating !== undefined);
   if (optics.optics) result.optics = optics.optics;
   notices.push(...optics.notices);
 

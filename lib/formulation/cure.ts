@@ -1,8 +1,21 @@
 import type { DecLine } from "./composition";
 import { CURE_RATIO_RANGE } from "./constants";
-import { type Dec, dec, timesFactor, toNumber, ZERO } from "./decimal";
+import { type Dec, dec, ONE, timesFactor, toNumber, ZERO } from "./decimal";
 import type { IndexedMaterial } from "./material-index";
 import type { CureResult, Notice } from "./result-types";
+
+const reciprocals = new Map<number, Dec>();
+
+/** 1 / equivalent weight (eq/g), memoised: equivalent weights recur on every call. */
+function perGram(equivalentWeight: number): Dec {
+  let value = reciprocals.get(equivalentWeight);
+  if (value === undefined) {
+    if (reciprocals.size >= 1000) reciprocals.clear();
+    value = ONE.div(dec(equivalentWeight));
+    reciprocals.set(equivalentWeight, value);
+  }
+  return value;
+}
 
 /**
  * Active mass of a line, g: the organic phase's dry mass, else the mass as
@@ -42,8 +55,8 @@ export function cureBalance(lines: readonly DecLine[], byId: Map<string, Indexed
     if (eew === undefined && ahew === undefined) continue;
     any = true;
     const active = activeGrams(line, material.assay);
-    if (eew !== undefined) epoxy = epoxy.plus(active.div(dec(eew)));
-    if (ahew !== undefined) amine = amine.plus(active.div(dec(ahew)));
+    if (eew !== undefined) epoxy = epoxy.plus(active.times(perGram(eew)));
+    if (ahew !== undefined) amine = amine.plus(active.times(perGram(ahew)));
   }
   if (!any) return { notices: [] };
   const cure: CureResult = { epoxyEq: toNumber(epoxy), amineHydrogenEq: toNumber(amine) };
@@ -57,7 +70,7 @@ export function cureBalance(lines: readonly DecLine[], byId: Map<string, Indexed
         code: "epoxy_amine_unbalanced",
         field: "components",
         message:
-          `Amine hydrogens and epoxy groups are in the ratio ${ratio.toFixed(2)} : 1, outside ${CURE_RATIO_RANGE.min}–${CURE_RATIO_RANGE.max}: ` +
+          `Amine hydrogens and epoxy groups are in the ratio ${toNumber(ratio).toFixed(2)} : 1, outside ${CURE_RATIO_RANGE.min}–${CURE_RATIO_RANGE.max}: ` +
           `${ratio.lessThan(1) ? "epoxy groups will be left unreacted" : "amine will be left unreacted"}, and the cured network ` +
           `is softer and less resistant than at a balanced ratio.`,
       });

@@ -1,5 +1,5 @@
 import { CAPILLARY_NUMBER_LIMIT, LANDAU_LEVICH_PREFACTOR, ML_PER_L, STANDARD_GRAVITY_M_PER_S2 } from "./constants";
-import { cubeRoot, type Dec, dec, ONE, toNumber } from "./decimal";
+import { cubeRoot, type Dec, dec, ONE, squareRoot, toNumber } from "./decimal";
 import type { CoatingSpec } from "./input-schema";
 import type { CoatingResult, Notice } from "./result-types";
 
@@ -44,7 +44,7 @@ export function landauLevich(viscosityMPaS: Dec, withdrawalMmPerS: Dec, surfaceT
   const rhoG = densityGPerCm3.times(KG_PER_M3_PER_G_PER_CM3).times(STANDARD_GRAVITY_M_PER_S2); // N/m³
   // (ηU)^(2/3) = ∛((ηU)²); γ^(1/6) = √(∛γ)
   const numerator = cubeRoot(etaU.times(etaU)).times(LANDAU_LEVICH_PREFACTOR);
-  const denominator = cubeRoot(gamma).sqrt().times(rhoG.sqrt());
+  const denominator = squareRoot(cubeRoot(gamma)).times(squareRoot(rhoG));
   return { wetUm: numerator.div(denominator).times(UM_PER_M), capillaryNumber: etaU.div(gamma) };
 }
 
@@ -72,7 +72,7 @@ export function dryFromWetNm(wetUm: Dec, solidVolumeFraction: Dec, porosity: Dec
  * ```
  */
 export function spinDryNm(rpm: Dec, calibrationRpm: Dec, calibrationNm: Dec): Dec {
-  return calibrationNm.times(calibrationRpm.div(rpm).sqrt());
+  return calibrationNm.times(squareRoot(calibrationRpm.div(rpm)));
 }
 
 function capillaryNotice(ca: Dec, field: string, what: string): Notice[] {
@@ -126,9 +126,10 @@ export function filmPrediction(spec: CoatingSpec, sol: FilmSol): { coating: Coat
     notices.push(...capillaryNotice(ll.capillaryNumber, "coating.withdrawalMmPerS", "At this withdrawal speed"));
     if (target) {
       const x = target.div(dryNm);
-      const targetSpeed = speed.times(x).times(x.sqrt());
+      const x32 = x.times(squareRoot(x)); // (h_t / h_dry)^(3/2)
+      const targetSpeed = speed.times(x32);
       extra.withdrawalMmPerSForTarget = toNumber(targetSpeed);
-      notices.push(...capillaryNotice(ll.capillaryNumber.times(x).times(x.sqrt()), "coating.targetDryThicknessNm", "At the speed for the target thickness"));
+      notices.push(...capillaryNotice(ll.capillaryNumber.times(x32), "coating.targetDryThicknessNm", "At the speed for the target thickness"));
     }
   } else if (spec.method === "spin") {
     const calibrationRpm = dec(spec.calibration.rpm);

@@ -1,6 +1,6 @@
 import type { PhaseInput } from "./composite";
 import { FRINGE_INDEX_MISMATCH } from "./constants";
-import { type Dec, dec, ONE, toNumber, ZERO } from "./decimal";
+import { type Dec, dec, ONE, squareRoot, toNumber, ZERO } from "./decimal";
 import type { IndexedMaterial } from "./material-index";
 import type { Material } from "./material-schema";
 import type { Notice, OpticsResult } from "./result-types";
@@ -38,7 +38,25 @@ export function lorentzLorenzTerm(n: number): Dec {
  * ```
  */
 export function indexFromTerm(term: Dec): Dec {
-  return ONE.plus(term.times(2)).div(ONE.minus(term)).sqrt();
+  return squareRoot(ONE.plus(term.times(2)).div(ONE.minus(term)));
+}
+
+const perDensityCache = new Map<string, Dec>();
+
+/**
+ * L(n) / ρ for a phase of index n and density ρ (cm³/g), memoised: with it the
+ * volume-weighted sum Σ φ_k L_k = ρ_th · Σ w_k · L(n_k) / ρ_k takes one
+ * multiplication per phase (the phases' constants recur on every call).
+ */
+function termPerDensity(index: number, density: Dec, densityValue: number): Dec {
+  const key = `${index}|${densityValue}`;
+  let value = perDensityCache.get(key);
+  if (value === undefined) {
+    if (perDensityCache.size >= TERM_CACHE_LIMIT) perDensityCache.clear();
+    value = lorentzLorenzTerm(index).div(density);
+    perDensityCache.set(key, value);
+  }
+  return value;
 }
 
 /**
@@ -98,18 +116,20 @@ function indexPath(entry: IndexedMaterial): string {
  * @param phases - phases of the dry composite, with weight fractions and dry densities
  * @param byId - the indexed materials
  * @param porosity - P (0 when no bulk density is known)
+ * @param theoreticalDensity - ρ_th of the dense dry composite, g/cm³ (1 / Σ w_k / ρ_k)
  * @param substrate - the substrate, when one is set
  * @param coatingSet - whether the input states a coating method
  * @returns the optics figures (or none) and notices
  * @example
  * ```ts
- * coatOptics(phases, byId, ZERO, byId.get("polycarbonate"), true).optics?.mismatch;
+ * coatOptics(phases, byId, ZERO, dec(1.6), byId.get("polycarbonate"), true).optics?.mismatch;
  * ```
  */
 export function coatOptics(
   phases: readonly PhaseInput[],
   byId: Map<string, IndexedMaterial>,
   porosity: Dec,
+  theoreticalDensity: Dec,
   substrate: IndexedMaterial | undefined,
   coatingSet: boolean,
 ): { optics?: OpticsResult; notices: Notice[] } {
@@ -117,7 +137,6 @@ export function coatOptics(
   let weightedTerm = ZERO;
   let known = 0;
   const missing: { name: string; path: string }[] = [];
-  let totalSpecificVolume = ZERO;
   for (const phase of phases) {
     if (phase.weightFraction.isZero()) continue;
     const entry = byId.get(phase.materialId);
@@ -127,9 +146,7 @@ export function coatOptics(
       missing.push({ name: phaseName(entry.material, phase), path: indexPath(entry) });
       continue;
     }
-    const specificVolume = phase.weightFraction.div(phase.density);
-    totalSpecificVolume = totalSpecificVolume.plus(specificVolume);
-    weightedTerm = weightedTerm.plus(specificVolume.times(lorentzLorenzTerm(index)));
+    weightedTerm = weightedTerm.plus(phase.weightFraction.times(termPerDensity(index, phase.density, phase.densityValue)));
     known += 1;
   }
   if (missing.length > 0) {
@@ -148,24 +165,24 @@ export function coatOptics(
     };
   }
   if (known === 0) return { notices: [] };
-  // Σ φ_k L_k with φ_k = (w_k/ρ_k) / Σ(w_j/ρ_j): one division for all phases
-  const term = weightedTerm.div(totalSpecificVolume);
+  // Σ φ_k L_k = ρ_th · Σ w_k L_k / ρ_k, since φ_k = (w_k/ρ_k) · ρ_th
+  const term = weightedTerm.times(theoreticalDensity);
   const n = indexFromTerm(porosity.isZero() ? term : term.times(ONE.minus(porosity)));
   const optics: OpticsResult = { refractiveIndex: toNumber(n) };
   const notices: Notice[] = [];
   if (substrateIndex !== undefined && substrate) {
-    const mismatch = n.minus(dec(substrateIndex));
+    const mismatch = toNumber(n.minus(dec(substrateIndex)));
     optics.substrateIndex = substrateIndex;
-    optics.mismatch = toNumber(mismatch);
-    if (mismatch.abs().greaterThan(FRINGE_INDEX_MISMATCH)) {
+    optics.mismatch = mismatch;
+    if (Math.abs(mismatch) > FRINGE_INDEX_MISMATCH) {
       notices.push({
         level: "caution",
         code: "index_mismatch_fringes",
         field: "substrateId",
         message:
-          `The coat's refractive index ${n.toFixed(3)} differs from ${substrate.material.name}'s ${substrateIndex} by ${mismatch.toFixed(3)}: ` +
-          `beyond about ±${FRINGE_INDEX_MISMATCH} a coat on a transparent substrate shows interference fringes. ` +
-          `${mismatch.isNegative() ? "A higher-index phase (titania, zirconia)" : "A lower-index phase (silica, an organosilane)"} would bring it closer.`,
+          `The coat's refractive index ${optics.refractiveIndex.toFixed(3)} differs from ${substrate.material.name}'s ${substrateIndex} by ` +
+          `${mismatch > 0 ? "+" : ""}${mismatch.toFixed(3)}: beyond about ±${FRINGE_INDEX_MISMATCH} a coat on a transparent substrate shows interference fringes. ` +
+          `${mismatch < 0 ? "A higher-index phase (titania, zirconia)" : "A lower-index phase (silica, an organosilane)"} would bring it closer.`,
       });
     }
   }

@@ -118,10 +118,11 @@ export function vocFigures(inputs: VocInputs): { voc: VocResult; notices: Notice
         `(${Number(inputs.solVolumeMl.toPrecision(4))} mL): check the densities of the water and of the aqueous stocks`,
     );
   }
+  const gramsTimesMlPerL = grams.times(ML_PER_L);
   const voc: VocResult = {
     massGrams: toNumber(grams),
-    gramsPerLitre: toNumber(grams.times(ML_PER_L).div(inputs.solVolumeMl)),
-    gramsPerLitreLessWater: toNumber(grams.times(ML_PER_L).div(lessWaterMl)),
+    gramsPerLitre: toNumber(gramsTimesMlPerL.div(inputs.solVolumeMl)),
+    gramsPerLitreLessWater: toNumber(gramsTimesMlPerL.div(lessWaterMl)),
     waterMl: toNumber(waterMl),
   };
   const notices: Notice[] = [];
