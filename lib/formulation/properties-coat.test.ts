@@ -109,8 +109,8 @@ describe("coat predictions: properties", () => {
     fc.assert(
       fc.property(
         fc.array(fc.record({ share: fc.double({ min: 0.01, max: 1, noNaN: true }), index: fc.double({ min: 1.3, max: 2.6, noNaN: true }) }), { minLength: 1, maxLength: 5 }),
-        fc.double({ min: 0, max: 0.98, noNaN: true }),
-        fc.double({ min: 0.001, max: 0.02, noNaN: true }),
+        fc.double({ min: 0, max: 0.95, noNaN: true }),
+        fc.double({ min: 0.001, max: 0.02, noNaN: true }), // porosity + step ≤ 0.97: some solid is left
         (phases, porosity, step) => {
           const total = phases.reduce((s, p) => s + p.share, 0);
           const parts = phases.map((p) => ({ volumeFraction: dec(p.share / total), index: p.index }));
