@@ -187,15 +187,22 @@ export function readCoatingSheet(
     const why = method === "spin" && key !== "rpm" ? " (spin coating is calibrated on one measured film: its spin speed and dry thickness)" : "";
     at(entry?.at ?? methodAt, `${label} (${unit.replace(/\s*\(.*\)$/, "")}) is required for ${COATING_METHOD_LABELS[method]} coating${why}.`);
   }
-  if (problems.slice(before).some((x) => x.level === "error")) return undefined;
-
+  // The schema's range checks, each at its own cell; a setting already reported (missing, not a number) is not reported again.
+  const earlierErrors = problems.slice(before).some((x) => x.level === "error");
   const parsed = coatingSpecSchema.safeParse(spec);
-  if (parsed.success) return parsed.data;
+  if (parsed.success) return earlierErrors ? undefined : parsed.data;
   for (const issue of parsed.error.issues) {
     const path = issue.path.map(String).join(".");
     const key = (Object.keys(PATHS) as CoatingSettingKey[]).find((k) => PATHS[k] === path);
-    const loc = (key && found.get(key)?.at) ?? methodAt;
-    at(loc, `${issue.message.charAt(0).toUpperCase()}${issue.message.slice(1)}.`);
+    const read = key !== undefined && readPath(spec, PATHS[key]) !== undefined;
+    if (read) at(found.get(key)!.at, `${issue.message.charAt(0).toUpperCase()}${issue.message.slice(1)}.`);
+    else if (!earlierErrors) at(methodAt, `${issue.message.charAt(0).toUpperCase()}${issue.message.slice(1)}.`);
   }
   return undefined;
+}
+
+function readPath(target: Record<string, unknown>, path: string): unknown {
+  const [head, tail] = path.split(".") as [string, string | undefined];
+  const value = target[head];
+  return tail === undefined ? value : (value as Record<string, unknown> | undefined)?.[tail];
 }
