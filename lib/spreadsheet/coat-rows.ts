@@ -86,9 +86,10 @@ function filmRows(coating: CoatingSpec, film: FormulationResult["coating"]): Coa
 function vocRows(voc: FormulationResult["voc"]): CoatRow[] {
   if (!voc) return [];
   return [
-    ...row("VOC", voc.gramsPerLitre, "g per litre of sol"),
-    ...row("VOC less water", voc.gramsPerLitreLessWater, "g per litre of sol less water (ASTM D3960, US EPA Method 24)"),
-    ...row("VOC in the batch", voc.massGrams, "g (solvents, volatile catalysts and modifiers, and the alcohol hydrolysis releases)"),
+    ...row("VOC", voc.gramsPerLitre, "g/L of sol"),
+    // The basis of ASTM D3960 and US EPA Method 24: g per litre of sol less its water.
+    ...row("VOC less water", voc.gramsPerLitreLessWater, "g/L of sol less water"),
+    ...row("VOC in the batch (hydrolysis alcohol included)", voc.massGrams, "g"),
   ];
 }
 

@@ -270,9 +270,9 @@ describe("batch sheet exports with a coating", () => {
     expect(line("Target dry thickness")).toEqual(["Target dry thickness", "2500", "nm"]);
     expect(line("Area to coat")).toEqual(["Area to coat", "0.125", "m²"]);
     expect(line("Sol needed for the area (no losses)")).toEqual(["Sol needed for the area (no losses)", "3.93", "mL"]);
-    expect(line("VOC")).toEqual(["VOC", "712", "g per litre of sol"]);
-    expect(line("VOC less water")?.slice(0, 2)).toEqual(["VOC less water", "746"]);
-    expect(line("VOC less water")?.[2]).toContain("g per litre of sol less water");
+    expect(line("VOC")).toEqual(["VOC", "712", "g/L of sol"]);
+    expect(line("VOC less water")).toEqual(["VOC less water", "746", "g/L of sol less water"]);
+    expect(line("VOC in the batch (hydrolysis alcohol included)")).toEqual(["VOC in the batch (hydrolysis alcohol included)", "351", "g"]);
   });
 
   it("writes the same table as a Coating and VOC sheet with exact numeric values and a number format per row", () => {
@@ -304,7 +304,7 @@ describe("batch sheet exports with a coating", () => {
       const bare = uncoated(coatedInput(DIP));
       const vocOnly = parseCsv(batchSheetCsv(revision(bare, statedResult(bare, { voc: VOC })))).rows;
       const start = vocOnly.findIndex((r) => r[0] === "[Coating and VOC]");
-      expect(vocOnly.slice(start + 2).map((r) => r[0])).toEqual(["VOC", "VOC less water", "VOC in the batch"]);
+      expect(vocOnly.slice(start + 2).map((r) => r[0])).toEqual(["VOC", "VOC less water", "VOC in the batch (hydrolysis alcohol included)"]);
       const none = revision(bare, statedResult(bare, {}));
       const csv = batchSheetCsv(none);
       expect(csv).not.toContain("Coating");
@@ -343,7 +343,7 @@ describe("revision workbook coat predictions", () => {
     expect(line("Refractive index of the substrate")).toEqual(["Refractive index of the substrate", 1.586, "n_D, 589 nm"]);
     // |−0.0737| > 0.01: fringes on a transparent substrate (chemistry.md, common practice, from memory).
     expect(line("Index mismatch, coat − substrate")).toEqual(["Index mismatch, coat − substrate", -0.0737, "more than 0.01: interference fringes likely on a transparent substrate"]);
-    expect(line("VOC")).toEqual(["VOC", 712.468, "g per litre of sol"]);
+    expect(line("VOC")).toEqual(["VOC", 712.468, "g/L of sol"]);
     expect(line("VOC less water")?.[1]).toBe(745.5);
     // 0.697 is outside 0.8–1.2 (Lee & Neville, 1967).
     expect(line("Epoxy–amine ratio")).toEqual(["Epoxy–amine ratio", 0.697, "amine-H eq per epoxy eq: outside 0.8–1.2"]);
