@@ -105,10 +105,17 @@ function vocRows(voc: FormulationResult["voc"]): CoatRow[] {
  * ```
  */
 export function batchCoatRows(input: FormulationInput, result: FormulationResult | null): CoatRow[] {
-  const rows: CoatRow[] = [];
-  if (input.coating) rows.push(...settingRows(input.coating), ...filmRows(input.coating, result?.coating));
-  rows.push(...vocRows(result?.voc));
-  return rows;
+  return [...batchCoatingRows(input, result), ...vocRows(result?.voc)];
+}
+
+/** The coating part of `batchCoatRows` alone (empty without a coating). */
+export function batchCoatingRows(input: FormulationInput, result: FormulationResult | null): CoatRow[] {
+  return input.coating ? [...settingRows(input.coating), ...filmRows(input.coating, result?.coating)] : [];
+}
+
+/** The VOC part of `batchCoatRows` alone (empty for a result stored before VOC was computed). */
+export function batchVocRows(result: FormulationResult | null): CoatRow[] {
+  return vocRows(result?.voc);
 }
 
 function costUnit(currency: string | undefined, per: string): string {
