@@ -51,6 +51,21 @@ const SRC = {
   ghsNone: "not classified as hazardous by common suppliers (from memory); check the supplier's safety data sheet",
   cas: "CAS Registry Number (from memory; check digit verified in tests)",
   repeatUnit: "repeat unit of the polymer",
+  boilingPoint: "CRC Handbook of Chemistry and Physics, Physical Constants of Organic Compounds, normal boiling point at 101.3 kPa (from memory)",
+  silicaIndex:
+    "n_D of fused (amorphous) silica 1.4585 (Malitson, J. Opt. Soc. Am. 55 (1965) 1205, from memory); dense sol-gel silica comes close to it",
+  silsesquioxaneIndex:
+    "R-SiO1.5 units of organosilane hybrid coatings, n_D ≈ 1.42–1.50 by ellipsometry (from memory): methyl lowest, glycidoxy-, methacryloxy- and aminopropyl about 1.49",
+  amorphousTitaniaIndex:
+    "amorphous titania in hybrids cured below about 300 °C, n_D ≈ 1.9–2.1 (ellipsometry of sol-gel films, from memory); far below anatase (≈ 2.5) and rutile (≈ 2.7–2.9)",
+  amorphousZirconiaIndex:
+    "amorphous zirconia in hybrids cured below about 300 °C, n_D ≈ 1.7–1.9 (ellipsometry of sol-gel films, from memory); monoclinic zirconia ≈ 2.1–2.2",
+  amorphousAluminaIndex:
+    "amorphous (boehmite-like) alumina in hybrids cured below about 300 °C, n_D ≈ 1.55–1.62 (from memory); corundum 1.768",
+  polymerIndex: "n_D at 20–25 °C, Polymer Handbook, 4th ed. (Brandrup, Immergut, Grulke, 1999), typical value (from memory)",
+  ligandIndex:
+    "n_D of the liquid at 20 °C, CRC Handbook (from memory), taken for the bonded ligand phase: an estimate, chelates of titanium and zirconium are somewhat higher",
+  transparentSubstrate: "n_D at 20–25 °C, typical value (from memory); a substrate with an index is treated as transparent for the fringe check",
 } as const;
 
 /** Alcohols released by hydrolysis; molar masses from the formula (IUPAC/CIAAW 2021). */
@@ -95,6 +110,7 @@ const precursors: Material[] = [
     molarMass: 208.329,
     density: 0.933,
     precursor: {
+      residueRefractiveIndex: 1.4585,
       residueFormula: "SiO2",
       residueMolarMass: 60.083,
       residuePerMolecule: 1,
@@ -104,7 +120,7 @@ const precursors: Material[] = [
       leavingAlcohol: ALCOHOL.ethanol,
     },
     hazards: ["H226", "H319", "H332", "H335"],
-    sources: { ...alkoxideSources, density: SRC.crcOrganic, "precursor.residueDensity": SRC.fusedSilica },
+    sources: { ...alkoxideSources, density: SRC.crcOrganic, "precursor.residueDensity": SRC.fusedSilica, "precursor.residueRefractiveIndex": SRC.silicaIndex },
   },
   {
     id: "tmos",
@@ -115,6 +131,7 @@ const precursors: Material[] = [
     molarMass: 152.221,
     density: 1.032,
     precursor: {
+      residueRefractiveIndex: 1.4585,
       residueFormula: "SiO2",
       residueMolarMass: 60.083,
       residuePerMolecule: 1,
@@ -124,7 +141,7 @@ const precursors: Material[] = [
       leavingAlcohol: ALCOHOL.methanol,
     },
     hazards: ["H226", "H318", "H330"],
-    sources: { ...alkoxideSources, density: SRC.supplierDensity, "precursor.residueDensity": SRC.fusedSilica },
+    sources: { ...alkoxideSources, density: SRC.supplierDensity, "precursor.residueDensity": SRC.fusedSilica, "precursor.residueRefractiveIndex": SRC.silicaIndex },
   },
   {
     id: "mtes",
@@ -135,6 +152,7 @@ const precursors: Material[] = [
     molarMass: 178.303,
     density: 0.895,
     precursor: {
+      residueRefractiveIndex: 1.42,
       residueFormula: "(CH3)SiO1.5",
       residueMolarMass: 67.1185,
       residuePerMolecule: 1,
@@ -144,7 +162,7 @@ const precursors: Material[] = [
       leavingAlcohol: ALCOHOL.ethanol,
     },
     hazards: ["H226"],
-    sources: { ...ormosilSources, density: SRC.supplierDensity },
+    sources: { ...ormosilSources, density: SRC.supplierDensity, "precursor.residueRefractiveIndex": SRC.silsesquioxaneIndex },
   },
   {
     id: "mtms",
@@ -155,6 +173,7 @@ const precursors: Material[] = [
     molarMass: 136.222,
     density: 0.955,
     precursor: {
+      residueRefractiveIndex: 1.42,
       residueFormula: "(CH3)SiO1.5",
       residueMolarMass: 67.1185,
       residuePerMolecule: 1,
@@ -164,7 +183,7 @@ const precursors: Material[] = [
       leavingAlcohol: ALCOHOL.methanol,
     },
     hazards: ["H225"],
-    sources: { ...ormosilSources, density: SRC.supplierDensity },
+    sources: { ...ormosilSources, density: SRC.supplierDensity, "precursor.residueRefractiveIndex": SRC.silsesquioxaneIndex },
   },
   {
     id: "gptms",
@@ -175,6 +194,7 @@ const precursors: Material[] = [
     molarMass: 236.339,
     density: 1.07,
     precursor: {
+      residueRefractiveIndex: 1.49,
       // R = glycidoxypropyl C6H11O2; residue R-SiO1.5 = C6H11O3.5Si
       residueFormula: "(C6H11O2)SiO1.5",
       residueMolarMass: 167.2355,
@@ -184,8 +204,9 @@ const precursors: Material[] = [
       hydrolysableGroupsPerMolecule: 3,
       leavingAlcohol: ALCOHOL.methanol,
     },
+    epoxyEquivalentWeight: 236.339,
     hazards: ["H318"],
-    sources: { ...ormosilSources, density: SRC.supplierDensity },
+    sources: { ...ormosilSources, density: SRC.supplierDensity, "precursor.residueRefractiveIndex": SRC.silsesquioxaneIndex, epoxyEquivalentWeight: "one epoxy group per molecule: EEW = molar mass (Lee & Neville, Handbook of Epoxy Resins, 1967)" },
   },
   {
     id: "maptms",
@@ -196,6 +217,7 @@ const precursors: Material[] = [
     molarMass: 248.35,
     density: 1.045,
     precursor: {
+      residueRefractiveIndex: 1.49,
       // R = methacryloxypropyl C7H11O2; residue R-SiO1.5 = C7H11O3.5Si
       residueFormula: "(C7H11O2)SiO1.5",
       residueMolarMass: 179.2465,
@@ -206,7 +228,7 @@ const precursors: Material[] = [
       leavingAlcohol: ALCOHOL.methanol,
     },
     hazards: [],
-    sources: { ...ormosilSources, density: SRC.supplierDensity, hazards: SRC.ghsNone },
+    sources: { ...ormosilSources, density: SRC.supplierDensity, hazards: SRC.ghsNone, "precursor.residueRefractiveIndex": SRC.silsesquioxaneIndex },
   },
   {
     id: "aptes",
@@ -217,6 +239,7 @@ const precursors: Material[] = [
     molarMass: 221.372,
     density: 0.946,
     precursor: {
+      residueRefractiveIndex: 1.49,
       // R = aminopropyl C3H8N; residue R-SiO1.5 = C3H8NO1.5Si
       residueFormula: "(C3H8N)SiO1.5",
       residueMolarMass: 110.1875,
@@ -226,8 +249,9 @@ const precursors: Material[] = [
       hydrolysableGroupsPerMolecule: 3,
       leavingAlcohol: ALCOHOL.ethanol,
     },
+    amineHydrogenEquivalentWeight: 110.686,
     hazards: ["H302", "H314", "H317"],
-    sources: { ...ormosilSources, density: SRC.supplierDensity },
+    sources: { ...ormosilSources, density: SRC.supplierDensity, "precursor.residueRefractiveIndex": SRC.silsesquioxaneIndex, amineHydrogenEquivalentWeight: "two amine hydrogens per primary amine: AHEW = 221.372 / 2 (Lee & Neville, Handbook of Epoxy Resins, 1967)" },
   },
   {
     id: "vtes",
@@ -238,6 +262,7 @@ const precursors: Material[] = [
     molarMass: 190.314,
     density: 0.903,
     precursor: {
+      residueRefractiveIndex: 1.45,
       // R = vinyl C2H3; residue R-SiO1.5 = C2H3O1.5Si
       residueFormula: "(C2H3)SiO1.5",
       residueMolarMass: 79.1295,
@@ -248,7 +273,7 @@ const precursors: Material[] = [
       leavingAlcohol: ALCOHOL.ethanol,
     },
     hazards: ["H226", "H332"],
-    sources: { ...ormosilSources, density: SRC.supplierDensity },
+    sources: { ...ormosilSources, density: SRC.supplierDensity, "precursor.residueRefractiveIndex": SRC.silsesquioxaneIndex },
   },
   {
     id: "ti-isopropoxide",
@@ -259,6 +284,7 @@ const precursors: Material[] = [
     molarMass: 284.219,
     density: 0.96,
     precursor: {
+      residueRefractiveIndex: 1.95,
       residueFormula: "TiO2",
       residueMolarMass: 79.865,
       residuePerMolecule: 1,
@@ -269,7 +295,7 @@ const precursors: Material[] = [
     },
     fastHydrolysing: true,
     hazards: ["H226", "H319", "H336"],
-    sources: { ...alkoxideSources, density: SRC.supplierDensity, "precursor.residueDensity": SRC.amorphousTitania, fastHydrolysing: SRC.fastHydrolysis },
+    sources: { ...alkoxideSources, density: SRC.supplierDensity, "precursor.residueDensity": SRC.amorphousTitania, fastHydrolysing: SRC.fastHydrolysis, "precursor.residueRefractiveIndex": SRC.amorphousTitaniaIndex },
   },
   {
     id: "ti-butoxide",
@@ -280,6 +306,7 @@ const precursors: Material[] = [
     molarMass: 340.327,
     density: 1.0,
     precursor: {
+      residueRefractiveIndex: 1.95,
       residueFormula: "TiO2",
       residueMolarMass: 79.865,
       residuePerMolecule: 1,
@@ -290,7 +317,7 @@ const precursors: Material[] = [
     },
     fastHydrolysing: true,
     hazards: ["H226", "H315", "H318", "H335", "H336"],
-    sources: { ...alkoxideSources, density: SRC.supplierDensity, "precursor.residueDensity": SRC.amorphousTitania, fastHydrolysing: SRC.fastHydrolysis },
+    sources: { ...alkoxideSources, density: SRC.supplierDensity, "precursor.residueDensity": SRC.amorphousTitania, fastHydrolysing: SRC.fastHydrolysis, "precursor.residueRefractiveIndex": SRC.amorphousTitaniaIndex },
   },
   {
     id: "zr-propoxide-70",
@@ -303,6 +330,7 @@ const precursors: Material[] = [
     assay: 0.7,
     solventFraction: 0.3,
     precursor: {
+      residueRefractiveIndex: 1.8,
       residueFormula: "ZrO2",
       residueMolarMass: 123.222,
       residuePerMolecule: 1,
@@ -315,6 +343,7 @@ const precursors: Material[] = [
     fastHydrolysing: true,
     hazards: ["H225", "H318", "H336"],
     sources: {
+      "precursor.residueRefractiveIndex": SRC.amorphousZirconiaIndex,
       ...alkoxideSources,
       density: "supplier data sheet value for the 70 wt% solution, 25 °C (from memory)",
       assay: "nominal concentration of the commercial solution",
@@ -333,6 +362,7 @@ const precursors: Material[] = [
     molarMass: 246.327,
     density: 0.967,
     precursor: {
+      residueRefractiveIndex: 1.58,
       residueFormula: "Al2O3",
       residueMolarMass: 101.961,
       residuePerMolecule: 0.5,
@@ -343,7 +373,7 @@ const precursors: Material[] = [
     },
     fastHydrolysing: true,
     hazards: ["H226", "H315", "H318"],
-    sources: { ...alkoxideSources, density: SRC.supplierDensity, "precursor.residueDensity": SRC.amorphousAlumina, fastHydrolysing: SRC.fastHydrolysis },
+    sources: { ...alkoxideSources, density: SRC.supplierDensity, "precursor.residueDensity": SRC.amorphousAlumina, fastHydrolysing: SRC.fastHydrolysis, "precursor.residueRefractiveIndex": SRC.amorphousAluminaIndex },
   },
   {
     id: "triethyl-phosphate",
@@ -354,6 +384,7 @@ const precursors: Material[] = [
     molarMass: 182.156,
     density: 1.072,
     precursor: {
+      residueRefractiveIndex: 1.5,
       residueFormula: "P2O5",
       residueMolarMass: 141.943,
       residuePerMolecule: 0.5,
@@ -365,6 +396,7 @@ const precursors: Material[] = [
     moistureSensitive: false,
     hazards: ["H302", "H319"],
     sources: {
+      "precursor.residueRefractiveIndex": "vitreous P2O5, n_D ≈ 1.49–1.51 (from memory); in a silicate or hybrid network it mixes with the silica",
       ...alkoxideSources,
       density: SRC.crcOrganic,
       "precursor.residueDensity": SRC.phosphorusPentoxide,
@@ -381,6 +413,7 @@ const precursors: Material[] = [
     density: 1.896,
     crystalWaterPerFormula: 4,
     precursor: {
+      residueRefractiveIndex: 1.838,
       residueFormula: "CaO",
       residueMolarMass: 56.077,
       residuePerMolecule: 1,
@@ -391,6 +424,7 @@ const precursors: Material[] = [
     },
     hazards: ["H272", "H302", "H318"],
     sources: {
+      "precursor.residueRefractiveIndex": "CaO, n_D 1.838, CRC Handbook of Chemistry and Physics, Physical Constants of Inorganic Compounds (from memory)",
       formula: "composition of the tetrahydrate",
       molarMass: SRC.ciaaw,
       density: "CRC Handbook of Chemistry and Physics, Physical Constants of Inorganic Compounds (from memory)",
@@ -418,6 +452,7 @@ const precursors: Material[] = [
     assay: 0.3,
     waterFraction: 0.7,
     precursor: {
+      residueRefractiveIndex: 1.4585,
       residueFormula: "SiO2",
       residueMolarMass: 60.083,
       residuePerMolecule: 1,
@@ -427,6 +462,7 @@ const precursors: Material[] = [
     },
     hazards: [],
     sources: {
+      "precursor.residueRefractiveIndex": SRC.silicaIndex,
       formula: "described per SiO2 unit (chemistry: colloidal and oligomeric precursors)",
       molarMass: SRC.ciaaw,
       density: "typical data sheet value of 30 wt% aqueous silica sols, 20 °C (from memory)",
@@ -451,6 +487,7 @@ const precursors: Material[] = [
     molarMass: 149.031,
     density: 1.05,
     precursor: {
+      residueRefractiveIndex: 1.4585,
       residueFormula: "SiO2",
       residueMolarMass: 60.083,
       residuePerMolecule: 1,
@@ -462,6 +499,7 @@ const precursors: Material[] = [
     moistureSensitive: true,
     hazards: ["H226", "H319", "H332", "H335"],
     sources: {
+      "precursor.residueRefractiveIndex": SRC.silicaIndex,
       formula:
         "average Si unit SiO0.8(OC2H5)2.4 of a 40 % grade: 2.4 ethoxy groups per Si (supplier figure, from memory); 60.083 / 149.03 = 40.3 wt% SiO2",
       molarMass: SRC.ciaaw,
@@ -502,8 +540,10 @@ const organics: Material[] = [
     formula: "C2H4O",
     density: 1.2,
     thermal: { glassTransitionC: -67, meltingC: 52, degradationOnsetC: 180, degradationOnsetInertC: 340 },
+    refractiveIndex: 1.46,
     hazards: [],
     sources: {
+      refractiveIndex: SRC.polymerIndex,
       ...polymerSources,
       density: "solid PEG 2000, typical value (from memory)",
       "thermal.glassTransitionC": "poly(ethylene oxide), " + SRC.polymerHandbook,
@@ -521,8 +561,9 @@ const organics: Material[] = [
     formula: "C2H4O",
     density: 1.27,
     thermal: pvaThermal,
+    refractiveIndex: 1.5,
     hazards: [],
-    sources: { ...polymerSources },
+    sources: { ...polymerSources, refractiveIndex: SRC.polymerIndex },
   },
   {
     id: "pva-10-aq",
@@ -534,8 +575,10 @@ const organics: Material[] = [
     waterFraction: 0.9,
     phaseDensity: 1.27,
     thermal: pvaThermal,
+    refractiveIndex: 1.5,
     hazards: [],
     sources: {
+      refractiveIndex: "dry PVA, " + SRC.polymerIndex,
       ...polymerSources,
       casNumber: "none: a solution prepared in the lab",
       density: "10 wt% aqueous PVA solution, typical value (from memory)",
@@ -552,8 +595,9 @@ const organics: Material[] = [
     formula: "C6H10O2",
     density: 1.145,
     thermal: { glassTransitionC: -60, meltingC: 60, degradationOnsetC: 350 },
+    refractiveIndex: 1.465,
     hazards: [],
-    sources: { ...polymerSources },
+    sources: { ...polymerSources, refractiveIndex: SRC.polymerIndex },
   },
   {
     id: "pdms-silanol",
@@ -565,8 +609,9 @@ const organics: Material[] = [
     // No melting point given: the silanol-terminated oil is an amorphous liquid above its
     // crystallisation range (about −40 °C), so a melting caution would flag every step.
     thermal: { glassTransitionC: -125, degradationOnsetC: 300 },
+    refractiveIndex: 1.403,
     hazards: [],
-    sources: { ...polymerSources, density: SRC.supplierDensity },
+    sources: { ...polymerSources, density: SRC.supplierDensity, refractiveIndex: SRC.polymerIndex },
   },
   {
     id: "chitosan",
@@ -576,8 +621,10 @@ const organics: Material[] = [
     formula: "C6H11NO4",
     density: 1.35,
     thermal: { degradationOnsetC: 220 },
+    refractiveIndex: 1.52,
     hazards: [],
     sources: {
+      refractiveIndex: "dry chitosan film, n_D ≈ 1.52–1.54 (from memory)",
       ...polymerSources,
       formula: "glucosamine repeat unit (fully deacetylated)",
       density: "typical value for dry chitosan (from memory)",
@@ -590,8 +637,10 @@ const organics: Material[] = [
     casNumber: "9000-70-8",
     density: 1.35,
     thermal: { meltingC: 35, degradationOnsetC: 220 },
+    refractiveIndex: 1.54,
     hazards: [],
     sources: {
+      refractiveIndex: "dry gelatin film, n_D ≈ 1.53–1.54 (from memory)",
       casNumber: SRC.cas,
       density: "typical value for dry gelatin (from memory)",
       "thermal.meltingC": "helix–coil transition of hydrated gelatin gels, about 35 °C (from memory)",
@@ -608,12 +657,38 @@ const organics: Material[] = [
     molarMass: 340.419,
     density: 1.16,
     thermal: { degradationOnsetC: 300 },
+    refractiveIndex: 1.57,
+    epoxyEquivalentWeight: 170.21,
     hazards: ["H315", "H317", "H319", "H411"],
     sources: {
+      refractiveIndex: "liquid DGEBA, n_D ≈ 1.57 at 25 °C, typical supplier value (from memory); cured networks 1.55–1.60",
+      epoxyEquivalentWeight: "two glycidyl ether groups per molecule: EEW = 340.419 / 2 for the pure monomer (Lee & Neville, Handbook of Epoxy Resins, 1967); commercial liquid grades are 182–192 g/eq (from memory)",
       formula: "pure DGEBA monomer; commercial resins are slightly oligomerised",
       molarMass: SRC.ciaaw,
       density: SRC.supplierDensity,
       "thermal.degradationOnsetC": SRC.tga,
+      hazards: SRC.ghs,
+      casNumber: SRC.cas,
+    },
+  },
+  {
+    id: "polyetheramine-230",
+    name: "Poly(propylene glycol) bis(2-aminopropyl ether), Mn ≈ 230 (amine curing agent)",
+    kind: "organic",
+    casNumber: "9046-10-0",
+    formula: "C3H6O",
+    density: 0.948,
+    refractiveIndex: 1.447,
+    amineHydrogenEquivalentWeight: 60,
+    thermal: { degradationOnsetC: 200 },
+    hazards: ["H302", "H314", "H412"],
+    sources: {
+      formula: "oxypropylene repeat unit of the polyether chain; two primary amine ends per molecule",
+      density: "typical supplier data sheet value for the Mn ≈ 230 grade, 20 °C (from memory)",
+      refractiveIndex: "typical supplier data sheet value for the Mn ≈ 230 grade, n_D at 20 °C (from memory)",
+      amineHydrogenEquivalentWeight:
+        "four amine hydrogens per molecule of Mn ≈ 230: ≈ 57.5, typical supplier figure ≈ 60 g/eq (from memory; Lee & Neville, Handbook of Epoxy Resins, 1967, for the definition)",
+      "thermal.degradationOnsetC": "onset of mass loss of the liquid amine in thermogravimetry, typical value (from memory); in a cured network it stands higher",
       hazards: SRC.ghs,
       casNumber: SRC.cas,
     },
@@ -626,8 +701,9 @@ const organics: Material[] = [
     formula: "C5H8O2",
     density: 1.18,
     thermal: { glassTransitionC: 105, degradationOnsetC: 250 },
+    refractiveIndex: 1.49,
     hazards: [],
-    sources: { ...polymerSources },
+    sources: { ...polymerSources, refractiveIndex: SRC.polymerIndex },
   },
 ];
 
@@ -637,6 +713,8 @@ const substrateSources = {
   "thermal.maxServiceC": SRC.gradeMax,
 } as const;
 
+// Opaque substrates (PEEK, UHMWPE, the aluminium alloy) carry no refractive index: the engine treats
+// a substrate with an index as transparent, and only those get the interference-fringe check.
 const substrates: Material[] = [
   {
     id: "polycarbonate",
@@ -646,8 +724,9 @@ const substrates: Material[] = [
     formula: "C16H14O3",
     density: 1.2,
     thermal: { glassTransitionC: 147, degradationOnsetC: 450, heatDeflectionC: 132, maxServiceC: 125 },
+    refractiveIndex: 1.586,
     hazards: [],
-    sources: { ...substrateSources, "thermal.heatDeflectionC": SRC.hdt },
+    sources: { ...substrateSources, "thermal.heatDeflectionC": SRC.hdt, refractiveIndex: SRC.transparentSubstrate },
   },
   {
     id: "pmma-sheet",
@@ -657,8 +736,9 @@ const substrates: Material[] = [
     formula: "C5H8O2",
     density: 1.19,
     thermal: { glassTransitionC: 105, degradationOnsetC: 250, heatDeflectionC: 95, maxServiceC: 80 },
+    refractiveIndex: 1.49,
     hazards: [],
-    sources: { ...substrateSources, "thermal.heatDeflectionC": SRC.hdt },
+    sources: { ...substrateSources, "thermal.heatDeflectionC": SRC.hdt, refractiveIndex: SRC.transparentSubstrate },
   },
   {
     id: "peek",
@@ -679,8 +759,10 @@ const substrates: Material[] = [
     formula: "C10H8O4",
     density: 1.38,
     thermal: { glassTransitionC: 75, meltingC: 255, degradationOnsetC: 400, maxServiceC: 105 },
+    refractiveIndex: 1.64,
     hazards: [],
     sources: {
+      refractiveIndex: "biaxially oriented PET film, in-plane n_D ≈ 1.64 (amorphous PET 1.575; from memory); treated as transparent for the fringe check",
       ...substrateSources,
       "thermal.maxServiceC":
         "oriented PET film, continuous use ≈ 105 °C (from memory); no heat deflection temperature is given: it is a moulded-bar test that does not describe a film",
@@ -694,8 +776,9 @@ const substrates: Material[] = [
     formula: "C3H4O2",
     density: 1.24,
     thermal: { glassTransitionC: 58, meltingC: 170, degradationOnsetC: 300, heatDeflectionC: 55, maxServiceC: 50 },
+    refractiveIndex: 1.45,
     hazards: [],
-    sources: { ...substrateSources, density: SRC.markHandbook, "thermal.heatDeflectionC": SRC.hdt },
+    sources: { ...substrateSources, density: SRC.markHandbook, "thermal.heatDeflectionC": SRC.hdt, refractiveIndex: SRC.transparentSubstrate },
   },
   {
     id: "uhmwpe",
@@ -729,8 +812,10 @@ const substrates: Material[] = [
     casNumber: "65997-17-3",
     density: 2.5,
     thermal: { glassTransitionC: 564, maxServiceC: 500 },
+    refractiveIndex: 1.52,
     hazards: [],
     sources: {
+      refractiveIndex: SRC.transparentSubstrate,
       density: "CRC Handbook of Chemistry and Physics, soda-lime glass ≈ 2.5 g/cm³ (from memory)",
       "thermal.glassTransitionC": "typical soda-lime float glass (from memory)",
       "thermal.maxServiceC": "kept below the strain point (≈ 510 °C) to avoid distortion (from memory)",
@@ -758,8 +843,9 @@ const solvents: Material[] = [
     formula: "C2H5OH",
     molarMass: 46.069,
     density: 0.7893,
+    boilingPointC: 78.3,
     hazards: ["H225", "H319"],
-    sources: { ...solventSources },
+    sources: { ...solventSources, boilingPointC: SRC.boilingPoint },
   },
   {
     id: "methanol",
@@ -769,8 +855,9 @@ const solvents: Material[] = [
     formula: "CH3OH",
     molarMass: 32.042,
     density: 0.7914,
+    boilingPointC: 64.7,
     hazards: ["H225", "H301", "H311", "H331", "H370"],
-    sources: { ...solventSources },
+    sources: { ...solventSources, boilingPointC: SRC.boilingPoint },
   },
   {
     id: "1-propanol",
@@ -780,8 +867,9 @@ const solvents: Material[] = [
     formula: "C3H7OH",
     molarMass: 60.096,
     density: 0.8035,
+    boilingPointC: 97.2,
     hazards: ["H225", "H318", "H336"],
-    sources: { ...solventSources },
+    sources: { ...solventSources, boilingPointC: SRC.boilingPoint },
   },
   {
     id: "2-propanol",
@@ -791,8 +879,9 @@ const solvents: Material[] = [
     formula: "C3H7OH",
     molarMass: 60.096,
     density: 0.7855,
+    boilingPointC: 82.3,
     hazards: ["H225", "H319", "H336"],
-    sources: { ...solventSources },
+    sources: { ...solventSources, boilingPointC: SRC.boilingPoint },
   },
   {
     id: "1-butanol",
@@ -802,8 +891,9 @@ const solvents: Material[] = [
     formula: "C4H9OH",
     molarMass: 74.123,
     density: 0.8095,
+    boilingPointC: 117.7,
     hazards: ["H226", "H302", "H315", "H318", "H335", "H336"],
-    sources: { ...solventSources },
+    sources: { ...solventSources, boilingPointC: SRC.boilingPoint },
   },
   {
     id: "1-methoxy-2-propanol",
@@ -813,8 +903,9 @@ const solvents: Material[] = [
     formula: "C4H10O2",
     molarMass: 90.122,
     density: 0.922,
+    boilingPointC: 120,
     hazards: ["H226", "H336"],
-    sources: { ...solventSources },
+    sources: { ...solventSources, boilingPointC: SRC.boilingPoint },
   },
 ];
 
@@ -884,8 +975,10 @@ const catalysts: Material[] = [
     formula: "CH3COOH",
     molarMass: 60.052,
     density: 1.049,
+    boilingPointC: 118,
     hazards: ["H226", "H314"],
     sources: {
+      boilingPointC: SRC.boilingPoint,
       formula: "composition of the compound",
       molarMass: SRC.ciaaw,
       density: SRC.crcOrganic,
@@ -965,8 +1058,10 @@ const modifierMaterials: Material[] = [
     molarMass: 100.117,
     density: 0.975,
     modifier: { groupsReplacedPerMolecule: 1, bondedFormula: "C5H7O1.5", bondedMolarMass: 91.11, bondedDensity: 1.25, removalTemperatureC: 350 },
+    boilingPointC: 140.4,
+    refractiveIndex: 1.452,
     hazards: ["H226", "H302", "H311", "H331"],
-    sources: { ...modifierSources },
+    sources: { ...modifierSources, boilingPointC: SRC.boilingPoint, refractiveIndex: SRC.ligandIndex },
   },
   {
     id: "ethyl-acetoacetate",
@@ -977,8 +1072,10 @@ const modifierMaterials: Material[] = [
     molarMass: 130.143,
     density: 1.029,
     modifier: { groupsReplacedPerMolecule: 1, bondedFormula: "C6H9O2.5", bondedMolarMass: 121.136, bondedDensity: 1.25, removalTemperatureC: 350 },
+    boilingPointC: 180.8,
+    refractiveIndex: 1.419,
     hazards: ["H319"],
-    sources: { ...modifierSources },
+    sources: { ...modifierSources, boilingPointC: SRC.boilingPoint, refractiveIndex: SRC.ligandIndex },
   },
   {
     id: "methacrylic-acid",
@@ -989,8 +1086,10 @@ const modifierMaterials: Material[] = [
     molarMass: 86.09,
     density: 1.015,
     modifier: { groupsReplacedPerMolecule: 1, bondedFormula: "C4H5O1.5", bondedMolarMass: 77.083, bondedDensity: 1.2, removalTemperatureC: 300 },
+    boilingPointC: 161,
+    refractiveIndex: 1.431,
     hazards: ["H302", "H312", "H314", "H332", "H335"],
-    sources: { ...modifierSources },
+    sources: { ...modifierSources, boilingPointC: SRC.boilingPoint, refractiveIndex: SRC.ligandIndex },
   },
 ];
 

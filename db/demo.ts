@@ -16,6 +16,30 @@ export const DEMO_USERS: { email: string; name: string; role: RoleName }[] = [
   { email: "production@larkspur.example", name: "Pat Production", role: "production" },
 ];
 
+/**
+ * Demo prices per kg as supplied, in the team's currency, by reference id: invented for the
+ * demo (demo data, not market prices), so that the demo formulations show a cost. The seed
+ * sets them on the team's copies that have no price yet.
+ */
+export const DEMO_PRICES: Record<string, number> = {
+  teos: 42,
+  gptms: 165,
+  "ti-isopropoxide": 120,
+  acac: 58,
+  ethanol: 6.5,
+  "1-propanol": 9,
+  "water-di": 0.8,
+  "hcl-37": 14,
+  "hno3-65": 18,
+  "pdms-silanol": 95,
+  "zr-propoxide-70": 210,
+  "ethyl-acetoacetate": 35,
+  "polyetheramine-230": 28,
+};
+
+/** Source written beside a demo price in the material's sources. */
+export const DEMO_PRICE_SOURCE = "invented demo price (demo data)";
+
 /** A demo input before material ids are mapped (materials are filled in by the seed). */
 export type DemoInput = Omit<FormulationInput, "materials">;
 

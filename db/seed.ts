@@ -6,7 +6,7 @@ import { hashPassword } from "better-auth/crypto";
 import { and, eq } from "drizzle-orm";
 import { computeFormulation, ENGINE_VERSION, type FormulationInput, type Material } from "@/lib/formulation";
 import { createDb, type Db } from "./client";
-import { DEMO_FORMULATIONS, DEMO_PASSWORD, DEMO_TEAM, DEMO_USERS, demoMaterialRefs, type DemoInput } from "./demo";
+import { DEMO_FORMULATIONS, DEMO_PASSWORD, DEMO_PRICE_SOURCE, DEMO_PRICES, DEMO_TEAM, DEMO_USERS, demoMaterialRefs, type DemoInput } from "./demo";
 import { copyReferenceMaterials } from "./queries/library";
 import { account, auditEvents, formulations, materials, member, organization, reviews, revisions, user } from "./schema";
 
@@ -65,6 +65,19 @@ function materialise(input: DemoInput, library: Map<string, Material>): Formulat
   } as FormulationInput;
 }
 
+/** Puts the invented demo prices on the team's copies of those materials that have no price yet. */
+async function setDemoPrices(db: Db, teamId: string): Promise<void> {
+  const rows = await db.select().from(materials).where(eq(materials.teamId, teamId));
+  for (const row of rows) {
+    const price = row.referenceId ? DEMO_PRICES[row.referenceId] : undefined;
+    if (price === undefined || row.data.pricePerKg !== undefined) continue;
+    await db
+      .update(materials)
+      .set({ data: { ...row.data, pricePerKg: price, sources: { ...row.data.sources, pricePerKg: DEMO_PRICE_SOURCE } } })
+      .where(eq(materials.id, row.id));
+  }
+}
+
 export async function seedDemo(db: Db): Promise<SeedSummary> {
   const teamId = await ensureTeam(db);
   const users: Record<string, string> = {};
@@ -82,6 +95,7 @@ export async function seedDemo(db: Db): Promise<SeedSummary> {
   }
 
   await copyReferenceMaterials(db, teamId, users.admin ?? null);
+  await setDemoPrices(db, teamId);
   const rows = await db.select().from(materials).where(eq(materials.teamId, teamId));
   const library = new Map<string, Material>();
   for (const r of rows) if (r.referenceId) library.set(r.referenceId, { ...r.data, id: r.id });

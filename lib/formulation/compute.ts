@@ -1,4 +1,5 @@
 import { basisNotices } from "./basis-notices";
+import { addCoatPredictions } from "./coat";
 import { solidMassFromBasis } from "./basis";
 import { compositeFigures, type BulkDensity } from "./composite";
 import { composeComponents, type DecLine } from "./composition";
@@ -364,5 +365,7 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
   };
   if (solventSummary) result.solvent = solventSummary;
   if (modifierResults.length > 0) result.modifiers = modifierResults;
+  // What the coat will be: film (with a coating), optics, VOC, epoxy–amine balance, cost.
+  addCoatPredictions(result, { input, byId, lines, phases, solidMass, solMass, solVolume, totalWaterMol, waterEntry, alcohols: pass.alcohols.values() });
   return result;
 }

@@ -3,7 +3,7 @@
  */
 
 /** Engine version, reported with every stored result (semantic versioning). */
-export const ENGINE_VERSION = "2.0.0";
+export const ENGINE_VERSION = "2.1.0";
 
 /**
  * Molar mass of water, g/mol: 2 × 1.008 + 15.999 = 18.015.
@@ -41,3 +41,41 @@ export const WEIGHT_FRACTION_SCALE_TOLERANCE = 0.005;
  * unit slip (mmol typed as mol, or percent as a fraction).
  */
 export const CATALYST_RATIO_CAUTION = 1;
+
+/**
+ * Standard acceleration of gravity, m/s² (exact by definition: CGPM 1901,
+ * BIPM SI Brochure, 9th ed.).
+ */
+export const STANDARD_GRAVITY_M_PER_S2 = 9.80665;
+
+/**
+ * Prefactor of the Landau–Levich thickness h = 0.94 (ηU)^(2/3) / (γ^(1/6) (ρg)^(1/2)),
+ * dimensionless. Source: Landau & Levich, Acta Physicochim. URSS 17 (1942) 42;
+ * Brinker et al., Thin Solid Films 201 (1991) 97.
+ */
+export const LANDAU_LEVICH_PREFACTOR = 0.94;
+
+/**
+ * Capillary number Ca = ηU/γ above which the Landau–Levich law is out of its
+ * range (it holds for Ca ≪ 1), dimensionless. Common practice, from memory.
+ */
+export const CAPILLARY_NUMBER_LIMIT = 0.01;
+
+/**
+ * |n_coat − n_substrate| above which interference fringes show on a
+ * transparent substrate, dimensionless. Common practice, from memory.
+ */
+export const FRINGE_INDEX_MISMATCH = 0.01;
+
+/**
+ * Highest initial boiling point of a volatile organic compound, °C at
+ * 101.3 kPa. Source: EU Directive 2004/42/EC, art. 2(5).
+ */
+export const VOC_BOILING_POINT_MAX_C = 250;
+
+/**
+ * Amine-hydrogen to epoxy equivalent ratio outside which a caution is given
+ * (stoichiometric cure is 1). Source: Lee & Neville, Handbook of Epoxy
+ * Resins (1967), from memory.
+ */
+export const CURE_RATIO_RANGE = { min: 0.8, max: 1.2 } as const;

@@ -299,3 +299,76 @@ describe("reference modifiers", () => {
   });
 });
 
+
+describe("reference data for the coat predictions", () => {
+  it("gives GPTMS its molar mass as EEW, APTES half its molar mass as AHEW, DGEBA half its molar mass as EEW", () => {
+    // chemistry.md, "What the coat will be"; Lee & Neville, Handbook of Epoxy Resins (1967): one epoxy per GPTMS,
+    // two amine hydrogens per APTES (221.37 / 2 = 110.69 g/eq), two glycidyl groups per DGEBA monomer (340.42 / 2 = 170.21).
+    expect(material("gptms").epoxyEquivalentWeight).toBe(material("gptms").molarMass);
+    expect(material("gptms").epoxyEquivalentWeight).toBeCloseTo(236.34, 2);
+    expect(material("aptes").amineHydrogenEquivalentWeight).toBeCloseTo((material("aptes").molarMass as number) / 2, 3);
+    expect(material("aptes").amineHydrogenEquivalentWeight).toBeCloseTo(110.69, 2);
+    expect(material("epoxy-dgeba").epoxyEquivalentWeight).toBeCloseTo(ownMolarMass("C21H24O4") / 2, 2);
+  });
+
+  it("ships an amine curing agent as an organic phase, AHEW about 60 g/eq", () => {
+    // Poly(propylene glycol) bis(2-aminopropyl ether), Mn ≈ 230: four amine hydrogens → ≈ 57.5 g/eq; data sheets say ≈ 60 (from memory).
+    const amine = material("polyetheramine-230");
+    expect(amine.kind).toBe("organic");
+    expect(amine.amineHydrogenEquivalentWeight).toBeGreaterThanOrEqual(55);
+    expect(amine.amineHydrogenEquivalentWeight).toBeLessThanOrEqual(65);
+    expect(amine.epoxyEquivalentWeight).toBeUndefined();
+  });
+
+  it("gives every precursor a residue refractive index, amorphous and below the crystalline values", () => {
+    // Crystalline n_D (CRC Handbook, from memory): anatase ≈ 2.49, monoclinic zirconia ≈ 2.15, corundum 1.768.
+    // Fused silica 1.4585 (Malitson, J. Opt. Soc. Am. 55 (1965) 1205, from memory).
+    for (const m of precursors) expect(m.precursor?.residueRefractiveIndex, m.id).toBeGreaterThan(1.3);
+    expect(material("teos").precursor?.residueRefractiveIndex).toBeCloseTo(1.4585, 4);
+    for (const id of ["ti-isopropoxide", "ti-butoxide"]) {
+      const n = material(id).precursor?.residueRefractiveIndex as number;
+      expect(n, id).toBeGreaterThanOrEqual(1.9);
+      expect(n, id).toBeLessThanOrEqual(2.1);
+    }
+    expect(material("zr-propoxide-70").precursor?.residueRefractiveIndex).toBeLessThan(2.15);
+    expect(material("al-sec-butoxide").precursor?.residueRefractiveIndex).toBeLessThan(1.768);
+    // R-SiO1.5 units of the organosilanes ≈ 1.42–1.50 (from memory)
+    for (const id of ["mtes", "mtms", "gptms", "maptms", "aptes", "vtes"]) {
+      const n = material(id).precursor?.residueRefractiveIndex as number;
+      expect(n, id).toBeGreaterThanOrEqual(1.42);
+      expect(n, id).toBeLessThanOrEqual(1.5);
+    }
+  });
+
+  it("gives the transparent substrates their index and the opaque ones none", () => {
+    // Polymer Handbook (from memory): polycarbonate 1.586, PMMA 1.49; soda-lime glass ≈ 1.52; oriented PET 1.57–1.65.
+    expect(material("polycarbonate").refractiveIndex).toBe(1.586);
+    expect(material("pmma-sheet").refractiveIndex).toBeCloseTo(1.49, 2);
+    expect(material("soda-lime-glass").refractiveIndex).toBeCloseTo(1.52, 2);
+    const pet = material("pet").refractiveIndex as number;
+    expect(pet).toBeGreaterThanOrEqual(1.57);
+    expect(pet).toBeLessThanOrEqual(1.65);
+    for (const id of ["peek", "uhmwpe", "aluminium-6061"]) expect(material(id).refractiveIndex, id).toBeUndefined();
+  });
+
+  it("gives every organic phase and modifier a refractive index", () => {
+    for (const m of referenceMaterials.filter((x) => x.kind === "organic" || x.kind === "modifier")) {
+      expect(m.refractiveIndex, m.id).toBeGreaterThan(1.3);
+      expect(m.refractiveIndex, m.id).toBeLessThan(1.7);
+    }
+  });
+
+  it("gives the solvents, the organic catalyst and the modifiers their boiling points, all volatile (≤ 250 °C)", () => {
+    // CRC Handbook, normal boiling points (from memory): ethanol 78.3, methanol 64.7, 2-propanol 82.3, 1-butanol 117.7 °C.
+    expect(material("ethanol").boilingPointC).toBeCloseTo(78.3, 1);
+    expect(material("methanol").boilingPointC).toBeCloseTo(64.7, 1);
+    for (const m of referenceMaterials.filter((x) => x.kind === "solvent" || x.kind === "modifier" || x.id === "acetic-acid-glacial")) {
+      expect(m.boilingPointC, m.id).toBeGreaterThan(50);
+      expect(m.boilingPointC, m.id).toBeLessThanOrEqual(250);
+    }
+  });
+
+  it("leaves prices to the teams (the reference data has none)", () => {
+    for (const m of referenceMaterials) expect(m.pricePerKg, m.id).toBeUndefined();
+  });
+});

@@ -1,6 +1,6 @@
 import { and, count, eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { DEMO_FORMULATIONS, DEMO_TEAM, DEMO_USERS } from "@/db/demo";
+import { DEMO_FORMULATIONS, DEMO_PRICES, DEMO_TEAM, DEMO_USERS } from "@/db/demo";
 import { seedDemo } from "@/db/seed";
 import { formulations, materials, member, organization, revisions, user } from "@/db/schema";
 import { referenceMaterials } from "@/data/materials";
@@ -60,5 +60,21 @@ describe("demo seed", () => {
     // The stored result is the engine's, with a recipe line per dispensed material.
     expect(released?.result?.lines.length).toBeGreaterThan(3);
     expect(released?.result?.composite.massGrams).toBeCloseTo(100, 6); // 500 g sol × 0.20 solids
+  });
+
+  it("puts the invented demo prices on the team's materials once, so every demo formulation shows its cost", async () => {
+    const [team] = await t.db.select().from(organization).where(eq(organization.slug, DEMO_TEAM.slug));
+    const rows = await t.db.select().from(materials).where(eq(materials.teamId, team!.id));
+    for (const [referenceId, price] of Object.entries(DEMO_PRICES)) {
+      const row = rows.find((r) => r.referenceId === referenceId);
+      expect(row?.data.pricePerKg, referenceId).toBe(price);
+      expect(row?.data.sources?.pricePerKg, referenceId).toMatch(/demo data/);
+    }
+    // Expected: the engine's own figure (identity) — each stored result has a cost, and the VOC the engine always sets now.
+    const stored = await t.db.select().from(revisions).where(eq(revisions.teamId, team!.id));
+    for (const revision of stored) {
+      expect(revision.result?.cost?.total, revision.id).toBeGreaterThan(0);
+      expect(revision.result?.voc?.gramsPerLitre, revision.id).toBeGreaterThan(0);
+    }
   });
 });

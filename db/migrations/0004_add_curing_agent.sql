@@ -1,0 +1,11 @@
+-- The amine curing agent added with the coat predictions (engine 2.1), for teams that got their library before it existed.
+-- A team that already has a material of the same name (or from the same reference) keeps its own; runs once.
+-- New values on materials a team already has (refractive indices, boiling points, equivalent weights) reach only new teams:
+-- a team's copy is its own and is not changed here.
+INSERT INTO `materials` (`id`, `team_id`, `reference_id`, `name`, `kind`, `cas_number`, `data`)
+SELECT UUID(), o.`id`, 'polyetheramine-230', 'Poly(propylene glycol) bis(2-aminopropyl ether), Mn ≈ 230 (amine curing agent)', 'organic', '9046-10-0', '{"name":"Poly(propylene glycol) bis(2-aminopropyl ether), Mn ≈ 230 (amine curing agent)","kind":"organic","casNumber":"9046-10-0","formula":"C3H6O","density":0.948,"refractiveIndex":1.447,"amineHydrogenEquivalentWeight":60,"thermal":{"degradationOnsetC":200},"hazards":["H302","H314","H412"],"sources":{"formula":"oxypropylene repeat unit of the polyether chain; two primary amine ends per molecule","density":"typical supplier data sheet value for the Mn ≈ 230 grade, 20 °C (from memory)","refractiveIndex":"typical supplier data sheet value for the Mn ≈ 230 grade, n_D at 20 °C (from memory)","amineHydrogenEquivalentWeight":"four amine hydrogens per molecule of Mn ≈ 230: ≈ 57.5, typical supplier figure ≈ 60 g/eq (from memory; Lee & Neville, Handbook of Epoxy Resins, 1967, for the definition)","thermal.degradationOnsetC":"onset of mass loss of the liquid amine in thermogravimetry, typical value (from memory); in a cured network it stands higher","hazards":"GHS hazard statements as commonly listed by suppliers (from memory); check the supplier''s safety data sheet","casNumber":"CAS Registry Number (from memory; check digit verified in tests)"}}'
+FROM `organization` o
+WHERE NOT EXISTS (SELECT 1 FROM `materials` x WHERE x.`team_id` = o.`id` AND (x.`name` = 'Poly(propylene glycol) bis(2-aminopropyl ether), Mn ≈ 230 (amine curing agent)' OR x.`reference_id` = 'polyetheramine-230'));
+--> statement-breakpoint
+UPDATE `materials` SET `data` = JSON_SET(`data`, '$.id', `id`)
+WHERE `reference_id` = 'polyetheramine-230' AND JSON_EXTRACT(`data`, '$.id') IS NULL;

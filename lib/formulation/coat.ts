@@ -1,0 +1,81 @@
+import type { PhaseInput } from "./composite";
+import type { DecLine } from "./composition";
+import { batchCost } from "./cost";
+import { cureBalance } from "./cure";
+import { type Dec, dec, ZERO } from "./decimal";
+import { filmPrediction } from "./film";
+import type { FormulationInput } from "./input-schema";
+import type { IndexedMaterial } from "./material-index";
+import { coatOptics } from "./optics";
+import type { FormulationResult } from "./result-types";
+import { vocFigures } from "./voc";
+
+/** The figures of the computation the coat predictions start from (decimal; units in the names). */
+export interface CoatContext {
+  input: FormulationInput;
+  byId: Map<string, IndexedMaterial>;
+  lines: readonly DecLine[];
+  /** Phases of the dry composite, bonded ligands included. */
+  phases: readonly PhaseInput[];
+  /** S, g of dry composite. */
+  solidMass: Dec;
+  /** g of sol. */
+  solMass: Dec;
+  /** mL of sol (ideal mixing). */
+  solVolume: Dec;
+  /** Water in the sol, added and carried, mol. */
+  totalWaterMol: Dec;
+  waterEntry: IndexedMaterial;
+  /** Alcohol released on full hydrolysis. */
+  alcohols: Iterable<{ mol: Dec; molarMass: number }>;
+}
+
+/**
+ * Adds what the coat will be to a result (chemistry: "What the coat will
+ * be"): the film (only when the input states a coating method), the dry
+ * coat's refractive index beside the substrate's, VOC (always), the
+ * epoxy–amine balance (when an equivalent weight is present) and the cost
+ * (when the lines have prices), with their notices. Reads the composite's
+ * theoretical density and porosity from `result`; P = 0 when no bulk
+ * density is known.
+ *
+ * @param result - the result so far; gains coating, optics, voc, cure, cost and notices
+ * @param context - the decimal figures of the computation
+ * @example
+ * ```ts
+ * addCoatPredictions(result, { input, byId, lines, phases, solidMass, solMass, solVolume, totalWaterMol, waterEntry, alcohols: pass.alcohols.values() });
+ * result.voc?.gramsPerLitre;
+ * ```
+ */
+export function addCoatPredictions(result: FormulationResult, context: CoatContext): void {
+  const { input, byId, lines, solidMass, solVolume } = context;
+  const notices = result.notices;
+  const porosity = result.composite.porosity === undefined ? ZERO : dec(result.composite.porosity);
+
+  let coverage: Dec | undefined;
+  if (input.coating) {
+    // φ_s = (S / ρ_th) / V_sol; ρ of the sol = sol mass / sol volume
+    const solidVolumeFraction = solidMass.div(dec(result.composite.theoreticalDensity)).div(solVolume);
+    const film = filmPrediction(input.coating, { solidVolumeFraction, porosity, densityGPerCm3: context.solMass.div(solVolume) });
+    result.coating = film.coating;
+    coverage = dec(film.coating.coverageM2PerL);
+    notices.push(...film.notices);
+  }
+
+  const substrate = input.substrateId === undefined ? undefined : byId.get(input.substrateId);
+  const optics = coatOptics(context.phases, byId, porosity, substrate, input.coating !== undefined);
+  if (optics.optics) result.optics = optics.optics;
+  notices.push(...optics.notices);
+
+  const voc = vocFigures({ lines, byId, alcohols: context.alcohols, waterMol: context.totalWaterMol, waterEntry: context.waterEntry, solVolumeMl: solVolume });
+  result.voc = voc.voc;
+  notices.push(...voc.notices);
+
+  const cure = cureBalance(lines, byId);
+  if (cure.cure) result.cure = cure.cure;
+  notices.push(...cure.notices);
+
+  const cost = batchCost(lines, byId, solidMass, solVolume, coverage);
+  if (cost.cost) result.cost = cost.cost;
+  notices.push(...cost.notices);
+}

@@ -1,0 +1,141 @@
+import type { DecLine } from "./composition";
+import { ML_PER_L, VOC_BOILING_POINT_MAX_C, WATER_MOLAR_MASS_G_PER_MOL } from "./constants";
+import { type Dec, dec, timesFactor, toNumber, ZERO } from "./decimal";
+import { FormulationError } from "./errors";
+import { requireDensity, type IndexedMaterial } from "./material-index";
+import type { Material } from "./material-schema";
+import type { Notice, VocResult } from "./result-types";
+
+/** Carbon in a formula: a "C" not followed by a lower-case letter (not Ca, Cl, Cr, Cu …). */
+const CARBON = /C(?![a-z])/;
+
+/** How a material counts toward VOC: "yes", "no", or "assumed" (a solvent or catalyst without a boiling point). */
+export type VocVerdict = "yes" | "no" | "assumed";
+
+const verdictCache = new WeakMap<Material, VocVerdict>();
+
+/**
+ * Whether a material is a volatile organic compound in the sense of EU
+ * Directive 2004/42/EC: organic (carbon in its formula) with an initial
+ * boiling point ≤ 250 °C at 101.3 kPa. A solvent or catalyst whose boiling
+ * point (or formula, for a solvent) is not known is assumed volatile
+ * ("assumed"): the sol-gel solvents all are, and a VOC figure must not be
+ * understated; other materials without one are not counted.
+ *
+ * @example
+ * ```ts
+ * vocVerdict(ethanol); // "yes" (C2H5OH, 78.3 °C)
+ * vocVerdict(hcl37);   // "no" (no carbon)
+ * ```
+ */
+export function vocVerdict(material: Material): VocVerdict {
+  let verdict = verdictCache.get(material);
+  if (verdict !== undefined) return verdict;
+  const solventLike = material.kind === "solvent" || material.kind === "catalyst";
+  if (material.formula === undefined) verdict = material.kind === "solvent" ? "assumed" : "no";
+  else if (!CARBON.test(material.formula)) verdict = "no";
+  else if (material.boilingPointC !== undefined) verdict = material.boilingPointC <= VOC_BOILING_POINT_MAX_C ? "yes" : "no";
+  else verdict = solventLike ? "assumed" : "no";
+  verdictCache.set(material, verdict);
+  return verdict;
+}
+
+/** What the VOC figure needs from the rest of the computation. */
+export interface VocInputs {
+  lines: readonly DecLine[];
+  byId: Map<string, IndexedMaterial>;
+  /** Alcohol released on full hydrolysis, mol and g/mol per alcohol. */
+  alcohols: Iterable<{ mol: Dec; molarMass: number }>;
+  /** Water in the sol, added and carried, mol. */
+  waterMol: Dec;
+  /** The water material (its molar mass and density give the water volume). */
+  waterEntry: IndexedMaterial;
+  /** Sol volume, mL (ideal mixing). */
+  solVolumeMl: Dec;
+}
+
+/**
+ * Volatile organic compounds of the sol (chemistry: "What the coat will
+ * be"; EU 2004/42/EC definition): the active part of every solvent and
+ * catalyst line that is a VOC (acetic acid yes, hydrochloric acid no), the
+ * solvent carried by any line (1-propanol of a zirconium propoxide
+ * solution; a carried solvent that names no material is counted), and the
+ * alcohol released on full hydrolysis, always (it leaves in drying and cure).
+ * Modifier lines add nothing: in this model every ligand is bonded (the
+ * engine refuses more ligand than a precursor has alkoxy groups), its
+ * exchange alcohol is already in the hydrolysis alcohol, and a ligand burnt
+ * out above its removal temperature leaves as combustion products, not as a
+ * solvent. Precursors and organic phases stay in the dry solid.
+ * g per litre of sol and g per litre of sol less water (ASTM D3960, US EPA
+ * Method 24): m / (V_sol − V_water), V_water = (added + carried water) / ρ_water.
+ *
+ * @returns the VOC figures and an info notice naming materials assumed volatile
+ * @example
+ * ```ts
+ * vocFigures({ lines, byId, alcohols: pass.alcohols.values(), waterMol, waterEntry, solVolumeMl }).voc.gramsPerLitre;
+ * ```
+ */
+export function vocFigures(inputs: VocInputs): { voc: VocResult; notices: Notice[] } {
+  const { lines, byId } = inputs;
+  let grams = ZERO;
+  const assumed: { material: Material; property: string }[] = [];
+  const assume = (material: Material, property: string): void => {
+    if (!assumed.some((a) => a.material === material)) assumed.push({ material, property });
+  };
+  const count = (material: Material, mass: Dec): void => {
+    const verdict = vocVerdict(material);
+    if (verdict === "no") return;
+    grams = grams.plus(mass);
+    if (verdict === "assumed") assume(material, material.formula === undefined ? "formula" : "boilingPointC");
+  };
+  for (const line of lines) {
+    const material = byId.get(line.materialId)?.material;
+    if (!material) continue;
+    if (line.role === "solvent" || line.role === "catalyst") {
+      count(material, material.assay === undefined || material.assay === 1 ? line.massGrams : timesFactor(line.massGrams, material.assay));
+    }
+    if (line.carriedSolventGrams && !line.carriedSolventGrams.isZero()) {
+      const carried = material.solventId === undefined ? undefined : byId.get(material.solventId)?.material;
+      if (carried) count(carried, line.carriedSolventGrams);
+      else {
+        grams = grams.plus(line.carriedSolventGrams);
+        assume(material, "solventId");
+      }
+    }
+  }
+  for (const alcohol of inputs.alcohols) grams = grams.plus(alcohol.mol.times(dec(alcohol.molarMass)));
+
+  const waterMaterial = inputs.waterEntry.material;
+  const waterMl = inputs.waterMol.isZero()
+    ? ZERO
+    : inputs.waterMol.times(dec(waterMaterial.molarMass ?? WATER_MOLAR_MASS_G_PER_MOL)).div(requireDensity(inputs.waterEntry));
+  const lessWaterMl = inputs.solVolumeMl.minus(waterMl);
+  if (!lessWaterMl.greaterThan(0)) {
+    throw new FormulationError(
+      "invalid_input",
+      `${inputs.waterEntry.path}.density`,
+      `at the densities given, the water alone (${Number(waterMl.toPrecision(4))} mL) takes up the whole sol volume ` +
+        `(${Number(inputs.solVolumeMl.toPrecision(4))} mL): check the densities of the water and of the aqueous stocks`,
+    );
+  }
+  const voc: VocResult = {
+    massGrams: toNumber(grams),
+    gramsPerLitre: toNumber(grams.times(ML_PER_L).div(inputs.solVolumeMl)),
+    gramsPerLitreLessWater: toNumber(grams.times(ML_PER_L).div(lessWaterMl)),
+    waterMl: toNumber(waterMl),
+  };
+  const notices: Notice[] = [];
+  if (assumed.length > 0) {
+    const first = assumed[0]!;
+    const entry = byId.get(first.material.id);
+    notices.push({
+      level: "info",
+      code: "voc_assumed_volatile",
+      ...(entry ? { field: `${entry.path}.${first.property}` } : {}),
+      message:
+        `${assumed.map((a) => a.material.name).join(", ")}: no boiling point (or no named carried solvent) is given, so ${assumed.length === 1 ? "it is" : "they are"} ` +
+        `counted as volatile organic compounds; add the boiling point to count only what boils at or below ${VOC_BOILING_POINT_MAX_C} °C.`,
+    });
+  }
+  return { voc, notices };
+}
