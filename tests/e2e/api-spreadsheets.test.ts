@@ -86,6 +86,7 @@ describe("GET /api/revisions/:id/export with a coating", () => {
   interface CoatResult {
     coating?: { dryThicknessNm: number; wetThicknessUm: number; withdrawalMmPerSForTarget?: number; solMlForArea?: number };
     voc?: { gramsPerLitre: number; gramsPerLitreLessWater: number };
+    cost?: { total: number };
   }
 
   it("carries the withdrawal speed, the expected thickness, the area's sol and the VOC figure in the batch sheet CSV and workbook", async () => {
@@ -122,6 +123,9 @@ describe("GET /api/revisions/:id/export with a coating", () => {
     expect(sheet.find((r) => r[0] === "VOC")?.[1]).toBe(result.voc!.gramsPerLitre);
     const overview = XLSX.utils.sheet_to_json<unknown[]>(wb.Sheets.Overview!, { header: 1, raw: true });
     expect(overview.find((r) => r[0] === "Coat: dry film thickness")?.[1]).toBe(result.coating!.dryThicknessNm);
+    // Every line of this coat has a demo price, so the batch has a cost, in the team's currency.
+    const { currency } = (await (await formulator.fetch("/api/team/settings")).json()) as { currency: string };
+    expect(overview.find((r) => r[0] === "Cost of the batch")).toEqual(["Cost of the batch", result.cost!.total, currency]);
     const coatingSheet = XLSX.utils.sheet_to_json<unknown[]>(wb.Sheets.Coating!, { header: 1, raw: true });
     expect(coatingSheet.find((r) => r[0] === "Withdrawal speed")?.[1]).toBe(2);
   });
