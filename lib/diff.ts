@@ -50,6 +50,9 @@ function inputView(input: FormulationInput): Record<string, unknown> {
     steps: input.steps.map((st) => ({ ...st, stage: st.stage ?? "curing", atmosphere: st.atmosphere ?? "air" })),
     marginC: input.marginC ?? 20,
     measuredBulkDensity: input.measuredBulkDensity ?? null,
+    // No coat reads as method "none", so a draft saved before the coat predictions compares equal to one without a coat,
+    // and setting one shows "coating.method: none → dip".
+    coating: input.coating ?? { method: "none" },
     materialProperties: Object.fromEntries(
       input.materials.map((m) => {
         const { id: _id, name: _name, sources: _s, ...props } = m;
@@ -75,6 +78,23 @@ function resultView(result: FormulationResult | null, input: FormulationInput): 
     theoreticalDensity: result.composite.theoreticalDensity,
     thermalStatus: result.thermal.status,
     maxAllowedC: result.thermal.maxAllowedC ?? null,
+    // The coat's predicted figures; absent (null) in results of engines before 2.1 and without a coat.
+    coat: result.coating
+      ? {
+          wetThicknessUm: result.coating.wetThicknessUm,
+          dryThicknessNm: result.coating.dryThicknessNm,
+          coverageM2PerL: result.coating.coverageM2PerL,
+          withdrawalMmPerSForTarget: result.coating.withdrawalMmPerSForTarget ?? null,
+          rpmForTarget: result.coating.rpmForTarget ?? null,
+          capillaryNumber: result.coating.capillaryNumber ?? null,
+        }
+      : null,
+    refractiveIndex: result.optics?.refractiveIndex ?? null,
+    indexMismatch: result.optics?.mismatch ?? null,
+    vocGramsPerLitre: result.voc?.gramsPerLitre ?? null,
+    vocGramsPerLitreLessWater: result.voc?.gramsPerLitreLessWater ?? null,
+    epoxyAmineRatio: result.cure?.ratio ?? null,
+    costPerBatch: result.cost?.total ?? null,
   };
 }
 

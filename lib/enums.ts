@@ -52,6 +52,7 @@ export const AUDIT_ACTIONS = [
   "batch.notes_changed",
   "batch.closed",
   "batch.settings_changed",
+  "team.currency_changed",
   "attachment.added",
   "attachment.removed",
 ] as const;

@@ -35,3 +35,11 @@ export const STAGE_LABELS: Record<"sol" | "drying" | "curing", string> = { sol: 
 
 /** Words for a process step's atmosphere (input "atmosphere"; absent = air). */
 export const ATMOSPHERE_LABELS: Record<"air" | "inert", string> = { air: "Air", inert: "Inert gas" };
+
+/** Words for how a coat is applied ("none": no coat predictions). */
+export const COAT_METHOD_LABELS: Record<"none" | "dip" | "spin" | "wetFilm", string> = {
+  none: "Not set (no film predictions)",
+  dip: "Dip coating",
+  spin: "Spin coating",
+  wetFilm: "Wet film of stated thickness",
+};

@@ -5,7 +5,7 @@
  */
 import { z } from "zod";
 import { ALL_FIELDS } from "@/components/materials/material-fields";
-import type { FormulationInput, Material, MaterialKind } from "@/lib/formulation";
+import type { CoatingSpec, FormulationInput, Material, MaterialKind } from "@/lib/formulation";
 import { STEP_ATMOSPHERES, STEP_STAGES, WATER_RATIOS } from "@/lib/formulation/input-schema";
 
 export type BasisType = "solidMass" | "solidsContent" | "gelBody";
@@ -13,6 +13,67 @@ export type SolventMode = "none" | "molPerNetworkAtom" | "fill";
 export type StepStage = (typeof STEP_STAGES)[number];
 export type StepAtmosphere = (typeof STEP_ATMOSPHERES)[number];
 export type WaterRatio = (typeof WATER_RATIOS)[number];
+export type CoatMethod = "none" | CoatingSpec["method"];
+
+/**
+ * The coat as the form holds it: every method's inputs are kept while the
+ * method changes (switching back restores them); only the chosen method's go
+ * to the engine. Optional figures are NaN when empty.
+ */
+export interface CoatValues {
+  method: CoatMethod;
+  /** Dip: mm/s, mPa·s, mN/m. */
+  withdrawalMmPerS: number;
+  viscosityMPaS: number;
+  surfaceTensionMNPerM: number;
+  /** Spin: rpm, and one measured film (rpm, dry nm). */
+  rpm: number;
+  calibrationRpm: number;
+  calibrationDryThicknessNm: number;
+  /** Wet film: µm. */
+  wetThicknessUm: number;
+  /** nm; NaN when no target. */
+  targetDryThicknessNm: number;
+  /** m²; NaN when no area. */
+  areaM2: number;
+}
+
+/** A new coat: dip at 1 mm/s in an alcoholic sol (≈ 2.5 mPa·s, ≈ 23 mN/m, ethanol-like; from memory). */
+export const BLANK_COAT: CoatValues = {
+  method: "none",
+  withdrawalMmPerS: 1,
+  viscosityMPaS: 2.5,
+  surfaceTensionMNPerM: 23,
+  rpm: 2000,
+  calibrationRpm: 2000,
+  calibrationDryThicknessNm: 500,
+  wetThicknessUm: 10,
+  targetDryThicknessNm: Number.NaN,
+  areaM2: Number.NaN,
+};
+
+/** The form's coat field each coating input path belongs to. */
+const COAT_FIELDS: Record<string, keyof CoatValues> = {
+  method: "method",
+  withdrawalMmPerS: "withdrawalMmPerS",
+  viscosityMPaS: "viscosityMPaS",
+  surfaceTensionMNPerM: "surfaceTensionMNPerM",
+  rpm: "rpm",
+  "calibration.rpm": "calibrationRpm",
+  "calibration.dryThicknessNm": "calibrationDryThicknessNm",
+  calibration: "calibrationRpm",
+  wetThicknessUm: "wetThicknessUm",
+  targetDryThicknessNm: "targetDryThicknessNm",
+  areaM2: "areaM2",
+};
+
+/** The inputs each method needs (the others are kept but not sent). */
+export const COAT_REQUIRED: Record<CoatMethod, (keyof CoatValues)[]> = {
+  none: [],
+  dip: ["withdrawalMmPerS", "viscosityMPaS", "surfaceTensionMNPerM"],
+  spin: ["rpm", "calibrationRpm", "calibrationDryThicknessNm"],
+  wetFilm: ["wetThicknessUm"],
+};
 
 export interface EditorValues {
   name: string;
@@ -40,6 +101,8 @@ export interface EditorValues {
   additionOrder?: string[];
   /** g/cm³; NaN when not measured. */
   measuredBulkDensity: number;
+  /** How the coat is applied (method "none": no film predictions). */
+  coating: CoatValues;
 }
 
 const num = (what: string) => z.number({ error: `Enter a number for the ${what}` });
@@ -96,6 +159,25 @@ export const editorSchema = z.object({
   marginC: num("margin"),
   measuredBulkDensity: z.number().or(z.nan()),
   additionOrder: z.array(z.string()).optional(),
+  coating: z
+    .object({
+      method: z.enum(["none", "dip", "spin", "wetFilm"]),
+      withdrawalMmPerS: z.number().or(z.nan()),
+      viscosityMPaS: z.number().or(z.nan()),
+      surfaceTensionMNPerM: z.number().or(z.nan()),
+      rpm: z.number().or(z.nan()),
+      calibrationRpm: z.number().or(z.nan()),
+      calibrationDryThicknessNm: z.number().or(z.nan()),
+      wetThicknessUm: z.number().or(z.nan()),
+      targetDryThicknessNm: z.number().or(z.nan()),
+      areaM2: z.number().or(z.nan()),
+    })
+    .superRefine((c, ctx) => {
+      // The chosen method's inputs must be numbers; the engine checks their ranges.
+      for (const key of COAT_REQUIRED[c.method]) {
+        if (!Number.isFinite(c[key] as number)) ctx.addIssue({ code: "custom", path: [key], message: "Enter a number" });
+      }
+    }),
 });
 
 const clean = (x: number) => (Number.isFinite(x) ? Number(x.toPrecision(12)) : x);
@@ -130,7 +212,54 @@ export function blankValues(library: Material[]): EditorValues {
     ],
     marginC: 20,
     measuredBulkDensity: Number.NaN,
+    coating: { ...BLANK_COAT },
   };
+}
+
+/** Form values of a stored coat (absent: method "none" with the blank inputs). */
+function coatFromInput(spec: CoatingSpec | undefined): CoatValues {
+  if (!spec) return { ...BLANK_COAT };
+  const common = {
+    targetDryThicknessNm: spec.targetDryThicknessNm ?? Number.NaN,
+    areaM2: spec.areaM2 ?? Number.NaN,
+  };
+  if (spec.method === "dip") {
+    const { withdrawalMmPerS, viscosityMPaS, surfaceTensionMNPerM } = spec;
+    return { ...BLANK_COAT, method: "dip", withdrawalMmPerS, viscosityMPaS, surfaceTensionMNPerM, ...common };
+  }
+  if (spec.method === "spin") {
+    return {
+      ...BLANK_COAT,
+      method: "spin",
+      rpm: spec.rpm,
+      calibrationRpm: spec.calibration.rpm,
+      calibrationDryThicknessNm: spec.calibration.dryThicknessNm,
+      ...common,
+    };
+  }
+  return { ...BLANK_COAT, method: "wetFilm", wetThicknessUm: spec.wetThicknessUm, ...common };
+}
+
+/** The engine's coating input for the form's coat; undefined for method "none". */
+export function coatingFromValues(c: CoatValues | undefined): CoatingSpec | undefined {
+  if (!c || c.method === "none") return undefined;
+  const targets = {
+    ...(Number.isFinite(c.targetDryThicknessNm) ? { targetDryThicknessNm: c.targetDryThicknessNm } : {}),
+    ...(Number.isFinite(c.areaM2) ? { areaM2: c.areaM2 } : {}),
+  };
+  if (c.method === "dip") {
+    return {
+      method: "dip",
+      withdrawalMmPerS: c.withdrawalMmPerS,
+      viscosityMPaS: c.viscosityMPaS,
+      surfaceTensionMNPerM: c.surfaceTensionMNPerM,
+      ...targets,
+    };
+  }
+  if (c.method === "spin") {
+    return { method: "spin", rpm: c.rpm, calibration: { rpm: c.calibrationRpm, dryThicknessNm: c.calibrationDryThicknessNm }, ...targets };
+  }
+  return { method: "wetFilm", wetThicknessUm: c.wetThicknessUm, ...targets };
 }
 
 /** Form values from a saved input. */
@@ -167,6 +296,7 @@ export function valuesFromInput(input: FormulationInput, meta: { name: string; p
     steps: input.steps.map((s) => ({ ...s, stage: s.stage ?? "curing", atmosphere: s.atmosphere ?? "air" })),
     marginC: input.marginC ?? 20,
     measuredBulkDensity: input.measuredBulkDensity ?? Number.NaN,
+    coating: coatFromInput(input.coating),
     ...(input.additionOrder ? { additionOrder: [...input.additionOrder] } : {}),
   };
 }
@@ -233,6 +363,8 @@ export function inputFromValues(v: EditorValues, records: (id: string) => Materi
   if (v.substrateId) input.substrateId = v.substrateId;
   if (Number.isFinite(v.measuredBulkDensity)) input.measuredBulkDensity = v.measuredBulkDensity;
   if (v.additionOrder?.length) input.additionOrder = [...v.additionOrder];
+  const coating = coatingFromValues(v.coating);
+  if (coating) input.coating = coating;
   return input;
 }
 
@@ -273,6 +405,11 @@ export function formFieldFor(path: string, v: EditorValues, input: FormulationIn
   if (head === "substrateId") return { field: "substrateId" };
   if (head === "steps") return { field: parts.length >= 3 ? `steps.${parts[1]}.${parts[2]}` : "steps" };
   if (head === "marginC" || head === "measuredBulkDensity") return { field: head };
+  if (head === "coating") {
+    const rest = parts.slice(1).join(".");
+    const key = COAT_FIELDS[rest] ?? COAT_FIELDS[parts[1] ?? ""] ?? "method";
+    return { field: `coating.${key}` };
+  }
   if (head === "materials" && parts[1] !== undefined) {
     const material = input.materials[Number(parts[1])];
     if (material) {

@@ -36,6 +36,16 @@ const FIELD_LABELS: Record<string, string> = {
   measuredBulkDensity: "Measured bulk density",
   components: "Components",
   steps: "Process steps",
+  "coating.method": "Coating method",
+  "coating.withdrawalMmPerS": "Withdrawal speed",
+  "coating.viscosityMPaS": "Sol viscosity",
+  "coating.surfaceTensionMNPerM": "Surface tension",
+  "coating.rpm": "Spin speed",
+  "coating.calibrationRpm": "Measured film, spin speed",
+  "coating.calibrationDryThicknessNm": "Measured film, dry thickness",
+  "coating.wetThicknessUm": "Wet film thickness",
+  "coating.targetDryThicknessNm": "Target dry thickness",
+  "coating.areaM2": "Area to coat",
 };
 
 /**

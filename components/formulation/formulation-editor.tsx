@@ -13,6 +13,7 @@ import { plural, pluralWord } from "@/components/ui/plural";
 import type { Revision } from "@/lib/client/formulations";
 import type { Material } from "@/lib/formulation";
 import { BasisFieldset } from "./basis-fieldset";
+import { CoatFieldset } from "./coat-fieldset";
 import { ComponentsFieldset } from "./components-fieldset";
 import { EditorContext, type EditorContextValue } from "./editor-context";
 import { blankValues, editorSchema, engineMaterial, valuesFromInput, type EditorValues } from "./editor-model";
@@ -122,6 +123,7 @@ export function FormulationEditor({ library, revision, canSubmit }: FormulationE
           <ModifiersFieldset />
           <ReagentsFieldset />
           <StepsFieldset />
+          <CoatFieldset />
           {live.messages.general ? <ErrorPanel title="The engine cannot compute this" message={live.messages.general} /> : null}
         </div>
         <div className="flex min-w-0 flex-col gap-3">

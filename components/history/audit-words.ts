@@ -28,6 +28,7 @@ export const ACTION_LABELS: Record<AuditAction, string> = {
   "batch.notes_changed": "changed a batch's notes",
   "batch.closed": "closed a batch",
   "batch.settings_changed": "changed the batch tolerance settings",
+  "team.currency_changed": "changed the team's currency",
   "attachment.added": "added a document",
   "attachment.removed": "removed a document",
 };

@@ -10,6 +10,8 @@ export interface PropertyField {
   type: "number" | "text" | "flag" | "solvent";
   /** Kinds for which the field is shown (all when absent). */
   kinds?: readonly MaterialKind[];
+  /** The unit is money: the form puts the team's currency code before it. */
+  money?: boolean;
 }
 
 export interface PropertyGroup {
@@ -46,6 +48,7 @@ export const PROPERTY_GROUPS: PropertyGroup[] = [
       { path: "precursor.leavingAlcohol.name", label: "Alcohol released", unit: "name", type: "text" },
       { path: "precursor.leavingAlcohol.molarMass", label: "Molar mass of that alcohol", unit: "g/mol", type: "number" },
       { path: "precursor.conversionTemperatureC", label: "Conversion temperature", unit: "°C", type: "number" },
+      { path: "precursor.residueRefractiveIndex", label: "Refractive index of the residue", unit: "n_D at 589 nm, 20–25 °C, as in a low-temperature hybrid", type: "number" },
       { path: "fastHydrolysing", label: "Hydrolyses fast (Ti, Zr, Al alkoxides): wants a modifier", unit: "yes / no", type: "flag" },
       { path: "moistureSensitive", label: "Moisture-sensitive and flammable", unit: "not set: decided by the kind", type: "flag" },
     ],
@@ -71,6 +74,22 @@ export const PROPERTY_GROUPS: PropertyGroup[] = [
       { path: "thermal.degradationOnsetInertC", label: "Degradation onset in inert gas", unit: "°C", type: "number" },
       { path: "thermal.heatDeflectionC", label: "Heat deflection temperature at 1.8 MPa (ISO 75-2 method A)", unit: "°C, short-term limit", type: "number", kinds: ["substrate"] },
       { path: "thermal.maxServiceC", label: "Grade maximum (continuous use)", unit: "°C", type: "number" },
+    ],
+  },
+  {
+    title: "For the coat's predictions: index, boiling point, equivalents, price",
+    fields: [
+      {
+        path: "refractiveIndex",
+        label: "Refractive index",
+        unit: "n_D at 589 nm, 20–25 °C; of the dry phase, the part or the bonded ligand",
+        type: "number",
+        kinds: ["organic", "substrate", "modifier"],
+      },
+      { path: "boilingPointC", label: "Boiling point", unit: "°C at 101.3 kPa; up to 250 °C counts as VOC", type: "number", kinds: ["solvent", "catalyst", "modifier", "organic"] },
+      { path: "epoxyEquivalentWeight", label: "Epoxy equivalent weight (EEW)", unit: "g/eq", type: "number", kinds: ["precursor", "organic", "modifier"] },
+      { path: "amineHydrogenEquivalentWeight", label: "Amine hydrogen equivalent weight (AHEW)", unit: "g/eq", type: "number", kinds: ["precursor", "organic", "modifier", "catalyst"] },
+      { path: "pricePerKg", label: "Price", unit: "per kg as supplied", type: "number", money: true, kinds: ["precursor", "organic", "modifier", "solvent", "water", "catalyst"] },
     ],
   },
 ];

@@ -13,6 +13,7 @@ import { MATERIAL_KINDS, materialSchema, type Material, type MaterialKind } from
 import { ApiRequestError, errorMessage } from "@/lib/client/fetcher";
 import { useInvalidate } from "@/lib/client/invalidate";
 import { createMaterial, deleteMaterial, updateMaterial, useLibrary, type LibraryMaterial } from "@/lib/client/materials";
+import { useTeamCurrency } from "@/lib/client/team-settings";
 import { ALL_FIELDS, formKey, PROPERTY_GROUPS } from "./material-fields";
 
 type FormValues = Record<string, string>;
@@ -118,6 +119,7 @@ export function MaterialForm({ material, canSave, canDelete }: MaterialFormProps
   const nameText = useWatch({ control, name: "name" }) ?? "";
   const solventFraction = useWatch({ control, name: "solventFraction" }) ?? "";
   const library = useLibrary();
+  const currency = useTeamCurrency();
   const solvents = (library.data?.rows ?? []).filter((m) => m.kind === "solvent" && m.id !== material?.id);
   const errors = formState.errors;
 
@@ -194,7 +196,7 @@ export function MaterialForm({ material, canSave, canDelete }: MaterialFormProps
           <input {...text("casNumber", "num")} />
         </Field>
       </fieldset>
-      {PROPERTY_GROUPS.filter((g) => !g.kinds || g.kinds.includes(kind)).map((g) => (
+      {PROPERTY_GROUPS.filter((g) => (!g.kinds || g.kinds.includes(kind)) && g.fields.some((f) => !f.kinds || f.kinds.includes(kind))).map((g) => (
         <fieldset key={g.title} className="flex flex-col gap-2 rounded border border-rule bg-panel p-3">
           <legend className="px-1 text-sm font-semibold">{g.title}</legend>
           {g.fields
@@ -222,7 +224,7 @@ export function MaterialForm({ material, canSave, canDelete }: MaterialFormProps
                 );
               return (
                 <div key={f.path} className="grid gap-2 border-b border-rule/60 pb-2 last:border-0 sm:grid-cols-[minmax(0,2fr)_minmax(0,3fr)]">
-                  <Field id={`m-${key}`} label={f.label} hint={f.unit ? `(${f.unit})` : undefined} error={errors[key]?.message}>
+                  <Field id={`m-${key}`} label={f.label} hint={f.unit ? `(${f.money ? `${currency} ` : ""}${f.unit})` : undefined} error={errors[key]?.message}>
                     {input}
                   </Field>
                   <Field id={`m-src__${key}`} label={<span className="font-normal text-muted">Source of this value</span>}>

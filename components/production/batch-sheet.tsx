@@ -3,6 +3,7 @@
 import { useBalanceResolution } from "@/components/results/balance";
 import { BalanceSelect } from "@/components/results/balance-select";
 import { ATMOSPHERE_LABELS, materialsById, LINE_ROLE_LABELS, STAGE_LABELS } from "@/components/results/words";
+import { BatchCoat } from "@/components/production/batch-coat";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { SAFETY_REMINDER } from "@/components/ui/hazards";
@@ -51,7 +52,7 @@ function basisWords(input: FormulationInput): string {
   return `gel body of ${fmtVolume(b.volumeMl)} at ${b.bulkDensity} g/cm³`;
 }
 
-/** A printable batch sheet: order of addition, targets, blank columns to fill in, safety cautions. */
+/** A printable batch sheet: order of addition, targets, blank columns to fill in, the coating settings and VOC, safety cautions. */
 export function BatchSheet({ formulationName, project, revisionNumber, released, releasedAt, input, result }: BatchSheetProps) {
   const [resolution, setResolution] = useBalanceResolution();
   const byId = materialsById(input);
@@ -180,6 +181,7 @@ export function BatchSheet({ formulationName, project, revisionNumber, released,
           <strong className="num">{fmtTemp(result.thermal.maxAllowedC)}</strong>. Check the oven set point and its calibration.
         </p>
       ) : null}
+      <BatchCoat input={input} result={result} cellClassName={cell} headClassName={head} />
 
       <footer className="mt-6 grid gap-4 text-sm sm:grid-cols-2">
         <p>

@@ -5,7 +5,9 @@ import { SafetyNote } from "@/components/ui/hazards";
 import { Panel } from "@/components/ui/panel";
 import type { FormulationInput, FormulationResult } from "@/lib/formulation";
 import { useBalanceResolution } from "./balance";
+import { useTeamCurrency } from "@/lib/client/team-settings";
 import { BalanceSelect } from "./balance-select";
+import { CoatPanel } from "./coat-panel";
 import { CompositePanel } from "./composite-panel";
 import { LigandsPanel } from "./ligands-panel";
 import { NoticesList } from "./notices-list";
@@ -23,6 +25,7 @@ interface ResultsViewProps {
 /** Every figure of a computed formulation: recipe, water, sol, composite, thermal, notices. */
 export function ResultsView({ input, result, thermalFirst = false }: ResultsViewProps) {
   const [resolution, setResolution] = useBalanceResolution();
+  const currency = useTeamCurrency();
   const dispensed = new Set(result.lines.map((l) => l.materialId));
   const hazardous = input.materials.filter((m) => dispensed.has(m.id));
   const thermal = (
@@ -56,6 +59,9 @@ export function ResultsView({ input, result, thermalFirst = false }: ResultsView
           <CompositePanel input={input} result={result} resolution={resolution} />
         </Panel>
       </div>
+      <Panel title="What the coat will be" id="coat">
+        <CoatPanel input={input} result={result} currency={currency} />
+      </Panel>
       {thermalFirst ? null : thermal}
     </div>
   );

@@ -40,6 +40,22 @@ export const batchSettings = mysqlTable("batch_settings", {
   updatedAt: updatedAt(),
 });
 
+/**
+ * A team's own settings that are not about batches (today: the currency its
+ * material prices are in). Its own table rather than a column on
+ * batch_settings: every member reads it, and a team that never set a batch
+ * tolerance still has a currency. When absent, lib/currency.ts's default applies.
+ */
+export const teamSettings = mysqlTable("team_settings", {
+  teamId: varchar("team_id", { length: 36 })
+    .primaryKey()
+    .references(() => organization.id, { onDelete: "cascade" }),
+  /** ISO 4217 three-letter code, upper case. */
+  currency: varchar("currency", { length: 3 }).notNull(),
+  updatedBy: userRef("updated_by").references(() => user.id, { onDelete: "set null" }),
+  updatedAt: updatedAt(),
+});
+
 /** One batch made in production from a released revision. */
 export const batchRecords = mysqlTable(
   "batch_records",
@@ -116,3 +132,4 @@ export type BatchRecordRow = typeof batchRecords.$inferSelect;
 export type AttachmentRow = typeof attachments.$inferSelect;
 export type ImportPreviewRow = typeof importPreviews.$inferSelect;
 export type BatchSettingsRow = typeof batchSettings.$inferSelect;
+export type TeamSettingsRow = typeof teamSettings.$inferSelect;

@@ -1,11 +1,12 @@
 /**
- * A formulation revision as an .xlsx workbook (overview, batch sheet, dry
- * composite, thermal check and the full input for re-import) and its batch
- * sheet as CSV.
+ * A formulation revision as an .xlsx workbook (overview with the coat
+ * predictions, batch sheet, coating and VOC, dry composite, thermal check and
+ * the full input for re-import) and its batch sheet as CSV.
  */
 import { ATMOSPHERE_LABELS, LIMIT_LABELS, LINE_ROLE_LABELS, STAGE_LABELS } from "@/lib/labels";
 import { DEFAULT_BALANCE_RESOLUTION_G, VOLUME_RESOLUTION_ML } from "@/lib/batches";
 import { hardLimit, type FormulationInput, type FormulationResult, type Material } from "@/lib/formulation";
+import { batchCoatRows, coatCells, coatPredictionRows } from "./coat-rows";
 import { inputSheets } from "./input-sheets";
 import { SHEET, readMeRows } from "./template";
 import type { Cell } from "./types";
@@ -50,6 +51,15 @@ function materialNames(input: FormulationInput): Map<string, Material> {
 export interface BatchSheetOptions {
   /** The balance's readability, g (the team's batch settings); masses are shown to it. Default 0.01 g. */
   balanceResolutionGrams?: number;
+  /** The team's currency code, written beside each cost (default: "team's currency"). */
+  currency?: string;
+}
+
+/** The Coating and VOC table of the batch sheet (Item / Value / Unit); null when the revision has neither. */
+export function coatAndVocTable(revision: RevisionForExport): { header: Cell[][]; rows: Cell[][]; rowSteps: (number | undefined)[] } | null {
+  const rows = batchCoatRows(revision.input, revision.result);
+  if (rows.length === 0) return null;
+  return { header: [["Setting", "Value", "Unit"]], ...coatCells(rows) };
 }
 
 /**
@@ -92,7 +102,7 @@ export function batchSheetTable(
   };
 }
 
-function overviewRows(revision: RevisionForExport): Cell[][] {
+function overviewRows(revision: RevisionForExport, currency?: string): { rows: Cell[][]; rowSteps: (number | undefined)[] } {
   const result = revision.result;
   const rows: Cell[][] = [
     ["Formulation", revision.formulationName, ""],
@@ -114,7 +124,7 @@ function overviewRows(revision: RevisionForExport): Cell[][] {
   }
   if (!result) {
     rows.push(["Cannot be computed", revision.computeError ?? "no result", ""]);
-    return rows;
+    return { rows, rowSteps: [] };
   }
   rows.push(
     ["Sol mass", result.sol.massGrams, "g"],
@@ -135,9 +145,9 @@ function overviewRows(revision: RevisionForExport): Cell[][] {
       [`Solvent: ${nameOf(result.solvent.materialId)} carried by other materials`, result.solvent.carriedGrams, "g"],
     );
   }
-  rows.push(
-    ["Thermal check", result.thermal.status, ""],
-  );
+  const coat = coatCells(coatPredictionRows(revision.input, result, currency));
+  const rowSteps: (number | undefined)[] = [...rows.map(() => undefined), ...coat.rowSteps];
+  rows.push(...coat.rows, ["Thermal check", result.thermal.status, ""]);
   const safety = result.notices.filter((n) => SAFETY_CODES.has(n.code));
   const other = result.notices.filter((n) => !SAFETY_CODES.has(n.code));
   for (const notice of other) rows.push([`Notice (${notice.level})`, notice.message, ""]);
@@ -147,7 +157,7 @@ function overviewRows(revision: RevisionForExport): Cell[][] {
     "Follow the supplier's safety data sheet for each material, local regulations and licensed practice. This sheet does not replace them.",
     "",
   ]);
-  return rows;
+  return { rows, rowSteps };
 }
 
 function compositeRows(revision: RevisionForExport): Cell[][] {
@@ -245,9 +255,12 @@ function thermalSheet(revision: RevisionForExport): SheetSpec {
 /** Every sheet of a revision's workbook. */
 export function revisionSheets(revision: RevisionForExport, options: BatchSheetOptions = {}): SheetSpec[] {
   const batch = batchSheetTable(revision, options);
+  const overview = overviewRows(revision, options.currency);
+  const coat = coatAndVocTable(revision);
   return [
-    { name: SHEET.overview, header: [["Item", "Value", "Unit"]], rows: overviewRows(revision), widths: [30, 90, 32] },
+    { name: SHEET.overview, header: [["Item", "Value", "Unit"]], rows: overview.rows, rowSteps: overview.rowSteps, widths: [30, 90, 32] },
     { name: SHEET.batchSheet, header: batch.header, rows: batch.rows, steps: batch.steps, widths: [7, 34, 14, 16, 16, 16, 14, 12, 10] },
+    ...(coat ? [{ name: SHEET.coatAndVoc, header: coat.header, rows: coat.rows, rowSteps: coat.rowSteps, widths: [40, 16, 60] }] : []),
     {
       name: SHEET.composite,
       header: [["Phase", "Residue formula", "Weight fraction (mass fraction)", "Volume fraction (fraction)", "Density (g/cm³)"]],
@@ -273,10 +286,19 @@ export function revisionWorkbook(revision: RevisionForExport, options: BatchShee
   return buildWorkbook(revisionSheets(revision, options));
 }
 
-/** The batch sheet alone as CSV, masses rounded to the balance resolution and volumes to 0.01 mL. */
+/**
+ * The batch sheet as CSV, masses rounded to the balance resolution and
+ * volumes to 0.01 mL; then, when the revision has a coating or a VOC
+ * figure, the "[Coating and VOC]" table (settings to three significant
+ * figures, with units).
+ */
 export function batchSheetCsv(revision: RevisionForExport, options: BatchSheetOptions = {}): string {
   const batch = batchSheetTable(revision, options);
-  return toCsv([{ name: SHEET.batchSheet, rows: [...batch.header, ...batch.rows], steps: batch.steps }]);
+  const coat = coatAndVocTable(revision);
+  return toCsv([
+    { name: SHEET.batchSheet, rows: [...batch.header, ...batch.rows], steps: batch.steps },
+    ...(coat ? [{ name: SHEET.coatAndVoc, rows: [...coat.header, ...coat.rows], rowSteps: [...coat.header.map(() => undefined), ...coat.rowSteps] }] : []),
+  ]);
 }
 
 /** A file name without characters that trouble file systems or headers. */

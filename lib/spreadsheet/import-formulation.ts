@@ -9,13 +9,13 @@ import {
   computeFormulation,
   formulationInputSchema,
   isFormulationError,
-  WEIGHT_FRACTION_SCALE_TOLERANCE,
   type FormulationInput,
   type Material,
 } from "@/lib/formulation";
-import { Dec, ZERO } from "@/lib/formulation/decimal";
 import { headerKey, headerStem, isBlankRow, readFlag, readNumber, readText, SheetProblems } from "./cells";
-import { optionalColumn, readModifiersSheet, readStepWord } from "./import-modifiers";
+import { readCoatingSheet } from "./coating-sheet";
+import { readModifiersSheet } from "./import-modifiers";
+import { readComponentsSheet, readOrderSheet, readStepsSheet } from "./import-tables";
 import {
   DISPENSED_KINDS,
   proposeMaterials,
@@ -26,16 +26,10 @@ import {
 } from "./import-materials";
 import {
   BASIS_LABELS,
-  COMPONENT_COLUMNS,
   INPUT_SETTINGS,
   MATERIAL_COLUMNS,
-  ORDER_COLUMNS,
   SHEET,
   SOLVENT_MODE_LABELS,
-  ATMOSPHERE_WORDS,
-  STAGE_WORDS,
-  STEP_COLUMNS,
-  STEP_EXTRA_COLUMNS,
   WATER_RATIO_LABELS,
   type InputSettingKey,
 } from "./template";
@@ -73,29 +67,6 @@ export interface FormulationPreview {
 
 function findSheet(sheets: readonly SheetGrid[], name: string): SheetGrid | undefined {
   return sheets.find((s) => headerKey(s.name) === headerKey(name));
-}
-
-/** Column indexes of a simple table by its expected headers (matched leniently), header in row 1. */
-function tableColumns(sheet: SheetGrid, headers: readonly string[], p: SheetProblems): (number | undefined)[] {
-  const row = sheet.rows[0] ?? [];
-  const keys = row.map((cell) => {
-    const text = readText(cell);
-    return text ? [headerKey(text), headerStem(text)] : [];
-  });
-  return headers.map((header) => {
-    const index = keys.findIndex((k) => k.includes(headerKey(header)) || k.includes(headerStem(header)));
-    if (index < 0) {
-      p.error(0, null, `Row ${p.rowNumber(0)} must be the header row with a “${header}” column.`);
-      return undefined;
-    }
-    return index;
-  });
-}
-
-function dataRows(sheet: SheetGrid): number[] {
-  const out: number[] = [];
-  for (let r = 1; r < sheet.rows.length; r++) if (!isBlankRow(sheet.rows[r])) out.push(r);
-  return out;
 }
 
 /**
@@ -346,108 +317,15 @@ export function previewFormulationImport(
   const marginC = number("marginC", "marginC");
   const measuredBulkDensity = number("measuredBulkDensity", "measuredBulkDensity");
 
-  // Components.
-  const components: { materialId: string; weightFraction: number | undefined }[] = [];
+  // Components, modifiers, coating, process steps and addition order.
+  const locate = (path: string, loc: Location) => locations.set(path, loc);
   const componentsSheet = findSheet(sheets, SHEET.components);
-  if (!componentsSheet) {
-    problems.push({ level: "error", sheet: SHEET.components, row: null, column: null, columnLetter: null, message: `The file has no “${SHEET.components}” sheet (or table).` });
-  } else {
-    const p = new SheetProblems(problems, componentsSheet);
-    const [materialCol, fractionCol] = tableColumns(componentsSheet, COMPONENT_COLUMNS, p);
-    if (materialCol !== undefined && fractionCol !== undefined) {
-      const fractionAt = { index: fractionCol, header: COMPONENT_COLUMNS[1] };
-      const materialAt = { index: materialCol, header: COMPONENT_COLUMNS[0] };
-      let total = ZERO;
-      let complete = true;
-      let lastRow = 0;
-      for (const r of dataRows(componentsSheet)) {
-        const row = componentsSheet.rows[r]!;
-        const i = components.length;
-        lastRow = r;
-        const materialName = readText(row[materialCol]);
-        const at: Location = { sheet: componentsSheet, rowIndex: r, col: materialAt };
-        locations.set(`components.${i}`, at);
-        locations.set(`components.${i}.materialId`, at);
-        locations.set(`components.${i}.weightFraction`, { sheet: componentsSheet, rowIndex: r, col: fractionAt });
-        if (!materialName) p.error(r, materialAt, "Each component needs a material name.");
-        const { value, error } = readNumber(row[fractionCol], "mass fraction");
-        if (error) p.error(r, fractionAt, `Weight fraction: ${error}.`);
-        else if (value === undefined) p.error(r, fractionAt, `“${materialName ?? "This component"}” needs a weight fraction.`);
-        if (value === undefined) complete = false;
-        else total = total.plus(new Dec(value));
-        components.push({ materialId: materialName ? resolve(materialName, at) : "", weightFraction: value });
-      }
-      if (components.length === 0) p.error(null, null, "At least one component (a precursor or organic phase with its weight fraction) is needed.");
-      else if (complete && total.minus(1).abs().greaterThan(WEIGHT_FRACTION_SCALE_TOLERANCE)) {
-        // The engine's own rule: a sum within 0.5 % of 1 is scaled to 1 (with a notice), beyond it refused.
-        p.error(lastRow, fractionAt, `Weight fractions sum to ${Number(total.toPrecision(8))}; they must sum to 1.`);
-        locations.set("components", { sheet: componentsSheet, rowIndex: lastRow, col: fractionAt });
-      }
-    }
-  }
+  const components = readComponentsSheet(componentsSheet, problems, resolve, locate);
+  const steps = readStepsSheet(findSheet(sheets, SHEET.steps), problems, locate);
+  const modifiers = readModifiersSheet(findSheet(sheets, SHEET.modifiers), problems, resolve, locate);
+  const coating = readCoatingSheet(findSheet(sheets, SHEET.coating), problems, locate);
+  const additionOrder = readOrderSheet(findSheet(sheets, SHEET.order), problems, resolve, locate);
 
-  // Process steps.
-  const steps: { name?: string; temperatureC?: number; durationH?: number; stage?: string; atmosphere?: string }[] = [];
-  const stepsSheet = findSheet(sheets, SHEET.steps);
-  if (stepsSheet) {
-    const p = new SheetProblems(problems, stepsSheet);
-    const cols = tableColumns(stepsSheet, STEP_COLUMNS, p);
-    if (cols.every((c) => c !== undefined)) {
-      const [nameCol, tempCol, durCol] = cols as number[];
-      const [stageCol, atmosphereCol] = STEP_EXTRA_COLUMNS.map((header) => optionalColumn(stepsSheet, header));
-      for (const r of dataRows(stepsSheet)) {
-        const row = stepsSheet.rows[r]!;
-        const i = steps.length;
-        const at = (index: number, header: string): Location => ({ sheet: stepsSheet, rowIndex: r, col: { index, header } });
-        locations.set(`steps.${i}`, at(nameCol!, STEP_COLUMNS[0]));
-        locations.set(`steps.${i}.name`, at(nameCol!, STEP_COLUMNS[0]));
-        locations.set(`steps.${i}.temperatureC`, at(tempCol!, STEP_COLUMNS[1]));
-        locations.set(`steps.${i}.durationH`, at(durCol!, STEP_COLUMNS[2]));
-        const t = readNumber(row[tempCol!], "°C");
-        const d = readNumber(row[durCol!], "h");
-        if (t.error) p.error(r, { index: tempCol!, header: STEP_COLUMNS[1] }, `Temperature: ${t.error}.`);
-        if (d.error) p.error(r, { index: durCol!, header: STEP_COLUMNS[2] }, `Duration: ${d.error}.`);
-        const stage = readStepWord(row, stageCol, STEP_EXTRA_COLUMNS[0], STAGE_WORDS, "Stage", "curing", p, r);
-        const atmosphere = readStepWord(row, atmosphereCol, STEP_EXTRA_COLUMNS[1], ATMOSPHERE_WORDS, "Atmosphere", "air", p, r);
-        if (stageCol !== undefined) locations.set(`steps.${i}.stage`, at(stageCol, STEP_EXTRA_COLUMNS[0]));
-        if (atmosphereCol !== undefined) locations.set(`steps.${i}.atmosphere`, at(atmosphereCol, STEP_EXTRA_COLUMNS[1]));
-        steps.push({
-          name: readText(row[nameCol!]),
-          temperatureC: t.value,
-          durationH: d.value,
-          ...(stage !== undefined ? { stage } : {}),
-          ...(atmosphere !== undefined ? { atmosphere } : {}),
-        });
-      }
-    }
-  }
-
-  // Modifiers (optional sheet).
-  const modifiers = readModifiersSheet(findSheet(sheets, SHEET.modifiers), problems, resolve, (path, loc) => locations.set(path, loc));
-
-  // Addition order.
-  let additionOrder: string[] | undefined;
-  const orderSheet = findSheet(sheets, SHEET.order);
-  if (orderSheet) {
-    const p = new SheetProblems(problems, orderSheet);
-    const [, materialCol] = tableColumns(orderSheet, ORDER_COLUMNS, p);
-    if (materialCol !== undefined) {
-      const list: string[] = [];
-      for (const r of dataRows(orderSheet)) {
-        const materialName = readText(orderSheet.rows[r]![materialCol]);
-        const at: Location = { sheet: orderSheet, rowIndex: r, col: { index: materialCol, header: ORDER_COLUMNS[1] } };
-        locations.set(`additionOrder.${list.length}`, at);
-        if (!materialName) {
-          p.error(r, at.col, "Each position needs a material name.");
-          continue;
-        }
-        list.push(resolve(materialName, at));
-      }
-      if (list.length > 0) additionOrder = list;
-    }
-  }
-
-  // Only the materials the formulation uses, in the file's order, then library materials named elsewhere.
   const materials: Material[] = used.map((x) => ({ ...x.material, id: x.id }));
   used.forEach((x, index) => {
     if (x.row === null) locations.set(`materials.${index}`, { sheet: componentsSheet ?? nowhere.sheet, rowIndex: null, col: null });
@@ -457,6 +335,7 @@ export function previewFormulationImport(
   if (solvent !== undefined) candidate.solvent = solvent;
   if (catalyst !== undefined) candidate.catalyst = catalyst;
   if (modifiers.length > 0) candidate.modifiers = modifiers;
+  if (coating !== undefined) candidate.coating = coating;
   if (substrateId !== undefined) candidate.substrateId = substrateId;
   if (marginC !== undefined) candidate.marginC = marginC;
   if (measuredBulkDensity !== undefined) candidate.measuredBulkDensity = measuredBulkDensity;

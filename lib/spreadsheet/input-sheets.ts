@@ -21,6 +21,7 @@ import {
   WATER_RATIO_LABELS,
   type InputSettingKey,
 } from "./template";
+import { coatingSheet } from "./coating-sheet";
 import { sourcePropertyLabel } from "./source-properties";
 import type { Cell } from "./types";
 import type { SheetSpec } from "./write";
@@ -81,7 +82,7 @@ export function materialSheets(materials: readonly Material[]): SheetSpec[] {
   ];
 }
 
-/** The Input, Components, Process steps, Addition order, Materials and Material sources sheets. */
+/** The Input, Components, Modifiers, Coating, Process steps, Addition order, Materials and Material sources sheets. */
 export function inputSheets(input: FormulationInput, meta: FormulationMeta): SheetSpec[] {
   const nameOf = new Map(input.materials.map((m) => [m.id, m.name]));
   const name = (id: string | undefined) => (id === undefined ? null : (nameOf.get(id) ?? id));
@@ -134,6 +135,7 @@ export function inputSheets(input: FormulationInput, meta: FormulationMeta): She
       rows: (input.modifiers ?? []).map((m) => [name(m.materialId), name(m.precursorId), m.molPerMetal]),
       widths: [36, 36, 22],
     },
+    coatingSheet(input),
     {
       name: SHEET.steps,
       header: [[...STEP_COLUMNS, ...STEP_EXTRA_COLUMNS]],

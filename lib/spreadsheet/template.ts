@@ -17,6 +17,8 @@ export const SHEET = {
   input: "Input",
   components: "Components",
   modifiers: "Modifiers",
+  coating: "Coating",
+  coatAndVoc: "Coating and VOC",
   steps: "Process steps",
   order: "Addition order",
   materials: "Materials",
@@ -26,7 +28,7 @@ export const SHEET = {
 } as const;
 
 /** Sheets the formulation import reads; every other sheet is for people and is ignored. */
-export const FORMULATION_INPUT_SHEETS = [SHEET.input, SHEET.components, SHEET.modifiers, SHEET.steps, SHEET.order, SHEET.materials, SHEET.sources] as const;
+export const FORMULATION_INPUT_SHEETS = [SHEET.input, SHEET.components, SHEET.modifiers, SHEET.coating, SHEET.steps, SHEET.order, SHEET.materials, SHEET.sources] as const;
 /** Sheets the materials import reads. */
 export const MATERIALS_INPUT_SHEETS = [SHEET.materials, SHEET.sources] as const;
 
@@ -58,10 +60,13 @@ export const MATERIAL_COLUMNS: readonly MaterialColumn[] = [
   { header: "Carried solvent (material name)", path: "solventId", type: "material", width: 24 },
   { header: "Water of crystallisation (mol per formula unit)", path: "crystalWaterPerFormula", type: "number", width: 14 },
   { header: "Dry phase density (g/cm³)", path: "phaseDensity", type: "number", width: 12 },
+  { header: "Refractive index (n_D, 589 nm, 20–25 °C)", path: "refractiveIndex", type: "number", width: 12 },
+  { header: "Boiling point at 1 atm (°C)", path: "boilingPointC", type: "number", width: 12 },
   { header: "Residue formula", path: "precursor.residueFormula", type: "text", width: 14 },
   { header: "Residue molar mass (g/mol)", path: "precursor.residueMolarMass", type: "number", width: 12 },
   { header: "Residue units per molecule", path: "precursor.residuePerMolecule", type: "number", width: 10 },
   { header: "Residue density (g/cm³)", path: "precursor.residueDensity", type: "number", width: 11 },
+  { header: "Residue refractive index (n_D, 589 nm, as in the dry coat)", path: "precursor.residueRefractiveIndex", type: "number", width: 12 },
   { header: "Network-forming atoms per molecule", path: "precursor.networkAtomsPerMolecule", type: "number", width: 12 },
   { header: "Hydrolysable groups per molecule", path: "precursor.hydrolysableGroupsPerMolecule", type: "number", width: 12 },
   { header: "Leaving alcohol", path: "precursor.leavingAlcohol.name", type: "text", width: 12 },
@@ -80,6 +85,9 @@ export const MATERIAL_COLUMNS: readonly MaterialColumn[] = [
   { header: "Degradation onset in inert gas (°C)", path: "thermal.degradationOnsetInertC", type: "number", width: 12 },
   { header: "Heat deflection temperature at 1.8 MPa, ISO 75-2 method A (°C)", path: "thermal.heatDeflectionC", type: "number", width: 14 },
   { header: "Maximum service temperature (°C)", path: "thermal.maxServiceC", type: "number", width: 12 },
+  { header: "Epoxy equivalent weight, EEW (g/eq)", path: "epoxyEquivalentWeight", type: "number", width: 12 },
+  { header: "Amine hydrogen equivalent weight, AHEW (g/eq)", path: "amineHydrogenEquivalentWeight", type: "number", width: 12 },
+  { header: "Price per kg as supplied (team's currency)", path: "pricePerKg", type: "number", width: 12 },
   { header: "GHS hazard statements", path: "hazards", type: "hazards", width: 24 },
 ];
 
@@ -130,6 +138,34 @@ export const INPUT_SETTINGS = {
 
 export type InputSettingKey = keyof typeof INPUT_SETTINGS;
 
+/** Columns of the Coating sheet (the same layout as the Input sheet). */
+export const COATING_COLUMNS = INPUT_COLUMNS;
+
+/**
+ * Settings of the optional Coating sheet: how the coat is applied, for the
+ * film predictions. A method's own settings are needed with it (dip: speed,
+ * viscosity, surface tension; spin: rpm and one measured film; wet film: its
+ * wet thickness); the target and the area go with any method. An empty sheet,
+ * or none, means no coating.
+ */
+export const COATING_SETTINGS = {
+  method: { label: "Coating method", unit: "dip | spin | wet film", type: "text" },
+  withdrawalMmPerS: { label: "Withdrawal speed", unit: "mm/s (dip)", type: "number" },
+  viscosityMPaS: { label: "Sol viscosity", unit: "mPa·s (dip)", type: "number" },
+  surfaceTensionMNPerM: { label: "Sol surface tension", unit: "mN/m (dip)", type: "number" },
+  rpm: { label: "Spin speed", unit: "rpm (spin)", type: "number" },
+  calibrationRpm: { label: "Calibration spin speed", unit: "rpm (spin: the speed of one measured film)", type: "number" },
+  calibrationDryThicknessNm: { label: "Calibration dry thickness", unit: "nm (spin: the dry thickness of that film)", type: "number" },
+  wetThicknessUm: { label: "Wet film thickness", unit: "µm (wet film)", type: "number" },
+  targetDryThicknessNm: { label: "Target dry thickness", unit: "nm (optional)", type: "number" },
+  areaM2: { label: "Area to coat", unit: "m² (optional)", type: "number" },
+} as const satisfies Record<string, { label: string; unit: string; type: "text" | "number" }>;
+
+export type CoatingSettingKey = keyof typeof COATING_SETTINGS;
+
+/** Plain words for the coating methods, and the engine's names. */
+export const COATING_METHOD_LABELS = { dip: "dip", spin: "spin", wetFilm: "wet film" } as const;
+
 /** Plain words for the basis types, and the engine's names. */
 export const BASIS_LABELS = { solidMass: "dry solid mass", solidsContent: "solids content", gelBody: "gel body" } as const;
 /** Plain words for the water conventions, and the engine's names. */
@@ -175,6 +211,7 @@ export function readMeRows(kind: "formulation" | "materials"): string[][] {
   const common = [
     ["Materials", "One row per material as supplied. Units are in the column headers; write numbers alone (0.933, not 0.933 g/cm³), with a point as decimal separator."],
     ["", "Kind is one of: precursor, organic, substrate, solvent, water, catalyst, modifier. Precursor columns (residue …) are needed for precursors only; dry phase density for organic phases; the ligand columns (alkoxy groups replaced, bonded ligand …) for modifiers (chelating or exchanging ligands such as acetylacetone)."],
+    ["", "Optical, VOC, cure and cost columns, all optional: refractive index (n_D at 589 nm) of an organic phase, a substrate or a modifier's bonded ligand; the residue's refractive index for precursors (as the residue is in a low-temperature dry coat); boiling point at 1 atm, 101.3 kPa (decides what counts as VOC); epoxy and amine hydrogen equivalent weights (g of the active compound per mol of groups); price per kg as supplied, in your team's currency."],
     ["", "Carried solvent: the name of the solvent a solution carries (its solvent fraction), e.g. 1-propanol in zirconium propoxide 70 %. Hydrolyses fast / moisture-sensitive and flammable: yes or no; blank leaves the usual choice by kind."],
     ["", `GHS hazard statements: codes separated by semicolons (H225; H319). Write "${NO_HAZARDS}" when the material has none; leave blank when not recorded.`],
     ["", "A material whose name or CAS number matches one in your team's library is linked to it; any other is offered for creation in the library."],
@@ -184,9 +221,10 @@ export function readMeRows(kind: "formulation" | "materials"): string[][] {
     ["Input", "Settings of the formulation, one per row: the setting in column A, its value in column B; the unit is in column C."],
     ["Components", "The dry composite: one row per precursor or organic phase with its weight fraction. Weight fractions must sum to 1."],
     ["Modifiers", "Optional: chelating or exchanging ligands, one row per modifier and the precursor it modifies, in mol of modifier per mol of that precursor's metal atoms."],
+    ["Coating", "Optional: how the coat is applied, for the film predictions. Coating method: dip (withdrawal speed, sol viscosity, sol surface tension), spin (spin speed and one measured film: its spin speed and dry thickness) or wet film (its wet thickness, laid by a bar, a slot die or a spray). Target dry thickness and area to coat are optional with any method. Leave the values blank for no coating."],
     ["Process steps", "Every step with its temperature and duration, its stage (sol, drying or curing; blank = curing) and atmosphere (air or inert; blank = air)."],
     ["Addition order", "Optional: the order in which the batch is made up, by material name. Materials not listed follow in the usual order."],
-    ["Overview, Batch sheet, Dry composite, Thermal check", "Written by Gelwright when a revision is exported; they are for reading and printing and are ignored on import."],
+    ["Overview, Batch sheet, Coating and VOC, Dry composite, Thermal check", "Written by Gelwright when a revision is exported; they are for reading and printing and are ignored on import."],
   ];
   return [
     ["Gelwright spreadsheet template", kind === "formulation" ? "Formulation" : "Materials library"],

@@ -21,6 +21,13 @@ export interface SheetSpec {
   rows: Cell[][];
   widths?: number[];
   steps?: (number | undefined)[];
+  /** Per data row: the resolution its numeric cells are shown at (for Item / Value / Unit tables); a column's step wins. */
+  rowSteps?: (number | undefined)[];
+}
+
+/** The step a cell is shown at: its column's, else its row's. */
+function stepAt(spec: { steps?: (number | undefined)[]; rowSteps?: (number | undefined)[] }, row: number, col: number): number | undefined {
+  return spec.steps?.[col] ?? spec.rowSteps?.[row];
 }
 
 /**
@@ -35,11 +42,11 @@ export function numberFormatFor(step: number): string {
 
 /** Gives the numeric cells of the columns with a step their number format (data rows only). */
 function formatColumns(ws: XLSX.WorkSheet, spec: SheetSpec): void {
-  if (!spec.steps) return;
+  if (!spec.steps && !spec.rowSteps) return;
   spec.rows.forEach((row, index) => {
     const r = spec.header.length + index;
     row.forEach((_, c) => {
-      const step = spec.steps?.[c];
+      const step = stepAt(spec, index, c);
       const cell = ws[XLSX.utils.encode_cell({ r, c })] as XLSX.CellObject | undefined;
       if (step !== undefined && cell?.t === "n") cell.z = numberFormatFor(step);
     });
@@ -126,7 +133,7 @@ function csvField(value: Cell): string {
  * A CSV file (RFC 4180, CRLF line ends, UTF-8 with a byte-order mark so
  * spreadsheet programs read the units' symbols right). Every text cell is
  * neutralised and every cell quoted; numbers are written in full precision
- * with a point, except in a column with a step (see SheetSpec), where they
+ * with a point, except in a column or row with a step (see SheetSpec), where they
  * are rounded to it.
  * Further tables follow after a blank line and a "[Sheet name]" line.
  *
@@ -136,18 +143,24 @@ function csvField(value: Cell): string {
  * ```
  */
 export function toCsv(
-  tables: readonly { name: string; rows: readonly (readonly (Cell | undefined)[])[]; steps?: (number | undefined)[] }[],
+  tables: readonly {
+    name: string;
+    rows: readonly (readonly (Cell | undefined)[])[];
+    steps?: (number | undefined)[];
+    /** Per row of `rows` (header rows included): see SheetSpec.rowSteps. */
+    rowSteps?: (number | undefined)[];
+  }[],
 ): string {
   const lines: string[] = [];
   tables.forEach((table, index) => {
     if (index > 0) lines.push("", csvField(`[${table.name}]`));
-    for (const row of safeRows(table.rows)) {
+    safeRows(table.rows).forEach((row, r) => {
       const shown = row.map((cell, c) => {
-        const step = table.steps?.[c];
+        const step = stepAt(table, r, c);
         return typeof cell === "number" && step !== undefined ? roundToResolution(cell, step) : cell;
       });
       lines.push(shown.map(csvField).join(","));
-    }
+    });
   });
   return `\uFEFF${lines.join("\r\n")}\r\n`;
 }

@@ -122,6 +122,8 @@ const cases: Case[] = [
   { route: "/api/batches/[id]/export", name: "export batch record (missing)", method: "GET", path: () => "/api/batches/missing/export", allowed: 404 },
   { route: "/api/batches/settings", name: "batch settings", method: "GET", path: () => "/api/batches/settings", allowed: 200 },
   { route: "/api/batches/settings", name: "change batch settings (invalid body)", method: "PUT", path: () => "/api/batches/settings", body: () => ({ toleranceFraction: 0 }), allowed: 422 },
+  { route: "/api/team/settings", name: "team settings (currency)", method: "GET", path: () => "/api/team/settings", allowed: 200 },
+  { route: "/api/team/settings", name: "change team currency (invalid body)", method: "PUT", path: () => "/api/team/settings", body: () => ({ currency: "EURO" }), allowed: 422 },
   { route: "/api/attachments", name: "list a material's attachments", method: "GET", path: () => `/api/attachments?ownerType=material&ownerId=${ids.material}`, kind: "material", allowed: 200 },
   { route: "/api/attachments", name: "attach to a material (not multipart)", method: "POST", path: () => "/api/attachments?ownerType=material", body: () => ({}), kind: "material", allowed: 400 },
   { route: "/api/attachments/[id]", name: "attachment link (missing)", method: "GET", path: () => "/api/attachments/missing", allowed: 404 },

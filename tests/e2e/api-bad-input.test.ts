@@ -100,7 +100,8 @@ async function snapshot() {
   const batches = await (await admin.fetch("/api/batches")).json();
   const batch = await (await admin.fetch(`/api/batches/${batchId}`)).json();
   const attachments = await (await admin.fetch(`/api/attachments?ownerType=material&ownerId=${materialId}`)).json();
-  return { f, m, d, mem, audit: a.total, batches, batch, attachments };
+  const teamSettings = await (await admin.fetch("/api/team/settings")).json();
+  return { f, m, d, mem, audit: a.total, batches, batch, attachments, teamSettings };
 }
 
 beforeAll(async () => {
@@ -229,6 +230,20 @@ beforeAll(async () => {
   for (const [method, path, body, field] of batchBad) {
     cases.push({ label: `batch ${method} ${JSON.stringify(body).slice(0, 50)}`, client: p, method, path, body: JSON.stringify(body), field });
   }
+  // The team's currency: an ISO 4217 code of three letters (ISO 4217, the alphabetic code), nothing else.
+  const currencyBad: Json[] = ["EURO", "", "   ", "E1R", "€", "eu", 5, null, true, [], {}, "E\u202eUR", "ÉUR"];
+  for (const v of currencyBad) {
+    cases.push({
+      label: `team settings currency ${JSON.stringify(v)}`,
+      client: a,
+      method: "PUT",
+      path: () => "/api/team/settings",
+      body: JSON.stringify({ currency: v }),
+      field: "currency",
+    });
+  }
+  cases.push({ label: "team settings without currency", client: a, method: "PUT", path: () => "/api/team/settings", body: JSON.stringify({}), field: "currency" });
+  cases.push({ label: "team settings unknown key", client: a, method: "PUT", path: () => "/api/team/settings", body: JSON.stringify({ currency: "USD", rate: 1 }), field: "body" });
   for (const v of NUMBER_BAD.concat([-1, 0, 0.9])) {
     cases.push({
       label: `batch settings toleranceFraction ${JSON.stringify(v)}`,
@@ -289,13 +304,14 @@ beforeAll(async () => {
     ["PATCH", () => `/api/members/${memberId}`],
     ["POST", () => "/api/teams"],
     ["POST", () => `/api/revisions/${draftId}/return`],
+    ["PUT", () => "/api/team/settings"],
   ] as [string, () => string][]) {
     for (const [label, body] of [
       ["malformed JSON", "{\"name\": "],
       ["truncated unicode", "{\"name\": \"\uD83D"],
       ["oversized body", JSON.stringify({ pad: "☃".repeat(700_000) })],
     ] as [string, string][]) {
-      cases.push({ label: `${method} ${path()} ${label}`, client: path().includes("members") || path().includes("invitations") || path().includes("teams") ? a : f2, method, path, body });
+      cases.push({ label: `${method} ${path()} ${label}`, client: /members|invitations|teams|team\/settings/.test(path()) ? a : f2, method, path, body });
     }
   }
 });

@@ -6,6 +6,10 @@
 import * as XLSX from "xlsx";
 import { beforeAll, describe, expect, it } from "vitest";
 import { bombSheet, workbookWith } from "../helpers/zip";
+import { parseCsv } from "@/lib/spreadsheet/csv";
+import { roundToResolution } from "@/lib/batches/resolution";
+import { significantStep } from "@/lib/spreadsheet/coat-rows";
+import { coatInput, library } from "./fixtures";
 import { anonymous, demo, signIn, signUp, type Client } from "./http";
 
 let formulator: Client, reviewer: Client, production: Client, other: Client;
@@ -75,6 +79,61 @@ describe("GET /api/revisions/:id/export", () => {
     expect((await other.fetch(`/api/revisions/${releasedId}/export`)).status).toBe(404);
     expect((await anonymous().fetch(`/api/revisions/${releasedId}/export`)).status).toBe(401);
     expect((await formulator.fetch(`/api/revisions/${releasedId}/export?format=pdf`)).status).toBe(422);
+  });
+});
+
+describe("GET /api/revisions/:id/export with a coating", () => {
+  interface CoatResult {
+    coating?: { dryThicknessNm: number; wetThicknessUm: number; withdrawalMmPerSForTarget?: number; solMlForArea?: number };
+    voc?: { gramsPerLitre: number; gramsPerLitreLessWater: number };
+    cost?: { total: number };
+  }
+
+  it("carries the withdrawal speed, the expected thickness, the area's sol and the VOC figure in the batch sheet CSV and workbook", async () => {
+    const lib = await library(formulator);
+    const coating = { method: "dip", withdrawalMmPerS: 2, viscosityMPaS: 3, surfaceTensionMNPerM: 24, targetDryThicknessNm: 1500, areaM2: 0.5 };
+    const created = await formulator.fetch("/api/formulations", { method: "POST", json: { name: `Dip-coated ${stamp}`, project: "Sheets", input: { ...coatInput(lib), coating } } });
+    expect(created.status).toBe(201);
+    const { revisionId } = (await created.json()) as { revisionId: string };
+    const { result } = (await (await formulator.fetch(`/api/revisions/${revisionId}`)).json()) as { result: CoatResult };
+    expect(result.coating).toBeDefined();
+    expect(result.voc).toBeDefined();
+    // Shown to three significant figures (the export's rule), so compare with the stored figure rounded the same way.
+    const three = (value: number) => roundToResolution(value, significantStep(value, 3)!);
+
+    const csv = await formulator.fetch(`/api/revisions/${revisionId}/export?format=csv`);
+    expect(csv.status).toBe(200);
+    const rows = parseCsv(await csv.text()).rows;
+    const start = rows.findIndex((r) => r[0] === "[Coating and VOC]");
+    expect(start).toBeGreaterThan(1);
+    const table = rows.slice(start + 1);
+    expect(table[0]).toEqual(["Setting", "Value", "Unit"]);
+    expect(table).toContainEqual(["Coating method", "dip coating", ""]);
+    expect(table).toContainEqual(["Withdrawal speed", "2.00", "mm/s"]);
+    expect(table).toContainEqual(["Withdrawal speed for the target", three(result.coating!.withdrawalMmPerSForTarget!), "mm/s"]);
+    expect(table).toContainEqual(["Expected dry film thickness", three(result.coating!.dryThicknessNm), "nm"]);
+    expect(table).toContainEqual(["Sol needed for the area (no losses)", three(result.coating!.solMlForArea!), "mL"]);
+    expect(table).toContainEqual(["VOC", three(result.voc!.gramsPerLitre), "g/L of sol"]);
+    expect(table).toContainEqual(["VOC less water", three(result.voc!.gramsPerLitreLessWater), "g/L of sol less water"]);
+
+    const xlsx = await formulator.fetch(`/api/revisions/${revisionId}/export`);
+    const wb = XLSX.read(Buffer.from(await xlsx.arrayBuffer()), { type: "buffer" });
+    const sheet = XLSX.utils.sheet_to_json<unknown[]>(wb.Sheets["Coating and VOC"]!, { header: 1, raw: true });
+    expect(sheet.find((r) => r[0] === "Withdrawal speed")).toEqual(["Withdrawal speed", 2, "mm/s"]);
+    expect(sheet.find((r) => r[0] === "VOC")?.[1]).toBe(result.voc!.gramsPerLitre);
+    const overview = XLSX.utils.sheet_to_json<unknown[]>(wb.Sheets.Overview!, { header: 1, raw: true });
+    expect(overview.find((r) => r[0] === "Coat: dry film thickness")?.[1]).toBe(result.coating!.dryThicknessNm);
+    // Every line of this coat has a demo price, so the batch has a cost, in the team's currency.
+    const { currency } = (await (await formulator.fetch("/api/team/settings")).json()) as { currency: string };
+    expect(overview.find((r) => r[0] === "Cost of the batch")).toEqual(["Cost of the batch", result.cost!.total, currency]);
+    const coatingSheet = XLSX.utils.sheet_to_json<unknown[]>(wb.Sheets.Coating!, { header: 1, raw: true });
+    expect(coatingSheet.find((r) => r[0] === "Withdrawal speed")?.[1]).toBe(2);
+  });
+
+  it("says nothing about a coating for a revision without one: the VOC rows alone", async () => {
+    const rows = parseCsv(await (await production.fetch(`/api/revisions/${releasedId}/export?format=csv`)).text()).rows;
+    const start = rows.findIndex((r) => r[0] === "[Coating and VOC]");
+    expect(rows.slice(start + 2).map((r) => r[0])).toEqual(["VOC", "VOC less water", "VOC in the batch (hydrolysis alcohol included)"]);
   });
 });
 

@@ -65,6 +65,10 @@ describe("production in the browser", () => {
     expect(headers).toEqual(expect.arrayContaining(["Lot number", "Target mass", "Target volume", "Actual mass (g)", "Time", "Initials"]));
     expect(await sheet.textContent()).toMatch(/Safety cautions[\s\S]*H314[\s\S]*safety data sheet/);
     expect(await sheet.textContent()).not.toMatch(/Preview only/);
+    // HC-3 has no coating: the sheet gives its VOC and says nothing of a coat.
+    expect(await sheet.getByTestId("batch-voc").textContent()).toMatch(/VOC[\s\S]*g\/L of sol[\s\S]*VOC less water/);
+    expect(await sheet.getByTestId("batch-coating").count()).toBe(0);
+    expect(await sheet.textContent()).not.toMatch(/Coating method|Withdrawal speed/);
     await screenshot(page, "batch-sheet");
     await page.emulateMedia({ media: "print" });
     expect(await page.getByRole("button", { name: "Print batch sheet" }).isVisible()).toBe(false);

@@ -23,6 +23,7 @@ let rq: typeof import("@/db/queries/revisions");
 let mq: typeof import("@/db/queries/members");
 let matq: typeof import("@/db/queries/materials");
 let bq: typeof import("@/db/queries/batches");
+let tsq: typeof import("@/db/queries/team-settings");
 let teamId: string;
 let users: Record<string, string>;
 let input: FormulationInput;
@@ -36,6 +37,7 @@ beforeAll(async () => {
   mq = await import("@/db/queries/members");
   matq = await import("@/db/queries/materials");
   bq = await import("@/db/queries/batches");
+  tsq = await import("@/db/queries/team-settings");
   const seeded = await seedDemo(t.db);
   teamId = seeded.teamId;
   users = seeded.users as Record<string, string>;
@@ -233,5 +235,36 @@ describe("batch notes and weighing initials", () => {
       [null, "AB"],
       ["AB", "CD"],
     ]);
+  });
+});
+
+describe("two admins setting the team's currency at the same moment", () => {
+  it("returns one of the two codes, and audit events whose before/after chain without a gap, every round", async () => {
+    const second = await addMember("admin");
+    const first = { userId: users.admin!, teamId };
+    const other = { userId: second.userId, teamId };
+    const start = (await tsq.getTeamSettings(teamId)).currency;
+    const since = new Date(Date.now() - 1000);
+    let last = start;
+    for (let round = 0; round < ROUNDS; round++) {
+      const codes = round % 2 === 0 ? ["USD", "GBP"] : ["CHF", "JPY"];
+      await Promise.all([tsq.saveTeamSettings(first, { currency: codes[0]! }), tsq.saveTeamSettings(other, { currency: codes[1]! })]);
+      const now = (await tsq.getTeamSettings(teamId)).currency;
+      expect(codes).toContain(now);
+      last = now;
+    }
+    // Serialised on the team row: each event's "before" is the previous event's "after" (no lost update in the trail).
+    const events = await t.db
+      .select()
+      .from(auditEvents)
+      .where(and(eq(auditEvents.teamId, teamId), eq(auditEvents.action, "team.currency_changed")));
+    const ordered = events.filter((e) => e.createdAt >= since).sort((a, b) => a.createdAt.getTime() - b.createdAt.getTime());
+    expect(ordered).toHaveLength(ROUNDS * 2);
+    const chain = ordered.map((e) => e.summary as { before: { currency: string }; after: { currency: string } });
+    // Two events may share a millisecond: check the chain as a multiset of links ending at the stored code.
+    const befores = chain.map((c) => c.before.currency).sort();
+    const afters = [start, ...chain.map((c) => c.after.currency)].sort();
+    afters.splice(afters.indexOf(last), 1);
+    expect(befores).toEqual(afters);
   });
 });

@@ -39,4 +39,31 @@ describe("revision diff, engine v2 fields", () => {
     const sol = { ...base, steps: [{ name: "Cure", temperatureC: 120, durationH: 1, stage: "sol" as const, atmosphere: "inert" as const }] };
     expect(paths(base, sol)).toEqual(["steps[0].atmosphere", "steps[0].stage"]);
   });
+
+  it("shows the coat's settings, and no change between two drafts without a coat", () => {
+    expect(paths(base, { ...base })).toEqual([]);
+    const dip = { ...base, coating: { method: "dip" as const, withdrawalMmPerS: 2, viscosityMPaS: 3, surfaceTensionMNPerM: 24 } };
+    expect(paths(base, dip)).toEqual(["coating.method", "coating.surfaceTensionMNPerM", "coating.viscosityMPaS", "coating.withdrawalMmPerS"]);
+    const faster = { ...dip, coating: { ...dip.coating, withdrawalMmPerS: 3, targetDryThicknessNm: 400 } };
+    const d = diffRevisions({ input: dip, result: null }, { input: faster, result: null }).input;
+    expect(d).toEqual([
+      { path: "coating.targetDryThicknessNm", before: null, after: 400 },
+      { path: "coating.withdrawalMmPerS", before: 2, after: 3 },
+    ]);
+  });
+
+  it("shows the coat's predicted figures among the key results", () => {
+    const result = (dryThicknessNm: number, voc: number) =>
+      ({
+        lines: [],
+        water: { addGrams: 1, effectiveR: 4 },
+        sol: { solidsFraction: 0.1 },
+        composite: { theoreticalDensity: 2 },
+        thermal: { status: "ok" },
+        coating: { method: "dip", solidVolumeFraction: 0.05, wetThicknessUm: 10, dryThicknessNm, coverageM2PerL: 100 },
+        voc: { massGrams: 50, gramsPerLitre: voc, gramsPerLitreLessWater: voc * 1.1, waterMl: 5 },
+      }) as unknown as import("@/lib/formulation").FormulationResult;
+    const r = diffRevisions({ input: base, result: result(500, 600) }, { input: base, result: result(520, 600) }).results;
+    expect(r).toEqual([{ path: "coat.dryThicknessNm", before: 500, after: 520 }]);
+  });
 });

@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { formFieldFor, inputFromValues, valuesFromInput } from "@/components/formulation/editor-model";
+import { editorSchema, formFieldFor, inputFromValues, valuesFromInput } from "@/components/formulation/editor-model";
+import { fieldMessage } from "@/components/formulation/editor-words";
 import { computeFormulation, type FormulationInput } from "@/lib/formulation";
 import { referenceMaterial, referenceMaterials } from "@/data/materials";
 
@@ -91,5 +92,69 @@ describe("editor model", () => {
     }
     expect(path).toBe("modifiers.0.molPerMetal");
     expect(formFieldFor(path, values, input).field).toBe("modifiers.0.molPerMetal");
+  });
+
+  describe("the coat", () => {
+    it("keeps a dip coat with its target and area through a save", () => {
+      const coating = { method: "dip", withdrawalMmPerS: 2, viscosityMPaS: 3, surfaceTensionMNPerM: 24, targetDryThicknessNm: 3000, areaM2: 0.5 } as const;
+      const values = valuesFromInput({ ...v2Input, coating }, meta);
+      expect(values.coating).toMatchObject({ method: "dip", withdrawalMmPerS: 2, viscosityMPaS: 3, surfaceTensionMNPerM: 24, targetDryThicknessNm: 3000, areaM2: 0.5 });
+      expect(inputFromValues(values, record).coating).toEqual(coating);
+    });
+
+    it("keeps a spin coat's measured film and a wet film through a save, without target or area when none is set", () => {
+      const spin = { method: "spin", rpm: 3000, calibration: { rpm: 2000, dryThicknessNm: 400 } } as const;
+      const sv = valuesFromInput({ ...v2Input, coating: spin }, meta);
+      expect(Number.isNaN(sv.coating.targetDryThicknessNm)).toBe(true);
+      expect(inputFromValues(sv, record).coating).toEqual(spin);
+      const wet = { method: "wetFilm", wetThicknessUm: 12, areaM2: 2 } as const;
+      expect(inputFromValues(valuesFromInput({ ...v2Input, coating: wet }, meta), record).coating).toEqual(wet);
+    });
+
+    it("sends only the chosen method's inputs, and nothing for method none", () => {
+      const values = valuesFromInput({ ...v2Input, coating: { method: "dip", withdrawalMmPerS: 2, viscosityMPaS: 3, surfaceTensionMNPerM: 24 } }, meta);
+      values.coating.method = "wetFilm";
+      expect(inputFromValues(values, record).coating).toEqual({ method: "wetFilm", wetThicknessUm: 10 });
+      // Switching back restores the dip inputs the form kept.
+      values.coating.method = "dip";
+      expect(inputFromValues(values, record).coating).toMatchObject({ withdrawalMmPerS: 2 });
+      values.coating.method = "none";
+      expect(inputFromValues(values, record).coating).toBeUndefined();
+    });
+
+    it("opens a draft stored without a coat as method none and saves it without one", () => {
+      const values = valuesFromInput(v2Input, meta);
+      expect(values.coating.method).toBe("none");
+      expect("coating" in inputFromValues(values, record)).toBe(false);
+    });
+
+    it("places the engine's messages beside the coat's fields, in words", () => {
+      const values = valuesFromInput({ ...v2Input, coating: { method: "spin", rpm: 3000, calibration: { rpm: 2000, dryThicknessNm: 400 } } }, meta);
+      values.coating.rpm = 0;
+      const input = inputFromValues(values, record);
+      let issues: { field: string; message: string }[] = [];
+      try {
+        computeFormulation(input);
+      } catch (err) {
+        issues = (err as { issues: { field: string; message: string }[] }).issues;
+      }
+      expect(issues[0]?.field).toBe("coating.rpm");
+      const { field } = formFieldFor(issues[0]!.field, values, input);
+      expect(field).toBe("coating.rpm");
+      expect(fieldMessage(field, issues[0]!.message)).toMatch(/^Spin speed: spin speed \(rpm\) must be between 1 and/);
+      expect(formFieldFor("coating.calibration.dryThicknessNm", values, input)).toEqual({ field: "coating.calibrationDryThicknessNm" });
+      expect(formFieldFor("coating.calibration", values, input)).toEqual({ field: "coating.calibrationRpm" });
+      expect(formFieldFor("coating", values, input)).toEqual({ field: "coating.method" });
+    });
+
+    it("refuses an empty input of the chosen method before saving, and ignores the other methods' empty inputs", () => {
+      const values = valuesFromInput({ ...v2Input, coating: { method: "dip", withdrawalMmPerS: 2, viscosityMPaS: 3, surfaceTensionMNPerM: 24 } }, meta);
+      values.coating.rpm = Number.NaN;
+      expect(editorSchema.safeParse(values).success).toBe(true);
+      values.coating.viscosityMPaS = Number.NaN;
+      const parsed = editorSchema.safeParse(values);
+      expect(parsed.success).toBe(false);
+      expect(parsed.error?.issues.map((i) => i.path.join("."))).toEqual(["coating.viscosityMPaS"]);
+    });
   });
 });

@@ -53,14 +53,18 @@ describe("revision workbook", () => {
   const wb = open(bytes);
 
   it("returns the overview, batch sheet, dry composite, thermal check and the full input sheets", () => {
+    // The Coating and VOC sheet follows the batch sheet only when the revision has a coating or a VOC figure (engine 2.1 on).
+    const coat = rev.input.coating !== undefined || rev.result?.voc !== undefined ? ["Coating and VOC"] : [];
     expect(wb.SheetNames).toEqual([
       "Overview",
       "Batch sheet",
+      ...coat,
       "Dry composite",
       "Thermal check",
       "Input",
       "Components",
       "Modifiers",
+      "Coating",
       "Process steps",
       "Addition order",
       "Materials",
@@ -155,7 +159,10 @@ describe("revision workbook", () => {
   it("returns the batch sheet as CSV with the same lines, masses rounded to the balance and volumes to 0.01 mL", () => {
     const csv = batchSheetCsv(rev);
     expect(csv.startsWith('\uFEFF"Order","Material","Role","Lot number","Target mass as supplied (g)"')).toBe(true);
-    const { rows } = parseCsv(csv);
+    // The batch table ends where the "[Coating and VOC]" table starts (when the revision has one).
+    const all = parseCsv(csv).rows;
+    const end = all.findIndex((r) => r[0] === "[Coating and VOC]");
+    const rows = (end < 0 ? all : all.slice(0, end)).filter((r) => r.some((c) => c !== null));
     const lines = rev.result!.lines.filter((l) => l.massGrams > 0);
     expect(rows.length).toBe(lines.length + 1);
     lines.forEach((line, i) => {

@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import { pageContext } from "@/components/layout/page-context";
 import { BatchTolerancePanel } from "@/components/team/batch-tolerance-panel";
+import { CurrencyPanel } from "@/components/team/currency-panel";
 import { InvitePanel } from "@/components/team/invite-panel";
 import { MembersPanel } from "@/components/team/members-panel";
 import { ButtonLink } from "@/components/ui/button";
@@ -29,6 +30,9 @@ export default async function TeamPage() {
         ) : null}
         <Panel title="Weighing tolerance for batch records" id="tolerance">
           <BatchTolerancePanel canEdit={can(ctx.role, "organization:update")} />
+        </Panel>
+        <Panel title="Currency for prices and costs" id="currency">
+          <CurrencyPanel canEdit={can(ctx.role, "organization:update")} />
         </Panel>
       </div>
     </>
