@@ -171,6 +171,9 @@ export function CoatPanel({ input, result, currency }: CoatPanelProps) {
                 note:
                   result.cure.ratio === undefined ? (
                     "no epoxy groups"
+                  ) : !(result.cure.amineHydrogenEq > 0) ? (
+                    // Judged only when both groups are present (chemistry.md): a GPTMS hard coat without an amine cures its epoxy otherwise.
+                    "no amine curing agent: nothing to balance"
                   ) : result.cure.ratio >= CURE_RATIO.min && result.cure.ratio <= CURE_RATIO.max ? (
                     <ToneBadge tone="clear" mark="✓">
                       balanced (0.8–1.2)

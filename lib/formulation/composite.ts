@@ -1,4 +1,4 @@
-import { cubeRoot, Dec, ONE, toNumber, ZERO } from "./decimal";
+import { cubeRoot, Dec, ONE, per, toNumber, ZERO } from "./decimal";
 import { FormulationError } from "./errors";
 import type { CompositePhase, CompositeResult, Shrinkage } from "./result-types";
 
@@ -61,7 +61,7 @@ export function compositeFigures(
   solVolumeMl: Dec,
   bulk?: BulkDensity,
 ): CompositeResult {
-  const specificVolumes = phases.map((phase) => phase.weightFraction.div(phase.density));
+  const specificVolumes = phases.map((phase) => per(phase.weightFraction, phase.densityValue));
   let totalSpecificVolume = ZERO;
   for (const value of specificVolumes) totalSpecificVolume = totalSpecificVolume.plus(value);
   const theoreticalDensity = ONE.div(totalSpecificVolume);

@@ -1,5 +1,5 @@
 import type { PhaseInput } from "./composite";
-import { type Dec, dec, toNumber, ZERO } from "./decimal";
+import { add, type Dec, dec, toNumber, ZERO } from "./decimal";
 import type { Component } from "./input-schema";
 import { materialById, type IndexedMaterial } from "./material-index";
 import { organicAmounts } from "./organic";
@@ -97,16 +97,16 @@ export function composeComponents(
         density: dec(data.residueDensity),
         densityValue: data.residueDensity,
       });
-      pass.networkAtomMol = pass.networkAtomMol.plus(a.networkAtomMol);
-      pass.hydrolysableGroupMol = pass.hydrolysableGroupMol.plus(a.hydrolysableGroupMol);
-      pass.carriedWaterMol = pass.carriedWaterMol.plus(a.carriedWaterMol);
+      pass.networkAtomMol = add(pass.networkAtomMol, a.networkAtomMol);
+      pass.hydrolysableGroupMol = add(pass.hydrolysableGroupMol, a.hydrolysableGroupMol);
+      pass.carriedWaterMol = add(pass.carriedWaterMol, a.carriedWaterMol);
       pass.precursorMol.set(material.id, { moles: a.moles, atoms: a.networkAtomMol });
       if (present && material.fastHydrolysing) pass.fastHydrolysing.push({ id: material.id, name: material.name, path: entry.path });
       const leaving = data.leavingAlcohol;
       if (leaving && present && !a.alcoholMol.isZero()) {
         const key = `${leaving.name}|${leaving.molarMass}`;
         const previous = pass.alcohols.get(key);
-        pass.alcohols.set(key, { name: leaving.name, molarMass: leaving.molarMass, mol: previous ? previous.mol.plus(a.alcoholMol) : a.alcoholMol });
+        pass.alcohols.set(key, { name: leaving.name, molarMass: leaving.molarMass, mol: previous ? add(previous.mol, a.alcoholMol) : a.alcoholMol });
       }
       if (present && data.conversionTemperatureC !== undefined) {
         pass.conversions.push({
@@ -136,7 +136,7 @@ export function composeComponents(
         density: dec(a.phaseDensity),
         densityValue: a.phaseDensity,
       });
-      pass.carriedWaterMol = pass.carriedWaterMol.plus(a.carriedWaterMol);
+      pass.carriedWaterMol = add(pass.carriedWaterMol, a.carriedWaterMol);
       if (present) pass.subjects.push({ materialId: material.id, name: material.name, role: "organic", thermal: material.thermal, path: entry.path });
     }
   });

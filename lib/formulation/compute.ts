@@ -4,13 +4,13 @@ import { solidMassFromBasis } from "./basis";
 import { compositeFigures, type BulkDensity } from "./composite";
 import { composeComponents, type DecLine } from "./composition";
 import { DEFAULT_THERMAL_MARGIN_C, ENGINE_VERSION, MIN_LINE_GRAMS, ML_PER_L, WATER_MOLAR_MASS_G_PER_MOL } from "./constants";
-import { type Dec, dec, toNumber, ZERO } from "./decimal";
+import { add, type Dec, dec, ONE, toNumber, ZERO, positive } from "./decimal";
 import { dosePerNetworkAtom } from "./dosing";
 import { FormulationError } from "./errors";
 import type { FormulationInput } from "./input-schema";
 import { assayBalanceNotices, catalystRatioNotices, fractionsScaledNotice } from "./input-notices";
 import { orderLines } from "./line-order";
-import { indexMaterials, materialById, requireDensity, type IndexedMaterial } from "./material-index";
+import { indexMaterials, materialById, volumeOf, type IndexedMaterial } from "./material-index";
 import type { Material } from "./material-schema";
 import { checkModifierLoad, fastHydrolysisNotices, ligandMassPerFreeGram, modifierAmounts, modifierNotices, planModifiers } from "./modifiers";
 import type { AlcoholRelease, FormulationResult, ModifierResult, Notice, RecipeLine, SolventResult } from "./result-types";
@@ -98,15 +98,18 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
   const notices: Notice[] = [];
 
   // Fractions within 0.5 % of 1 (33.3 / 33.3 / 33.3 %) are scaled to 1; the schema refused any beyond.
-  const fractionSum = input.components.reduce((sum, c) => sum.plus(dec(c.weightFraction)), ZERO);
-  // A sum within 1e-12 of 1 is float rounding of fractions that were meant to add up: used as they are.
-  const exact = fractionSum.minus(1).abs().lessThanOrEqualTo(1e-12);
+  // A sum within 1e-12 of 1 is float rounding of fractions that were meant to add up: used as they
+  // are. Deciding that needs no decimals (the float sum of the fractions errs by ~1e-16); scaling does.
+  let floatSum = 0;
+  for (const component of input.components) floatSum += component.weightFraction;
+  const exact = Math.abs(floatSum - 1) <= 1e-12;
+  const fractionSum = exact ? ONE : input.components.reduce((sum, c) => sum.plus(dec(c.weightFraction)), ZERO);
   const components = input.components.map((c) => ({
     materialId: c.materialId,
     weightFraction: exact ? dec(c.weightFraction) : dec(c.weightFraction).div(fractionSum),
     ...(exact ? { value: c.weightFraction } : {}),
   }));
-  notices.push(...fractionsScaledNotice(fractionSum));
+  if (!exact) notices.push(...fractionsScaledNotice(fractionSum));
 
   // Modifiers: the bonded ligands are part of the dry composite the basis fixes (S = S_free · (1 + c)).
   const plans = planModifiers(input.modifiers ?? [], byId, input.steps);
@@ -120,7 +123,7 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
   const { phases, subjects, conversions, networkAtomMol } = pass;
   let carriedWaterMol = pass.carriedWaterMol;
 
-  if (!networkAtomMol.greaterThan(0)) {
+  if (!positive(networkAtomMol)) {
     throw new FormulationError(
       "no_network_atoms",
       "components",
@@ -144,9 +147,9 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
       carriedWaterMol: a.carriedWaterMol,
       carriedSolventGrams: a.carriedSolventGrams,
     });
-    carriedWaterMol = carriedWaterMol.plus(a.carriedWaterMol);
-    groupsReplacedMol = groupsReplacedMol.plus(a.groupsReplacedMol);
-    if (a.bondedGrams.greaterThan(0)) {
+    carriedWaterMol = add(carriedWaterMol, a.carriedWaterMol);
+    groupsReplacedMol = add(groupsReplacedMol, a.groupsReplacedMol);
+    if (positive(a.bondedGrams)) {
       const previous = ligandPhases.get(plan.entry.material.id);
       ligandPhases.set(plan.entry.material.id, {
         grams: previous ? previous.grams.plus(a.bondedGrams) : a.bondedGrams,
@@ -180,7 +183,7 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
   const groupMol = pass.hydrolysableGroupMol.minus(groupsReplacedMol);
 
   const water = input.water;
-  if (water.ratio === "h" && !groupMol.greaterThan(0)) {
+  if (water.ratio === "h" && !positive(groupMol)) {
     throw new FormulationError(
       "no_hydrolysable_groups",
       "water.ratio",
@@ -193,7 +196,7 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
     const entry = materialById(byId, input.catalyst.materialId, "catalyst.materialId");
     const a = dosePerNetworkAtom(entry, dec(input.catalyst.molPerNetworkAtom), networkAtomMol);
     lines.push({ materialId: entry.material.id, role: "catalyst", ...a });
-    carriedWaterMol = carriedWaterMol.plus(a.carriedWaterMol);
+    carriedWaterMol = add(carriedWaterMol, a.carriedWaterMol);
     notices.push(...catalystRatioNotices(input.catalyst.molPerNetworkAtom, entry.material.name));
   }
 
@@ -205,9 +208,9 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
     if (input.solvent.mode === "molPerNetworkAtom") {
       const carried = carriedSolventGrams(lines, byId, solventEntry.material.id);
       const ratio = solventByRatio(solventEntry, dec(input.solvent.value), networkAtomMol, carried);
-      if (ratio.added && ratio.added.massGrams.greaterThanOrEqualTo(MIN_LINE_GRAMS)) {
+      if (ratio.added && ratio.added.massGrams.greaterThanOrEqualTo(dec(MIN_LINE_GRAMS))) {
         lines.push({ materialId: solventEntry.material.id, role: "solvent", ...ratio.added });
-        carriedWaterMol = carriedWaterMol.plus(ratio.added.carriedWaterMol);
+        carriedWaterMol = add(carriedWaterMol, ratio.added.carriedWaterMol);
       }
       notices.push(...ratio.notices);
       solventSummary = {
@@ -231,8 +234,8 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
   let solMass = ZERO;
   let solVolume = ZERO;
   for (const l of lines) {
-    solMass = solMass.plus(l.massGrams);
-    solVolume = solVolume.plus(l.volumeMl);
+    solMass = add(solMass, l.massGrams);
+    solVolume = add(solVolume, l.volumeMl);
   }
   let addMol: Dec;
   const basis = input.basis;
@@ -254,7 +257,7 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
       solMass = solMass.plus(fill.line.massGrams);
       solVolume = solVolume.plus(fill.line.volumeMl);
     }
-    carriedWaterMol = carriedWaterMol.plus(fill.carriedWaterMol);
+    carriedWaterMol = add(carriedWaterMol, fill.carriedWaterMol);
     addMol = fill.addWaterMol;
     const carried = carriedSolventGrams(lines, byId, solventEntry.material.id);
     const carriedMol = solventMol(solventEntry, carried);
@@ -273,15 +276,15 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
 
   let addGrams = ZERO;
   let addMl = ZERO;
-  if (addMol.times(waterMolarMass).lessThan(MIN_LINE_GRAMS)) addMol = ZERO;
-  if (addMol.greaterThan(0)) {
+  if (addMol.times(waterMolarMass).lessThan(dec(MIN_LINE_GRAMS))) addMol = ZERO;
+  if (positive(addMol)) {
     addGrams = addMol.times(waterMolarMass);
-    addMl = addGrams.div(requireDensity(waterEntry));
+    addMl = volumeOf(waterEntry, addGrams);
     lines.push({ materialId: waterEntry.material.id, role: "water", moles: addMol, massGrams: addGrams, volumeMl: addMl });
     solMass = solMass.plus(addGrams);
     solVolume = solVolume.plus(addMl);
   }
-  const totalWaterMol = carriedWaterMol.plus(addMol);
+  const totalWaterMol = add(carriedWaterMol, addMol);
 
   // Sol figures (ideal mixing).
   const perLitre = dec(ML_PER_L).div(solVolume); // 1 / (sol volume in L)

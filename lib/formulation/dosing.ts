@@ -1,5 +1,5 @@
-import { Dec, dec, divideUnlessOne, timesFactor, WATER_MOLAR_MASS, ZERO } from "./decimal";
-import { requireDensity, requireMolarMass, type IndexedMaterial } from "./material-index";
+import { Dec, divideUnlessOne, timesFactor } from "./decimal";
+import { requireMolarMass, solutionWaterMol, volumeOf, type IndexedMaterial } from "./material-index";
 
 /** A reagent dosed per mol of network-forming atoms (decimal; units in field names). */
 export interface DosedAmounts {
@@ -51,8 +51,8 @@ export function doseMoles(entry: IndexedMaterial, moles: Dec): DosedAmounts {
   return {
     moles,
     massGrams,
-    volumeMl: massGrams.div(requireDensity(entry)),
-    carriedWaterMol: material.waterFraction ? massGrams.times(dec(material.waterFraction)).div(WATER_MOLAR_MASS) : ZERO,
+    volumeMl: volumeOf(entry, massGrams),
+    carriedWaterMol: solutionWaterMol(material, massGrams),
     carriedSolventGrams: timesFactor(massGrams, material.solventFraction),
   };
 }

@@ -1,4 +1,4 @@
-import { dec, type Dec, ZERO } from "./decimal";
+import { dec, type Dec, per, WATER_MOL_PER_GRAM, ZERO } from "./decimal";
 import { FormulationError } from "./errors";
 import type { Material } from "./material-schema";
 
@@ -84,4 +84,38 @@ export function requireMolarMass(entry: IndexedMaterial): Dec {
  */
 export function waterFractionOf(material: Material): Dec {
   return material.waterFraction === undefined ? ZERO : dec(material.waterFraction);
+}
+
+/**
+ * mL of a mass of the material as supplied: mass / density, as a product
+ * with the density's memoised reciprocal. Throws like `requireDensity`.
+ *
+ * @param entry - the material
+ * @param massGrams - g as supplied
+ * @example
+ * ```ts
+ * volumeOf(ethanolEntry, new Dec(78.93)).toNumber(); // ≈ 100 mL at 0.7893 g/cm³
+ * ```
+ */
+export function volumeOf(entry: IndexedMaterial, massGrams: Dec): Dec {
+  const { density, name } = entry.material;
+  if (density === undefined) {
+    throw new FormulationError("missing_density", `${entry.path}.density`, `${name} has no density; it is needed to give a volume`);
+  }
+  return per(massGrams, density);
+}
+
+/**
+ * mol of water carried in a mass of the material as supplied (its
+ * waterFraction, e.g. the water of 37 % hydrochloric acid); 0 without one.
+ *
+ * @param material - the material as supplied
+ * @param massGrams - g as supplied
+ * @example
+ * ```ts
+ * solutionWaterMol(hcl37, new Dec(100)).toNumber(); // 63 g / 18.015 g/mol ≈ 3.497 mol
+ * ```
+ */
+export function solutionWaterMol(material: Material, massGrams: Dec): Dec {
+  return material.waterFraction ? massGrams.times(dec(material.waterFraction)).times(WATER_MOL_PER_GRAM) : ZERO;
 }

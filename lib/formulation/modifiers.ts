@@ -1,7 +1,7 @@
-import { Dec, dec, divideUnlessOne, timesFactor, WATER_MOLAR_MASS, ZERO } from "./decimal";
+import { Dec, dec, divideUnlessOne, timesFactor, ZERO } from "./decimal";
 import { FormulationError } from "./errors";
 import type { ModifierSpec, ProcessStep } from "./input-schema";
-import { materialById, requireDensity, requireMolarMass, type IndexedMaterial } from "./material-index";
+import { materialById, requireMolarMass, solutionWaterMol, volumeOf, type IndexedMaterial } from "./material-index";
 import type { ModifierData, PrecursorData } from "./material-schema";
 import type { Notice } from "./result-types";
 
@@ -104,10 +104,10 @@ export function modifierAmounts(plan: ModifierPlan, precursorAtomMol: Dec): Modi
   return {
     moles,
     massGrams,
-    volumeMl: massGrams.div(requireDensity(plan.entry)),
+    volumeMl: volumeOf(plan.entry, massGrams),
     groupsReplacedMol: moles.times(dec(plan.data.groupsReplacedPerMolecule)),
     bondedGrams: plan.bonded ? moles.times(dec(plan.data.bondedMolarMass)) : ZERO,
-    carriedWaterMol: material.waterFraction ? massGrams.times(dec(material.waterFraction)).div(WATER_MOLAR_MASS) : ZERO,
+    carriedWaterMol: solutionWaterMol(material, massGrams),
     carriedSolventGrams: timesFactor(massGrams, material.solventFraction),
   };
 }

@@ -1,6 +1,6 @@
-import { Dec, dec, divideUnlessOne, timesFactor, WATER_MOLAR_MASS, ZERO } from "./decimal";
+import { Dec, divideUnlessOne, per, timesFactor } from "./decimal";
 import { FormulationError } from "./errors";
-import { requireDensity, type IndexedMaterial } from "./material-index";
+import { requireDensity, solutionWaterMol, volumeOf, type IndexedMaterial } from "./material-index";
 
 /** Amounts for one organic phase in the batch (decimal; units in field names). */
 export interface OrganicAmounts {
@@ -61,13 +61,12 @@ export function organicAmounts(entry: IndexedMaterial, weightFraction: Dec, soli
   const material = entry.material;
   const residueGrams = weightFraction.times(solidMass);
   const massGrams = divideUnlessOne(residueGrams, material.assay);
-  const density = requireDensity(entry);
   return {
     residueGrams,
-    moles: material.molarMass === undefined ? undefined : residueGrams.div(dec(material.molarMass)),
+    moles: material.molarMass === undefined ? undefined : per(residueGrams, material.molarMass),
     massGrams,
-    volumeMl: massGrams.div(density),
-    carriedWaterMol: material.waterFraction ? massGrams.times(dec(material.waterFraction)).div(WATER_MOLAR_MASS) : ZERO,
+    volumeMl: volumeOf(entry, massGrams),
+    carriedWaterMol: solutionWaterMol(material, massGrams),
     carriedSolventGrams: timesFactor(massGrams, material.solventFraction),
     phaseDensity: organicPhaseDensity(entry),
   };

@@ -1,6 +1,6 @@
-import { Dec, dec, divideUnlessOne, timesFactor, WATER_MOLAR_MASS, ZERO } from "./decimal";
+import { Dec, dec, divideUnlessOne, per, timesFactor, ZERO } from "./decimal";
 import { FormulationError } from "./errors";
-import { requireDensity, requireMolarMass, type IndexedMaterial } from "./material-index";
+import { requireMolarMass, solutionWaterMol, volumeOf, type IndexedMaterial } from "./material-index";
 import type { Material, PrecursorData } from "./material-schema";
 
 /** Amounts for one precursor in the batch (decimal; units in field names). */
@@ -64,25 +64,23 @@ export function precursorAmounts(entry: IndexedMaterial, weightFraction: Dec, so
   const data = requirePrecursorData(entry);
   const material = entry.material;
   const molarMass = requireMolarMass(entry);
-  const density = requireDensity(entry);
   const residueGrams = weightFraction.times(solidMass);
-  const residuePerMoleculeMass =
-    data.residuePerMolecule === 1 ? dec(data.residueMolarMass) : dec(data.residuePerMolecule).times(dec(data.residueMolarMass));
-  const moles = residueGrams.div(residuePerMoleculeMass);
+  const moles =
+    data.residuePerMolecule === 1
+      ? per(residueGrams, data.residueMolarMass)
+      : residueGrams.div(dec(data.residuePerMolecule).times(dec(data.residueMolarMass)));
   const massGrams = divideUnlessOne(moles.times(molarMass), material.assay);
   const hydrolysableGroupMol = timesFactor(moles, data.hydrolysableGroupsPerMolecule);
-  const solutionWaterMol = material.waterFraction
-    ? massGrams.times(dec(material.waterFraction)).div(WATER_MOLAR_MASS)
-    : ZERO;
+  const solutionWater = solutionWaterMol(material, massGrams);
   const crystalWaterMol = timesFactor(moles, material.crystalWaterPerFormula);
   return {
     residueGrams,
     moles,
     massGrams,
-    volumeMl: massGrams.div(density),
+    volumeMl: volumeOf(entry, massGrams),
     networkAtomMol: timesFactor(moles, data.networkAtomsPerMolecule),
     hydrolysableGroupMol,
-    carriedWaterMol: crystalWaterMol.isZero() ? solutionWaterMol : solutionWaterMol.plus(crystalWaterMol),
+    carriedWaterMol: crystalWaterMol.isZero() ? solutionWater : solutionWater.plus(crystalWaterMol),
     carriedSolventGrams: timesFactor(massGrams, material.solventFraction),
     alcoholMol: data.leavingAlcohol ? hydrolysableGroupMol : ZERO,
   };

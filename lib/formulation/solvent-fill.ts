@@ -1,9 +1,9 @@
 import type { DecLine } from "./composition";
 import { MIN_LINE_GRAMS, WATER_MOLAR_MASS_G_PER_MOL } from "./constants";
 import type { Basis } from "./input-schema";
-import { type Dec, dec, ONE, WATER_MOLAR_MASS, ZERO } from "./decimal";
+import { type Dec, dec, ONE, per, timesFactor, WATER_MOL_PER_GRAM, ZERO, positive } from "./decimal";
 import { FormulationError } from "./errors";
-import { requireDensity, waterFractionOf, type IndexedMaterial } from "./material-index";
+import { requireDensity, solutionWaterMol, volumeOf, waterFractionOf, type IndexedMaterial } from "./material-index";
 
 /** What a fill makes the sol up to. */
 export interface FillTarget {
@@ -51,7 +51,7 @@ export function solveFill(p: {
   solidGrams?: Dec;
 }): FillResult {
   const isVolume = p.target.kind === "volume";
-  const needMol = p.waterNeededMol.greaterThan(0) ? p.waterNeededMol : ZERO;
+  const needMol = positive(p.waterNeededMol) ? p.waterNeededMol : ZERO;
   const waterMolarMass = dec(p.water.material.molarMass ?? WATER_MOLAR_MASS_G_PER_MOL);
   const solventCost = isVolume ? ONE.div(requireDensity(p.solvent)) : ONE;
   const waterCost = needMol.isZero()
@@ -59,7 +59,7 @@ export function solveFill(p: {
     : isVolume
       ? waterMolarMass.div(requireDensity(p.water))
       : waterMolarMass;
-  const carriedPerGram = waterFractionOf(p.solvent.material).div(WATER_MOLAR_MASS);
+  const carriedPerGram = waterFractionOf(p.solvent.material).times(WATER_MOL_PER_GRAM);
   const available = p.target.amount.minus(isVolume ? p.otherMl : p.otherGrams);
   const reagentsAlone = p.target.amount.minus(available).plus(needMol.times(waterCost));
 
@@ -70,7 +70,7 @@ export function solveFill(p: {
     addWaterMol = ZERO;
   } else {
     const coefficient = solventCost.minus(carriedPerGram.times(waterCost));
-    if (!coefficient.greaterThan(0)) {
+    if (!positive(coefficient)) {
       throw new FormulationError(
         "invalid_input",
         `${p.solvent.path}.waterFraction`,
@@ -86,7 +86,7 @@ export function solveFill(p: {
   }
 
   // No room left: a remainder within rounding of zero is no solvent at all, not a 1e-14 g line or an error.
-  if (solventGrams.abs().lessThan(MIN_LINE_GRAMS)) solventGrams = ZERO;
+  if (solventGrams.abs().lessThan(dec(MIN_LINE_GRAMS))) solventGrams = ZERO;
   if (solventGrams.isNegative()) {
     const unit = isVolume ? "mL" : "g";
     const show = (value: Dec): string => String(Number(value.toPrecision(5)));
@@ -152,15 +152,15 @@ export function fillSolvent(p: {
     solidGrams: p.solidMass,
   });
   const material = p.solventEntry.material;
-  const carriedWaterMol = fill.solventGrams.times(waterFractionOf(material)).div(WATER_MOLAR_MASS);
-  if (!fill.solventGrams.greaterThan(0)) return { carriedWaterMol, addWaterMol: fill.addWaterMol };
+  const carriedWaterMol = solutionWaterMol(material, fill.solventGrams);
+  if (!positive(fill.solventGrams)) return { carriedWaterMol, addWaterMol: fill.addWaterMol };
   return {
     line: {
       materialId: material.id,
       role: "solvent",
-      moles: material.molarMass === undefined ? undefined : fill.solventGrams.times(dec(material.assay ?? 1)).div(dec(material.molarMass)),
+      moles: material.molarMass === undefined ? undefined : per(timesFactor(fill.solventGrams, material.assay ?? 1), material.molarMass),
       massGrams: fill.solventGrams,
-      volumeMl: fill.solventGrams.div(requireDensity(p.solventEntry)),
+      volumeMl: volumeOf(p.solventEntry, fill.solventGrams),
       carriedWaterMol,
       carriedSolventGrams: ZERO,
     },

@@ -1,4 +1,4 @@
-import { Dec, dec, ZERO } from "./decimal";
+import { Dec, per, ZERO, positive } from "./decimal";
 import { doseMoles, type DosedAmounts } from "./dosing";
 import type { DecLine } from "./composition";
 import { requireMolarMass, type IndexedMaterial } from "./material-index";
@@ -53,7 +53,7 @@ export function solventByRatio(entry: IndexedMaterial, ratio: Dec, networkAtomMo
   const target = ratio.times(networkAtomMol);
   const carriedMol = carriedGrams.isZero() ? ZERO : carriedGrams.div(requireMolarMass(entry));
   const addMol = target.minus(carriedMol);
-  if (!addMol.greaterThan(0)) {
+  if (!positive(addMol)) {
     const notices: Notice[] = carriedMol.isZero()
       ? []
       : [
@@ -78,5 +78,5 @@ function show(value: Dec): string {
 /** Moles of a solvent in `grams` of it (its assay ignored: a carried solvent is the pure compound). */
 export function solventMol(entry: IndexedMaterial, grams: Dec): Dec | undefined {
   const molarMass = entry.material.molarMass;
-  return molarMass === undefined ? undefined : grams.div(dec(molarMass));
+  return molarMass === undefined ? undefined : per(grams, molarMass);
 }

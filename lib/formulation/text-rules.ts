@@ -35,6 +35,9 @@ const CONTROL_EXCEPT_LINE_BREAKS = /[\u0000-\u0008\u000B\u000C\u000E-\u001F\u007
 const INVISIBLE =
   /[\s\p{Z}\p{Cf}\u034F\u115F\u1160\u17B4\u17B5\u180B-\u180F\u2800\u3164\uFE00-\uFE0F\uFFA0\u{E0100}-\u{E01EF}]/gu;
 
+const PRINTABLE_ASCII = /^[\x20-\x7E]*$/;
+const NOT_ONLY_SPACES = /[^ ]/;
+
 function codePoint(ch: string): string {
   return `U+${ch.codePointAt(0)!.toString(16).toUpperCase().padStart(4, "0")}`;
 }
@@ -53,6 +56,9 @@ function codePoint(ch: string): string {
  * ```
  */
 export function textProblem(value: string, opts: { multiline?: boolean } = {}): string | null {
+  // Printable ASCII with a character other than a space has none of the problems below (no surrogate,
+  // bidirectional control or control character; every character but the space is visible).
+  if (PRINTABLE_ASCII.test(value) && NOT_ONLY_SPACES.test(value)) return null;
   if (LONE_SURROGATE.test(value)) return "must not contain a broken character (a lone UTF-16 surrogate)";
   const bidi = BIDI_CONTROL.exec(value);
   if (bidi) return `must not contain the bidirectional control ${codePoint(bidi[0])}`;

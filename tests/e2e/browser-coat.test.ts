@@ -157,4 +157,25 @@ describe("the coat in the editor", () => {
       await admin.close();
     }
   });
+
+  it("shows a material's coat properties with units and the team's currency, and a clear message for a bad value", async () => {
+    const api = await signIn(demo.formulator);
+    const lib = (await (await api.fetch("/api/materials?pageSize=500")).json()) as { rows: { id: string; name: string; kind: string }[] };
+    const teos = lib.rows.find((m) => m.kind === "precursor" && /Tetraethoxysilane/.test(m.name));
+    if (!teos) throw new Error("no TEOS in the demo library");
+    const page = session.page;
+    await page.goto(`/materials/${teos.id}`);
+    // Demo price of TEOS, 42 per kg (invented demo data, db/demo.ts), in the team's currency.
+    const price = page.locator("#m-pricePerKg");
+    await poll(() => price.inputValue()).toBe("42");
+    await poll(() => page.locator('label[for="m-pricePerKg"]').textContent()).toMatch(/EUR per kg as supplied/);
+    await expect(page.locator('label[for="m-precursor__residueRefractiveIndex"]').textContent()).resolves.toMatch(/n_D at 589 nm/);
+    await price.fill("-5");
+    await price.blur();
+    await poll(() => page.locator("#m-pricePerKg-error").textContent()).toMatch(/price per kg must be between 0 and/);
+    const index = page.locator("#m-precursor__residueRefractiveIndex");
+    await index.fill("0.5");
+    await index.blur();
+    await poll(() => page.locator("#m-precursor__residueRefractiveIndex-error").textContent()).toMatch(/residue refractive index must be between 1 and 5/);
+  });
 });
