@@ -21,6 +21,14 @@ export type ReviewDecision = (typeof REVIEW_DECISIONS)[number];
 export const BATCH_STATES = ["open", "closed"] as const;
 export type BatchState = (typeof BATCH_STATES)[number];
 
+/** How a closed batch ends: released for use, rejected, or released under deviation with a written justification. */
+export const BATCH_DISPOSITIONS = ["released", "rejected", "released_under_deviation"] as const;
+export type BatchDisposition = (typeof BATCH_DISPOSITIONS)[number];
+
+/** Units a material lot is counted in (mass or volume as supplied). */
+export const LOT_UNITS = ["g", "kg", "mL", "L"] as const;
+export type LotUnit = (typeof LOT_UNITS)[number];
+
 /** What an uploaded spreadsheet holds: one formulation, or rows of materials. */
 export const IMPORT_KINDS = ["formulation", "materials"] as const;
 export type ImportKind = (typeof IMPORT_KINDS)[number];
@@ -54,6 +62,13 @@ export const AUDIT_ACTIONS = [
   "batch.settings_changed",
   "team.currency_changed",
   "attachment.added",
+  "lot.received",
+  "lot.updated",
+  "batch.lot_chosen",
+  "batch.result_entered",
+  "batch.result_acknowledged",
+  "batch.disposed",
+  "revision.specifications_changed",
   "attachment.removed",
 ] as const;
 export type AuditAction = (typeof AUDIT_ACTIONS)[number];

@@ -14,7 +14,8 @@ export const statements = {
   ...defaultStatements,
   material: ["read", "create", "update", "delete"],
   formulation: ["read", "readUnreleased", "create", "update", "submit", "review", "release", "archive"],
-  batch: ["read", "create", "update"],
+  batch: ["read", "create", "update", "qc", "dispose"],
+  lot: ["read", "receive", "update"],
   audit: ["read"],
   mailbox: ["read"],
 } as const;
@@ -27,7 +28,8 @@ export const admin = ac.newRole({
   invitation: ["create", "cancel"],
   material: ["read", "create", "update", "delete"],
   formulation: ["read", "readUnreleased", "create", "update", "submit", "release", "archive"],
-  batch: ["read"],
+  batch: ["read", "qc", "dispose"],
+  lot: ["read", "receive", "update"],
   audit: ["read"],
   mailbox: ["read"],
 });
@@ -36,20 +38,23 @@ export const formulator = ac.newRole({
   material: ["read", "create", "update"],
   formulation: ["read", "readUnreleased", "create", "update", "submit"],
   batch: ["read"],
+  lot: ["read"],
   audit: ["read"],
 });
 
 export const reviewer = ac.newRole({
   material: ["read"],
   formulation: ["read", "readUnreleased", "review", "release"],
-  batch: ["read"],
+  batch: ["read", "qc", "dispose"],
+  lot: ["read"],
   audit: ["read"],
 });
 
 export const production = ac.newRole({
   material: ["read"],
   formulation: ["read"],
-  batch: ["read", "create", "update"],
+  batch: ["read", "create", "update", "qc"],
+  lot: ["read", "receive", "update"],
 });
 
 export const roles = { admin, formulator, reviewer, production } as const;

@@ -31,6 +31,13 @@ export const ACTION_LABELS: Record<AuditAction, string> = {
   "team.currency_changed": "changed the team's currency",
   "attachment.added": "added a document",
   "attachment.removed": "removed a document",
+  "lot.received": "received a material lot",
+  "lot.updated": "changed a material lot",
+  "batch.lot_chosen": "chose a lot for a batch line",
+  "batch.result_entered": "entered a test result",
+  "batch.result_acknowledged": "acknowledged an out-of-specification result",
+  "batch.disposed": "decided a batch's disposition",
+  "revision.specifications_changed": "changed the test specifications",
 };
 
 /** A value of a before/after pair in words: empty text and null read "none". */

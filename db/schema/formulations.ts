@@ -10,6 +10,7 @@ import {
   varchar,
 } from "drizzle-orm/mysql-core";
 import type { FormulationInput, FormulationResult } from "@/lib/formulation";
+import type { Specification } from "../../lib/quality/specification";
 import { organization, user } from "./auth";
 import { createdAt, teamRef, updatedAt, userRef, uuidPk } from "./columns";
 
@@ -53,6 +54,8 @@ export const revisions = mysqlTable(
     state: mysqlEnum("state", REVISION_STATES).notNull().default("draft"),
     input: json("input").$type<FormulationInput>().notNull(),
     result: json("result").$type<FormulationResult | null>(),
+    /** Test specifications production measures each batch against (lib/quality/specification.ts); approved with the revision. */
+    specifications: json("specifications").$type<Specification[]>(),
     /** Message of the engine error when the input could not be computed. */
     computeError: text("compute_error"),
     engineVersion: varchar("engine_version", { length: 20 }).notNull(),

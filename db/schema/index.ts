@@ -2,3 +2,4 @@ export * from "./auth";
 export * from "./materials";
 export * from "./formulations";
 export * from "./records";
+export * from "./quality";
