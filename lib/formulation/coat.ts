@@ -2,7 +2,7 @@ import type { PhaseInput } from "./composite";
 import type { DecLine } from "./composition";
 import { batchCost } from "./cost";
 import { cureBalance } from "./cure";
-import { type Dec, dec, ZERO } from "./decimal";
+import { Dec, ZERO } from "./decimal";
 import { filmPrediction } from "./film";
 import type { FormulationInput } from "./input-schema";
 import type { IndexedMaterial } from "./material-index";
@@ -50,8 +50,9 @@ export interface CoatContext {
 export function addCoatPredictions(result: FormulationResult, context: CoatContext): void {
   const { input, byId, lines, solidMass, solVolume } = context;
   const notices = result.notices;
-  const porosity = result.composite.porosity === undefined ? ZERO : dec(result.composite.porosity);
-  const theoreticalDensity = dec(result.composite.theoreticalDensity);
+  // Per-call figures become decimals directly (`dec` memoises material constants; these would only fill its cache).
+  const porosity = result.composite.porosity === undefined ? ZERO : new Dec(result.composite.porosity);
+  const theoreticalDensity = new Dec(result.composite.theoreticalDensity);
 
   let coverage: Dec | undefined;
   if (input.coating) {
@@ -59,7 +60,7 @@ export function addCoatPredictions(result: FormulationResult, context: CoatConte
     const solidVolumeFraction = solidMass.div(theoreticalDensity).div(solVolume);
     const film = filmPrediction(input.coating, { solidVolumeFraction, porosity, densityGPerCm3: context.solMass.div(solVolume) });
     result.coating = film.coating;
-    coverage = dec(film.coating.coverageM2PerL);
+    coverage = new Dec(film.coating.coverageM2PerL);
     notices.push(...film.notices);
   }
 
