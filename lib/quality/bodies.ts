@@ -6,7 +6,7 @@ import { z } from "zod";
 import { specificationsSchema } from "./specification";
 
 /** PUT /api/revisions/:id/specifications */
-export const replaceSpecificationsSchema = z.object({
+export const replaceSpecificationsSchema = z.strictObject({
   specifications: specificationsSchema.superRefine((list, ctx) => {
     const seen = new Set<string>();
     list.forEach((s, i) => {
@@ -26,7 +26,7 @@ export const RESULT_TEXT_MAX = { instrument: 200, value: 500, acknowledgement: 2
  * against the specification (results.ts), a text in a numeric field is a 422
  * naming `value`.
  */
-export const enterResultSchema = z.object({
+export const enterResultSchema = z.strictObject({
   specId: z.string({ error: "specId must be a specification id" }).uuid({ error: "specId must be a specification id" }),
   value: z.union([z.number().finite(), z.string().trim().min(1).max(RESULT_TEXT_MAX.value)], {
     error: "value must be a number or a text of at most 500 characters",
@@ -35,7 +35,7 @@ export const enterResultSchema = z.object({
 });
 
 /** POST /api/batches/:id/results/:resultId/acknowledge */
-export const acknowledgeResultSchema = z.object({
+export const acknowledgeResultSchema = z.strictObject({
   note: z
     .string({ error: "note must be a text" })
     .trim()
