@@ -44,7 +44,8 @@ export async function releasedWithSpecs(
   const put = await formulator.fetch(`/api/revisions/${revisionId}/specifications`, { method: "PUT", json: { specifications: specs, version: 1 } });
   expect(put.status).toBe(200);
   expect((await formulator.fetch(`/api/revisions/${revisionId}/submit`, { method: "POST", json: {} })).status).toBe(200);
-  expect((await reviewer.fetch(`/api/revisions/${revisionId}/approve`, { method: "POST", json: {} })).status).toBe(200);
+  // A comment, so a thermal caution is accepted too.
+  expect((await reviewer.fetch(`/api/revisions/${revisionId}/approve`, { method: "POST", json: { comment: "Approved with its tests and limits." } })).status).toBe(200);
   expect((await reviewer.fetch(`/api/revisions/${revisionId}/release`, { method: "POST", json: {} })).status).toBe(200);
   return { formulationId, revisionId };
 }
