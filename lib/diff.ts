@@ -3,6 +3,7 @@
  * as a flat list of paths with the value before and after.
  */
 import type { FormulationInput, FormulationResult } from "@/lib/formulation";
+import type { Specification } from "@/lib/quality/specification";
 
 export interface DiffEntry {
   path: string;
@@ -107,13 +108,25 @@ function diffFlat(a: Flat, b: Flat, prefix: string): DiffEntry[] {
   return out;
 }
 
-/** Everything that differs between revision A (before) and B (after). */
-export function diffRevisions(
-  a: { input: FormulationInput; result: FormulationResult | null },
-  b: { input: FormulationInput; result: FormulationResult | null },
-): { input: DiffEntry[]; results: DiffEntry[] } {
+/** Specifications keyed by property (ids and origin left out), so a copied and edited list reads by what changed. */
+function specificationsView(specs: Specification[] | null | undefined): Record<string, unknown> {
+  return Object.fromEntries(
+    (specs ?? []).map((s) => [
+      s.property,
+      s.numeric
+        ? { method: s.method, unit: s.unit, target: s.target, lower: s.lower, upper: s.upper }
+        : { method: s.method, requirement: s.requirement },
+    ]),
+  );
+}
+
+type Side = { input: FormulationInput; result: FormulationResult | null; specifications?: Specification[] | null };
+
+/** Everything that differs between revision A (before) and B (after): inputs, key results and test specifications. */
+export function diffRevisions(a: Side, b: Side): { input: DiffEntry[]; results: DiffEntry[]; specifications: DiffEntry[] } {
   return {
     input: diffFlat(flatten(inputView(a.input), "", {}), flatten(inputView(b.input), "", {}), ""),
     results: diffFlat(flatten(resultView(a.result, a.input), "", {}), flatten(resultView(b.result, b.input), "", {}), ""),
+    specifications: diffFlat(flatten(specificationsView(a.specifications), "", {}), flatten(specificationsView(b.specifications), "", {}), ""),
   };
 }

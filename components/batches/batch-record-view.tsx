@@ -9,15 +9,18 @@ import { fmtMass } from "@/lib/format";
 import { toleranceWords } from "./batch-deviation";
 import { CompositionPanel } from "./composition-panel";
 import { RecordLines } from "./record-lines";
+import { ResultsPanel } from "@/components/quality/results-panel";
 
 interface BatchRecordViewProps {
   initial: Batch;
   /** Whether the viewer may record weighings and add documents (production, open record). */
   canRecord: boolean;
+  /** May enter test results (batch:qc) and acknowledge out-of-specification ones (batch:dispose). */
+  quality?: { canEnter: boolean; canAcknowledge: boolean };
 }
 
 /** A batch record as read by anyone in the team: lines with deviations, composition made, documents, download. */
-export function BatchRecordView({ initial, canRecord }: BatchRecordViewProps) {
+export function BatchRecordView({ initial, canRecord, quality }: BatchRecordViewProps) {
   const { data, error, mutate } = useBatch(initial.id, { initial });
   const batch = data ?? initial;
   const res = batch.balanceResolutionGrams;
@@ -35,6 +38,7 @@ export function BatchRecordView({ initial, canRecord }: BatchRecordViewProps) {
         <RecordLines batch={batch} />
       </Panel>
       <CompositionPanel batch={batch} />
+      <ResultsPanel batchId={batch.id} canEnter={quality?.canEnter ?? false} canAcknowledge={quality?.canAcknowledge ?? false} />
       <Panel title="Notes" id="notes">
         <p className="text-sm whitespace-pre-wrap">{batch.notes ?? <span className="text-muted">No notes.</span>}</p>
       </Panel>

@@ -47,6 +47,7 @@ export function DiffPanel({ formulationId, from, to }: DiffPanelProps) {
     <div className="grid gap-4 md:grid-cols-2" data-testid="diff">
       <DiffTable caption="Inputs" rows={data.input} />
       <DiffTable caption="Key results" rows={data.results} />
+      <DiffTable caption="Tests and limits" rows={data.specifications ?? []} />
     </div>
   );
 }

@@ -9,6 +9,7 @@ import { StateBadge, ThermalBadge } from "@/components/ui/status";
 import { Alert } from "@/components/ui/alert";
 import { useRevision, type Revision } from "@/lib/client/formulations";
 import { fmtDateTime } from "@/lib/format";
+import { SpecificationsPanel } from "@/components/quality/specifications-panel";
 import { DiffPanel } from "./diff-panel";
 import { InputSummary } from "./input-summary";
 import { RevisionActions } from "./revision-actions";
@@ -71,6 +72,7 @@ export function RevisionView({ initial, can }: RevisionViewProps) {
           </ul>
         </Panel>
       ) : null}
+      <SpecificationsPanel revisionId={rev.id} editable={rev.state === "draft" && can.update} result={rev.result ?? null} onSaved={() => mutate()} />
       <Panel title="Choices as entered" id="inputs">
         <InputSummary input={rev.input} />
       </Panel>

@@ -223,13 +223,20 @@ const AUTHORING_ACTIONS: AuditAction[] = ["revision.started", "revision.saved", 
 /** Differences between two revisions (by number) of one formulation. */
 export async function diffFormulationRevisions(teamId: string, formulationId: string, from: number, to: number) {
   const rows = await db
-    .select({ number: revisions.number, input: revisions.input, result: revisions.result })
+    .select({ number: revisions.number, input: revisions.input, result: revisions.result, specifications: revisions.specifications })
     .from(revisions)
     .where(and(eq(revisions.teamId, teamId), eq(revisions.formulationId, formulationId), inArray(revisions.number, [from, to])));
   const a = rows.find((r) => r.number === from);
   const b = rows.find((r) => r.number === to);
   if (!a || !b) return null;
-  return { from, to, ...diffRevisions({ input: a.input, result: a.result ?? null }, { input: b.input, result: b.result ?? null }) };
+  return {
+    from,
+    to,
+    ...diffRevisions(
+      { input: a.input, result: a.result ?? null, specifications: a.specifications },
+      { input: b.input, result: b.result ?? null, specifications: b.specifications },
+    ),
+  };
 }
 
 export { REVISION_STATES };

@@ -18,7 +18,7 @@ import { authorsOf, evaluate, type Actor } from "./formulations";
  * The formulation a revision belongs to (it never changes). Read before the
  * transaction starts, so that the transaction's first read is its lock.
  */
-async function formulationOfRevision(teamId: string, revisionId: string): Promise<string> {
+export async function formulationOfRevision(teamId: string, revisionId: string): Promise<string> {
   const [owner] = await db
     .select({ formulationId: revisions.formulationId })
     .from(revisions)
@@ -38,7 +38,7 @@ async function formulationOfRevision(teamId: string, revisionId: string): Promis
  * it would fix the transaction's snapshot before the lock was granted, and
  * later plain reads would miss what the previous lock holder committed.
  */
-async function lockRevision(tx: DbOrTx, teamId: string, revisionId: string, formulationId: string): Promise<RevisionRow> {
+export async function lockRevision(tx: DbOrTx, teamId: string, revisionId: string, formulationId: string): Promise<RevisionRow> {
   await tx
     .select({ id: formulations.id })
     .from(formulations)
@@ -142,6 +142,8 @@ export async function startRevision(actor: Actor, formulationId: string) {
       computeError,
       engineVersion: ENGINE_VERSION,
       authorId: actor.userId,
+      // Specifications are copied as they were approved; the formulator edits them in the new draft.
+      specifications: latest.specifications ?? [],
     });
     await touchFormulation(tx, formulationId, number, "draft");
     await recordEvent(tx, {

@@ -128,6 +128,13 @@ const cases: Case[] = [
   { route: "/api/attachments", name: "attach to a material (not multipart)", method: "POST", path: () => "/api/attachments?ownerType=material", body: () => ({}), kind: "material", allowed: 400 },
   { route: "/api/attachments/[id]", name: "attachment link (missing)", method: "GET", path: () => "/api/attachments/missing", allowed: 404 },
   { route: "/api/attachments/[id]", name: "remove attachment (missing)", method: "DELETE", path: () => "/api/attachments/missing", allowed: 404 },
+  // Issue 17, specifications and test results.
+  { route: "/api/revisions/[id]/specifications", name: "released revision's specifications", method: "GET", path: () => `/api/revisions/${ids.released}/specifications`, allowed: 200 },
+  { route: "/api/revisions/[id]/specifications", name: "draft's specifications", method: "GET", path: () => `/api/revisions/${ids.draft}/specifications`, allowed: 200, unreleased: true },
+  { route: "/api/revisions/[id]/specifications", name: "replace specifications (invalid body)", method: "PUT", path: () => `/api/revisions/${ids.draft}/specifications`, body: () => ({ specifications: "x", version: 1 }), allowed: 422 },
+  { route: "/api/batches/[id]/results", name: "batch test results (missing)", method: "GET", path: () => "/api/batches/missing/results", allowed: 404 },
+  { route: "/api/batches/[id]/results", name: "enter a test result (invalid body)", method: "POST", path: () => "/api/batches/missing/results", body: () => ({}), allowed: 422 },
+  { route: "/api/batches/[id]/results/[resultId]/acknowledge", name: "acknowledge a result (invalid body)", method: "POST", path: () => "/api/batches/missing/results/missing/acknowledge", body: () => ({}), allowed: 422 },
   // Creating a team needs only a signed-in person (a new account starts its own team).
   { route: "/api/teams", name: "create team (invalid body)", method: "POST", path: () => "/api/teams", body: () => ({ name: "" }), allowed: 422 },
 ];
@@ -206,6 +213,8 @@ describe("another team's records", () => {
       ["DELETE", `/api/materials/${ids.material}`],
       ["PATCH", `/api/members/${ids.member}`, { role: "admin" }],
       ["DELETE", `/api/members/${ids.member}`],
+      ["GET", `/api/revisions/${ids.draft}/specifications`],
+      ["PUT", `/api/revisions/${ids.draft}/specifications`, { specifications: [], version: 1 }],
     ];
     for (const [method, path, json] of probes) {
       const res = await other.fetch(path, { method, json });

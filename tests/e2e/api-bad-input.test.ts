@@ -8,6 +8,7 @@ import { beforeAll, describe, expect, it } from "vitest";
 import { formulationInputSchema, materialSchema } from "@/lib/formulation";
 import { coatInput, library } from "./fixtures";
 import { demo, signIn, type Client } from "./http";
+import { APPEARANCE_SPEC, releasedWithSpecs, VISCOSITY_SPEC } from "./quality-fixtures";
 
 type Json = null | boolean | number | string | Json[] | { [k: string]: Json };
 
@@ -253,6 +254,52 @@ beforeAll(async () => {
       body: JSON.stringify({ toleranceFraction: v, balanceResolutionGrams: 0.01 }),
       field: "toleranceFraction",
     });
+  }
+
+  // Issue 17, specifications and test results: a released revision with a numeric and a text specification, a batch of it.
+  {
+    const reviewerClient = await signIn(demo.reviewer);
+    const lib = await library(formulator);
+    const q = await releasedWithSpecs(formulator, reviewerClient, lib, `Bad-input QC ${Date.now().toString(36)}`);
+    const qcBatch = (await (await production.fetch("/api/batches", { method: "POST", json: { revisionId: q.revisionId } })).json()) as { id: string };
+    const quality: [() => Client, string, () => string, Json, string][] = [];
+    const results = () => `/api/batches/${qcBatch.id}/results`;
+    // A text (or anything but a number) in the numeric field: 422 naming value.
+    for (const v of NUMBER_BAD.concat(["5 mPa·s", "", "1,5"])) quality.push([p, "POST", results, { specId: VISCOSITY_SPEC.id, value: v }, "value"]);
+    for (const v of STRING_BAD.concat(["not-a-uuid"])) quality.push([p, "POST", results, { specId: v, value: 5 }, "specId"]);
+    quality.push([p, "POST", results, { specId: crypto.randomUUID(), value: 5 }, "specId"]);
+    for (const v of [12345, [], { x: 1 }, "i".repeat(201)]) quality.push([p, "POST", results, { specId: VISCOSITY_SPEC.id, value: 5, instrument: v }, "instrument"]);
+    quality.push([p, "POST", results, { specId: VISCOSITY_SPEC.id, value: 5, extra: 1 }, "body"]);
+    quality.push([p, "POST", results, { specId: APPEARANCE_SPEC.id, value: "x".repeat(501) }, "value"]);
+    const ack = () => `/api/batches/${qcBatch.id}/results/${crypto.randomUUID()}/acknowledge`;
+    for (const v of STRING_BAD.concat(["", "  ", "n".repeat(2001)])) quality.push([a, "POST", ack, { note: v }, "note"]);
+    const specs = () => `/api/revisions/${draftId}/specifications`;
+    for (const v of NUMBER_BAD.concat([0, -1, 1.5])) quality.push([f2, "PUT", specs, { specifications: [], version: v }, "version"]);
+    for (const v of ["x", 5, null, {}]) quality.push([f2, "PUT", specs, { specifications: v, version: 1 }, "specifications"]);
+    const bad = (patch: Record<string, Json>) => ({ specifications: [{ ...VISCOSITY_SPEC, ...patch }], version: 1 });
+    quality.push([f2, "PUT", specs, bad({ lower: 7, upper: 6, target: null }), "specifications.0"]);
+    quality.push([f2, "PUT", specs, bad({ target: 9 }), "specifications.0"]);
+    quality.push([f2, "PUT", specs, bad({ lower: null, upper: null }), "specifications.0"]);
+    quality.push([f2, "PUT", specs, bad({ property: "" }), "specifications.0"]);
+    quality.push([f2, "PUT", specs, bad({ id: "nope" }), "specifications.0"]);
+    for (const v of NUMBER_BAD.filter((x) => x !== null)) quality.push([f2, "PUT", specs, bad({ upper: v }), "specifications.0"]);
+    quality.push([f2, "PUT", specs, { specifications: [VISCOSITY_SPEC, VISCOSITY_SPEC], version: 1 }, "specifications.1"]);
+    quality.push([f2, "PUT", specs, { specifications: [], version: 1, extra: true }, "body"]);
+    for (const [client, method, path, body, field] of quality) {
+      cases.push({ label: `quality ${method} ${path().split("/").slice(-1)[0]} ${JSON.stringify(body).slice(0, 50)}`, client, method, path, body: JSON.stringify(body), field });
+    }
+    for (const [client, method, path] of [
+      [p, "POST", results],
+      [a, "POST", ack],
+      [f2, "PUT", specs],
+    ] as [() => Client, string, () => string][]) {
+      for (const [label, body] of [
+        ["malformed JSON", "{\"value\": "],
+        ["oversized body", JSON.stringify({ pad: "☃".repeat(700_000) })],
+      ] as [string, string][]) {
+        cases.push({ label: `quality ${method} ${label}`, client, method, path, body });
+      }
+    }
   }
 
   // Malformed and hostile files on the upload routes.

@@ -26,7 +26,7 @@ export default async function BatchRecordPage({ params }: { params: Promise<{ id
           ) : null
         }
       />
-      <BatchRecordView initial={batch} canRecord={canRecord} />
+      <BatchRecordView initial={batch} canRecord={canRecord} quality={{ canEnter: can(ctx.role, "batch:qc"), canAcknowledge: can(ctx.role, "batch:dispose") }} />
     </>
   );
 }
