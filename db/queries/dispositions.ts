@@ -98,7 +98,9 @@ export async function disposeBatch(actor: Actor, batchId: string, input: Dispose
       .limit(1);
     if (!batch) throw new NotFoundError("batch record");
     if (batch.state !== "closed") throw new ConflictError("not_closed", "Only a closed batch record can be released or rejected; close it first.");
-    const [existing] = await tx.select({ disposition: batchDispositions.disposition }).from(batchDispositions).where(eq(batchDispositions.batchId, batchId)).for("update").limit(1);
+    const [existing] = await tx.select({ disposition: batchDispositions.disposition }).from(batchDispositions).where(eq(batchDispositions.batchId, batchId)).limit(1);
+    // A plain read: the batch row's lock already keeps a second disposition of this batch out, and a
+    // locking read of a missing row would take a gap lock that two releases then deadlock on at insert.
     if (existing) throw new ConflictError("already_disposed", `This batch was already ${existing.disposition.replaceAll("_", " ")}.`);
     if ((await makersOf(tx, batch)).includes(actor.userId)) {
       throw new SeparationError("own_batch", "You started or recorded this batch; another reviewer must release or reject it.");
