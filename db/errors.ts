@@ -78,6 +78,7 @@ export function tooLongColumn(err: unknown): string | null {
 export const UNIQUE_KEYS: Readonly<Record<string, { field: string; message: string }>> = {
   materials_team_name_uq: { field: "material.name", message: "The library already has a material with this name." },
   formulations_team_name_uq: { field: "name", message: "A formulation with this name already exists in this team." },
+  lots_team_material_lot_uq: { field: "supplierLot", message: "This material already has a lot with this supplier lot number." },
   revisions_formulation_number_uq: { field: "body", message: "Someone started a revision at the same moment; reload and try again." },
 };
 

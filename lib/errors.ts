@@ -87,6 +87,17 @@ export class RuleError extends DomainError {
   }
 }
 
+/**
+ * The person may hold the right role but may not do this to this record
+ * (separation of duties: nobody disposes a batch they made). Mapped to 403.
+ */
+export class SeparationError extends DomainError {
+  constructor(code: string, message: string) {
+    super(code, message);
+    this.name = "SeparationError";
+  }
+}
+
 /** Something that was kept for a while and is gone now (an import preview past its time). */
 export class ExpiredError extends DomainError {
   constructor(message: string) {

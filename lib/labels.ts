@@ -43,3 +43,10 @@ export const COAT_METHOD_LABELS: Record<"none" | "dip" | "spin" | "wetFilm", str
   spin: "Spin coating",
   wetFilm: "Wet film of stated thickness",
 };
+
+/** Words for a batch's disposition (issue 17, lots). */
+export const DISPOSITION_LABELS: Record<"released" | "rejected" | "released_under_deviation", string> = {
+  released: "Released for use",
+  rejected: "Rejected",
+  released_under_deviation: "Released under deviation",
+};

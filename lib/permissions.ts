@@ -89,10 +89,10 @@ export const REVISION_ACTION_PERMISSIONS = {
   archive: "formulation:archive",
 } as const satisfies Readonly<Record<WorkflowAction, Permission>>;
 
-/** Reading and changing the documents attached to a material or a batch record, by owner type. */
+/** Reading and changing the documents attached to a material, a batch record or a material lot, by owner type. */
 export const ATTACHMENT_PERMISSIONS = {
-  read: { material: "material:read", batch: "batch:read" },
-  write: { material: "material:update", batch: "batch:update" },
+  read: { material: "material:read", batch: "batch:read", lot: "lot:read" },
+  write: { material: "material:update", batch: "batch:update", lot: "lot:update" },
 } as const satisfies Readonly<Record<"read" | "write", Readonly<Record<string, Permission>>>>;
 
 /** Importing a spreadsheet creates formulations or materials, by import kind. */

@@ -16,6 +16,7 @@ export default async function WorkspaceLayout({ children }: { children: ReactNod
   items.push({ href: "/production", label: "Batch sheets" });
   if (can(ctx.role, "batch:read")) items.push({ href: "/batches", label: "Batch records" });
   items.push({ href: "/materials", label: "Materials" });
+  if (can(ctx.role, "lot:read")) items.push({ href: "/lots", label: "Lots" });
   if (can(ctx.role, "audit:read")) items.push({ href: "/activity", label: "Activity" });
   items.push({ href: "/team", label: "Team" });
 

@@ -24,7 +24,7 @@ const ATTACHMENT_KIND_LABELS: Record<AttachmentKind, string> = {
 };
 
 interface AttachmentsPanelProps {
-  ownerType: "material" | "batch";
+  ownerType: "material" | "batch" | "lot";
   ownerId: string;
   /** Whether the viewer may add and remove files (checked again by the server). */
   canChange: boolean;

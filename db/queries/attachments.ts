@@ -1,6 +1,6 @@
 import { and, desc, eq } from "drizzle-orm";
 import { db } from "@/db";
-import { attachments, batchRecords, materials, user, type AttachmentRow } from "@/db/schema";
+import { attachments, batchRecords, materialLots, materials, user, type AttachmentRow } from "@/db/schema";
 import { ConflictError, NotFoundError } from "@/lib/errors";
 import { deleteObject, putObject, signedDownloadUrl } from "@/lib/storage";
 import { ATTACHMENT_KINDS, ATTACHMENT_OWNER_TYPES } from "@/lib/validations/uploads";
@@ -23,12 +23,21 @@ export async function findOwner(teamId: string, ownerType: OwnerType, ownerId: s
     const [m] = await db.select({ id: materials.id }).from(materials).where(and(eq(materials.teamId, teamId), eq(materials.id, ownerId))).limit(1);
     return m ? { open: true } : null;
   }
+  if (ownerType === "lot") {
+    const [l] = await db.select({ id: materialLots.id }).from(materialLots).where(and(eq(materialLots.teamId, teamId), eq(materialLots.id, ownerId))).limit(1);
+    return l ? { open: true } : null;
+  }
   const [b] = await db
     .select({ state: batchRecords.state })
     .from(batchRecords)
     .where(and(eq(batchRecords.teamId, teamId), eq(batchRecords.id, ownerId)))
     .limit(1);
   return b ? { open: b.state === "open" } : null;
+}
+
+/** The word for an owner type in a 404 message. */
+export function ownerWord(ownerType: OwnerType): string {
+  return ownerType === "material" ? "material" : ownerType === "lot" ? "material lot" : "batch record";
 }
 
 const closed = () => new ConflictError("conflict", "This batch record is closed and can no longer change.");
@@ -54,7 +63,7 @@ export async function createAttachment(
   data: { ownerType: OwnerType; ownerId: string; kind: AttachmentKind; fileName: string; contentType: string; bytes: Uint8Array },
 ) {
   const owner = await findOwner(actor.teamId, data.ownerType, data.ownerId);
-  if (!owner) throw new NotFoundError(data.ownerType === "material" ? "material" : "batch record");
+  if (!owner) throw new NotFoundError(ownerWord(data.ownerType));
   if (!owner.open) throw closed();
   const id = crypto.randomUUID();
   // The key never contains anything the user typed.

@@ -11,7 +11,7 @@ export type AttachmentKind = Attachment["kind"];
 
 /** The record a document belongs to. */
 export interface AttachmentOwner {
-  ownerType: "material" | "batch";
+  ownerType: "material" | "batch" | "lot";
   ownerId: string;
 }
 

@@ -8,7 +8,7 @@
 import { ZodError } from "zod";
 import { duplicateConflict, isDbUnavailable, tooLongColumn } from "@/db/errors";
 import { authRefusal } from "@/lib/auth-errors";
-import { ConflictError, DomainError, ExpiredError, NotFoundError, RuleError } from "@/lib/errors";
+import { ConflictError, DomainError, ExpiredError, NotFoundError, RuleError, SeparationError } from "@/lib/errors";
 import { FormulationError } from "@/lib/formulation/errors";
 import { UploadError } from "@/lib/uploads/upload-error";
 
@@ -57,6 +57,7 @@ export function zodFields(err: ZodError): Record<string, string> {
 /** The status of each domain error class; the first match wins. */
 const DOMAIN_STATUS: [abstract new (...args: never[]) => DomainError, number][] = [
   [NotFoundError, 404],
+  [SeparationError, 403],
   [ConflictError, 409],
   [ExpiredError, 410],
   [RuleError, 422],

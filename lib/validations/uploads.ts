@@ -4,10 +4,10 @@ import { IMPORT_KINDS } from "@/lib/enums";
 
 export const importKindSchema = z.enum(IMPORT_KINDS, { error: 'kind must be "formulation" or "materials"' });
 
-export const ATTACHMENT_OWNER_TYPES = ["material", "batch"] as const;
+export const ATTACHMENT_OWNER_TYPES = ["material", "batch", "lot"] as const;
 export const ATTACHMENT_KINDS = ["sds", "coa", "other"] as const;
 
-export const attachmentOwnerTypeSchema = z.enum(ATTACHMENT_OWNER_TYPES, { error: 'ownerType must be "material" or "batch"' });
+export const attachmentOwnerTypeSchema = z.enum(ATTACHMENT_OWNER_TYPES, { error: 'ownerType must be "material", "batch" or "lot"' });
 
 export const attachmentOwnerSchema = z.object({
   ownerType: attachmentOwnerTypeSchema,

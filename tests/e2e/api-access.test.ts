@@ -137,6 +137,16 @@ const cases: Case[] = [
   { route: "/api/batches/[id]/results/[resultId]/acknowledge", name: "acknowledge a result (invalid body)", method: "POST", path: () => "/api/batches/missing/results/missing/acknowledge", body: () => ({}), allowed: 422 },
   // Creating a team needs only a signed-in person (a new account starts its own team).
   { route: "/api/teams", name: "create team (invalid body)", method: "POST", path: () => "/api/teams", body: () => ({ name: "" }), allowed: 422 },
+  // Issue 17, lots, disposition and traceability.
+  { route: "/api/lots", name: "list lots", method: "GET", path: () => "/api/lots", allowed: 200 },
+  { route: "/api/lots", name: "receive lot (invalid body)", method: "POST", path: () => "/api/lots", body: () => ({ quantity: -1 }), allowed: 422 },
+  { route: "/api/lots/[id]", name: "get lot (missing)", method: "GET", path: () => "/api/lots/missing", allowed: 404 },
+  { route: "/api/lots/[id]/export", name: "export lot trace (missing)", method: "GET", path: () => "/api/lots/missing/export?format=csv", allowed: 404 },
+  { route: "/api/attachments", name: "list a lot's attachments (missing lot)", method: "GET", path: () => "/api/attachments?ownerType=lot&ownerId=missing", kind: "lot", allowed: 404 },
+  { route: "/api/batches/[id]/lots", name: "lots of a batch (missing)", method: "GET", path: () => "/api/batches/missing/lots", allowed: 404 },
+  { route: "/api/batches/[id]/lines/[index]/lot", name: "choose a lot for a line (missing)", method: "PUT", path: () => "/api/batches/missing/lines/0/lot", body: () => ({ lotId: "missing" }), allowed: 404 },
+  { route: "/api/batches/[id]/disposition", name: "disposition status (missing)", method: "GET", path: () => "/api/batches/missing/disposition", allowed: 404 },
+  { route: "/api/batches/[id]/disposition", name: "dispose batch (missing)", method: "POST", path: () => "/api/batches/missing/disposition", body: () => ({ disposition: "rejected" }), allowed: 404 },
 ];
 
 function call(client: Client, c: Case) {

@@ -231,6 +231,47 @@ beforeAll(async () => {
   for (const [method, path, body, field] of batchBad) {
     cases.push({ label: `batch ${method} ${JSON.stringify(body).slice(0, 50)}`, client: p, method, path, body: JSON.stringify(body), field });
   }
+  // Issue 17, lots: receiving a lot, a line choosing one, disposing a batch.
+  const startedBatch = (await (await production.fetch(`/api/batches/${batchId}`)).json()) as { lines: { materialId: string }[] };
+  const lineMaterial = startedBatch.lines[0]!.materialId;
+  const goodLot = { materialId: lineMaterial, supplier: "Bad-input Supplies", supplierLot: "BI-1", quantity: 100, unit: "g", receivedOn: "2026-01-10", expiresOn: "2027-01-10" };
+  // An expired lot of line 0's material: choosing it is refused (expiry before today).
+  const expiredRes = await production.fetch("/api/lots", {
+    method: "POST",
+    json: { ...goodLot, supplierLot: `BI-EXPIRED-${Date.now()}`, quantity: 1e6, receivedOn: "2020-01-01", expiresOn: "2020-06-01" },
+  });
+  const expiredLotId = ((await expiredRes.json()) as { id: string }).id;
+  const lotBad: [string, () => string, Json, string][] = [];
+  for (const v of NUMBER_BAD.concat([-1, 0, -0.001, 1e12])) lotBad.push(["POST", () => "/api/lots", { ...goodLot, quantity: v }, "quantity"]);
+  for (const v of ["lb", "", "G", 5, null]) lotBad.push(["POST", () => "/api/lots", { ...goodLot, unit: v }, "unit"]);
+  for (const v of ["2026-13-40", "2026-02-30", "yesterday", "10/01/2026", 20260110, null, ""]) lotBad.push(["POST", () => "/api/lots", { ...goodLot, receivedOn: v }, "receivedOn"]);
+  for (const v of ["2026-01-09", "2025-12-31", "2027-02-29"]) lotBad.push(["POST", () => "/api/lots", { ...goodLot, expiresOn: v }, "expiresOn"]);
+  for (const v of [0, -0.5, 1.01, 98, "0.9", "abc"]) lotBad.push(["POST", () => "/api/lots", { ...goodLot, measuredAssay: v }, "measuredAssay"]);
+  for (const v of STRING_BAD) lotBad.push(["POST", () => "/api/lots", { ...goodLot, supplier: v }, "supplier"]);
+  for (const name of NAME_BAD) lotBad.push(["POST", () => "/api/lots", { ...goodLot, supplierLot: name.slice(0, 101) }, "supplierLot"]);
+  lotBad.push(["POST", () => "/api/lots", { ...goodLot, materialId: "00000000-0000-0000-0000-000000000000" }, "materialId"]);
+  lotBad.push(["POST", () => "/api/lots", { ...goodLot, materialId: undefined as unknown as Json }, "materialId"]);
+  lotBad.push(["POST", () => "/api/lots", { ...goodLot, extra: 1 }, "body"]);
+  lotBad.push(["PUT", () => `/api/batches/${batchId}/lines/0/lot`, { lotId: expiredLotId }, "lotId"]);
+  lotBad.push(["PUT", () => `/api/batches/${batchId}/lines/0/lot`, { lotId: "00000000-0000-0000-0000-000000000000" }, "lotId"]);
+  for (const v of [12, [], {}, ""]) lotBad.push(["PUT", () => `/api/batches/${batchId}/lines/0/lot`, { lotId: v }, "lotId"]);
+  lotBad.push(["PUT", () => `/api/batches/${batchId}/lines/0/lot`, { lotId: null, extra: 1 }, "body"]);
+  for (const [method, path, body, field] of lotBad) {
+    cases.push({ label: `lot ${method} ${JSON.stringify(body).slice(0, 70)}`, client: p, method, path, body: JSON.stringify(body), field });
+  }
+  const disposeBad: [Json, string][] = [
+    [{ disposition: "approved" }, "disposition"],
+    [{ disposition: null }, "disposition"],
+    [{}, "disposition"],
+    [{ disposition: "released", acknowledgedDeviations: [{ lineIndex: -1, note: "x" }] }, "acknowledgedDeviations"],
+    [{ disposition: "released", acknowledgedDeviations: [{ lineIndex: 0, note: "\u200B" }] }, "acknowledgedDeviations"],
+    [{ disposition: "released", acknowledgedDeviations: "all" }, "acknowledgedDeviations"],
+    [{ disposition: "released_under_deviation", justification: 5 }, "justification"],
+    [{ disposition: "rejected", extra: 1 }, "body"],
+  ];
+  for (const [body, field] of disposeBad) {
+    cases.push({ label: `dispose ${JSON.stringify(body).slice(0, 70)}`, client: a, method: "POST", path: () => `/api/batches/${batchId}/disposition`, body: JSON.stringify(body), field });
+  }
   // The team's currency: an ISO 4217 code of three letters (ISO 4217, the alphabetic code), nothing else.
   const currencyBad: Json[] = ["EURO", "", "   ", "E1R", "€", "eu", 5, null, true, [], {}, "E\u202eUR", "ÉUR"];
   for (const v of currencyBad) {

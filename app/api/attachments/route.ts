@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { createAttachment, findOwner, listAttachments, type OwnerType } from "@/db/queries/attachments";
+import { createAttachment, findOwner, listAttachments, ownerWord, type OwnerType } from "@/db/queries/attachments";
 import { NotFoundError } from "@/lib/errors";
 import { readQuery } from "@/lib/http/body";
 import { ApiError } from "@/lib/http/errors";
@@ -17,7 +17,7 @@ async function queriedOwner(req: Request) {
 
 /** GET /api/attachments?ownerType=material|batch&ownerId=… : the owner's attachments (read permission on the owner). */
 export const GET = route({ permission: ATTACHMENT_PERMISSIONS.read, subject: queriedOwner }, async (_req, { team, subject }) => {
-  if (!(await findOwner(team.id, subject.kind, subject.ownerId))) throw new NotFoundError(subject.kind === "material" ? "material" : "batch record");
+  if (!(await findOwner(team.id, subject.kind, subject.ownerId))) throw new NotFoundError(ownerWord(subject.kind));
   return Response.json(await listAttachments(team.id, subject.kind, subject.ownerId));
 });
 

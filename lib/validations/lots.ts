@@ -1,0 +1,62 @@
+/** zod schemas of the material lot, lot choice and disposition routes. */
+import { z } from "zod";
+import { BATCH_DISPOSITIONS, LOT_UNITS } from "@/lib/enums";
+import { nameField, notesField } from "./text";
+
+const id = (label: string) => z.string({ error: `${label} is required` }).trim().min(1, `${label} is required`).max(36, "At most 36 characters");
+const isoDate = (label: string) =>
+  z
+    .string({ error: `${label} must be a date (YYYY-MM-DD)` })
+    .regex(/^\d{4}-\d{2}-\d{2}$/, `${label} must be a date (YYYY-MM-DD)`)
+    .refine((s) => !Number.isNaN(Date.parse(`${s}T00:00:00Z`)) && new Date(`${s}T00:00:00Z`).toISOString().startsWith(s), `${label} is not a real date`);
+
+export const receiveLotSchema = z
+  .strictObject({
+    materialId: id("Material"),
+    supplier: nameField(200, "Supplier"),
+    supplierLot: nameField(100, "Supplier lot number"),
+    quantity: z
+      .number({ error: "The quantity must be a number" })
+      .positive("The quantity must be greater than 0")
+      .max(1e9, "The quantity is too large"),
+    unit: z.enum(LOT_UNITS, { error: 'The unit must be "g", "kg", "mL" or "L"' }),
+    receivedOn: isoDate("The received date"),
+    expiresOn: isoDate("The expiry date").nullable().optional(),
+    measuredAssay: z
+      .number({ error: "The measured assay must be a number (a mass fraction, 0–1)" })
+      .gt(0, "The measured assay must be greater than 0")
+      .max(1, "The measured assay is a mass fraction: at most 1")
+      .nullable()
+      .optional(),
+    notes: notesField(5000).optional(),
+  })
+  .superRefine((v, ctx) => {
+    if (v.expiresOn && v.expiresOn < v.receivedOn) {
+      ctx.addIssue({ code: "custom", path: ["expiresOn"], message: "The expiry date must not be before the received date" });
+    }
+  });
+export type ReceiveLotInput = z.infer<typeof receiveLotSchema>;
+
+export const lotListQuerySchema = z.object({
+  materialId: z.string().max(36, "At most 36 characters").optional(),
+  inStock: z.enum(["0", "1"], { error: 'inStock must be "0" or "1"' }).optional(),
+});
+
+export const chooseLotSchema = z.strictObject({ lotId: id("Lot").nullable() });
+
+export const disposeSchema = z.strictObject({
+  disposition: z.enum(BATCH_DISPOSITIONS, { error: 'The disposition must be "released", "rejected" or "released_under_deviation"' }),
+  justification: notesField(5000, "Justification").optional(),
+  acknowledgedDeviations: z
+    .array(
+      z.strictObject({
+        lineIndex: z.number({ error: "The line index must be a number" }).int("The line index must be a whole number").min(0).max(10_000),
+        note: nameField(2000, "Note"),
+      }),
+    )
+    .max(500)
+    .optional(),
+});
+export type DisposeInput = z.infer<typeof disposeSchema>;
+
+export const traceFormatSchema = z.object({ format: z.enum(["csv", "xlsx"], { error: 'format must be "csv" or "xlsx"' }).optional() });

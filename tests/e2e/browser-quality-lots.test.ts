@@ -1,0 +1,88 @@
+/**
+ * End to end, in Chromium: production receives a material lot through the
+ * form (a bad expiry date is named beside its field), the lot page shows
+ * what is on hand; a line of a batch takes from that lot; a reviewer who did
+ * not make the batch releases it from the batch record's disposition panel,
+ * and the lot's quantity on hand goes down by the line's mass.
+ */
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { openSession, poll, signInAs, unique, type Session } from "./browser";
+import { demo, signIn, type Client } from "./http";
+
+interface Batch {
+  id: string;
+  lines: { index: number; role: string; materialId: string; name: string; targetGrams: number }[];
+}
+
+let api: Client;
+let releasedId: string;
+
+beforeAll(async () => {
+  api = await signIn(demo.production);
+  const list = (await (await api.fetch("/api/formulations?pageSize=100")).json()) as { rows: { id: string; name: string }[] };
+  const hc3 = list.rows.find((f) => f.name === "Visor hard coat HC-3")!.id;
+  const detail = (await (await api.fetch(`/api/formulations/${hc3}`)).json()) as { revisions: { id: string; state: string }[] };
+  releasedId = detail.revisions.find((r) => r.state === "released")!.id;
+});
+
+describe("material lots and batch disposition in the browser", () => {
+  let production: Session;
+  let reviewer: Session;
+  const stamp = unique();
+  let batch: Batch;
+  let lotId: string;
+
+  beforeAll(async () => {
+    production = await openSession();
+    await signInAs(production.page, demo.production);
+    reviewer = await openSession();
+    await signInAs(reviewer.page, demo.reviewer);
+    batch = (await (await api.fetch("/api/batches", { method: "POST", json: { revisionId: releasedId } })).json()) as Batch;
+  });
+
+  afterAll(async () => {
+    await production?.close();
+    await reviewer?.close();
+  });
+
+  it("receives a lot through the form, naming a bad expiry date beside its field", async () => {
+    const page = production.page;
+    const line = batch.lines.find((l) => l.role !== "water")!;
+    await page.goto("/lots");
+    await page.locator("#lot-material").selectOption(line.materialId);
+    await page.locator("#lot-supplier").fill("Browser Silanes");
+    await page.locator("#lot-number").fill(`BR-${stamp}`);
+    await page.locator("#lot-quantity").fill("2");
+    await page.locator("#lot-unit").selectOption("kg");
+    await page.locator("#lot-received").fill("2026-03-10");
+    await page.locator("#lot-expires").fill("2026-03-01");
+    await page.getByRole("button", { name: "Receive lot" }).click();
+    await poll(() => page.locator("#lot-expires-error").textContent()).toMatch(/must not be before the received date/);
+    await page.locator("#lot-expires").fill("2099-03-01");
+    await page.getByRole("button", { name: "Receive lot" }).click();
+    await page.waitForURL(/\/lots\/[0-9a-f-]{36}$/);
+    lotId = /\/lots\/([0-9a-f-]{36})$/.exec(page.url())![1]!;
+    expect(await page.getByTestId("lot-on-hand").textContent()).toBe("2 kg");
+  });
+
+  it("lets a reviewer who did not make the batch release it, taking the line's mass off the lot", async () => {
+    const line = batch.lines.find((l) => l.role !== "water")!;
+    for (const l of batch.lines) {
+      await api.fetch(`/api/batches/${batch.id}/lines/${l.index}`, { method: "PATCH", json: { actualGrams: l.targetGrams, lotNumber: l.role === "water" ? null : `T-${stamp}` } });
+    }
+    const chosen = await api.fetch(`/api/batches/${batch.id}/lines/${line.index}/lot`, { method: "PUT", json: { lotId } });
+    expect(chosen.status).toBe(200);
+    expect((await api.fetch(`/api/batches/${batch.id}/close`, { method: "POST", json: {} })).status).toBe(200);
+
+    const page = reviewer.page;
+    await page.goto(`/batches/${batch.id}`);
+    await page.getByLabel("Released for use").check();
+    await page.getByRole("button", { name: "Record disposition" }).click();
+    await poll(() => page.getByTestId("disposition").count()).toBeGreaterThan(0);
+    expect(await page.getByTestId("disposition").textContent()).toMatch(/Released for use/);
+    const lot = (await (await api.fetch(`/api/lots/${lotId}`)).json()) as { quantityOnHand: number; uses: { quantityUsed: number }[] };
+    // 2 kg received, the line's mass (g) taken off in kg: 1 kg = 1000 g.
+    expect(lot.quantityOnHand).toBeCloseTo(2 - line.targetGrams / 1000, 9);
+    expect(lot.uses[0]!.quantityUsed).toBeCloseTo(line.targetGrams / 1000, 9);
+  });
+});
