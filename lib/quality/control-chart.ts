@@ -67,13 +67,13 @@ export function individualsChart(values: readonly number[]): IMRChart | null {
   if (values.length < 2 || values.some((v) => !Number.isFinite(v))) return null;
   const n = values.length;
   const mean = values.reduce((s, v) => s + v, 0) / n;
-  const ranges = values.slice(1).map((v, i) => Math.abs(v - values[i]));
+  const ranges = values.slice(1).map((v, i) => Math.abs(v - values[i]!));
   const meanMovingRange = ranges.reduce((s, r) => s + r, 0) / ranges.length;
   const sigma = meanMovingRange / D2;
   const points: ChartPoint[] = values.map((value, index) => ({
     index,
     value,
-    movingRange: index === 0 ? null : ranges[index - 1],
+    movingRange: index === 0 ? null : ranges[index - 1]!,
     rules: [],
   }));
   for (const point of points) point.rules = rulesAt(values, point.index, mean, sigma);
@@ -102,7 +102,7 @@ function side(v: number, mean: number): number {
 function rulesAt(values: readonly number[], i: number, mean: number, sigma: number): RunRule[] {
   const rules: RunRule[] = [];
   if (sigma <= 0) return rules;
-  const v = values[i];
+  const v = values[i]!;
   if (Math.abs(v - mean) > 3 * sigma) rules.push("beyond-3-sigma");
   if (i >= 2) {
     const s = side(v, mean);

@@ -46,7 +46,7 @@ describe("run rules (NIST/SEMATECH 6.3.2, Western Electric rules)", () => {
     const values = [10, 11, 10, 11, 10, 11, 10, 11, 10, 11, 20];
     const c = individualsChart(values)!;
     expect(c.upperControlLimit).toBeCloseTo(16.1508, 3);
-    expect(c.points[10].rules).toContain("beyond-3-sigma");
+    expect(c.points[10]!.rules).toContain("beyond-3-sigma");
     expect(c.points.slice(0, 10).every((p) => !p.rules.includes("beyond-3-sigma"))).toBe(true);
   });
 
@@ -59,8 +59,8 @@ describe("run rules (NIST/SEMATECH 6.3.2, Western Electric rules)", () => {
     const c = individualsChart([...base, 13.5, 10.5, 13.5])!;
     expect(c.mean).toBeCloseTo(10.76087, 5);
     expect(c.sigma).toBeCloseTo(1.108156, 6);
-    expect(c.points[20].rules).toEqual([]);
-    expect(c.points[22].rules).toEqual(["two-of-three-beyond-2-sigma"]);
+    expect(c.points[20]!.rules).toEqual([]);
+    expect(c.points[22]!.rules).toEqual(["two-of-three-beyond-2-sigma"]);
     expect(c.points.filter((p) => p.rules.length > 0).map((p) => p.index)).toEqual([22]);
   });
 
@@ -71,10 +71,10 @@ describe("run rules (NIST/SEMATECH 6.3.2, Western Electric rules)", () => {
     const high = [10.9, 11.1, 10.9, 11.1, 10.9, 11.1, 10.9, 11.1];
     const c = individualsChart([...low, ...high])!;
     expect(c.mean).toBeCloseTo(10.5, 12);
-    expect(c.points[6].rules).not.toContain("eight-on-one-side");
-    expect(c.points[7].rules).toContain("eight-on-one-side");
-    expect(c.points[14].rules).not.toContain("eight-on-one-side");
-    expect(c.points[15].rules).toContain("eight-on-one-side");
+    expect(c.points[6]!.rules).not.toContain("eight-on-one-side");
+    expect(c.points[7]!.rules).toContain("eight-on-one-side");
+    expect(c.points[14]!.rules).not.toContain("eight-on-one-side");
+    expect(c.points[15]!.rules).toContain("eight-on-one-side");
   });
 
   it("flags nothing when all values are equal (σ = 0)", () => {
