@@ -173,3 +173,66 @@ export const DEMO_FORMULATIONS: DemoFormulation[] = [
     ],
   },
 ];
+
+/**
+ * The quality demo (db/seed-quality.ts), all invented demo data: the visor
+ * hard coat's specifications, supplier lots of its materials, and the batch
+ * history generated with a seeded random generator (mulberry32, seed below).
+ */
+export const DEMO_QUALITY = {
+  formulation: "Visor hard coat HC-3",
+  seed: 17_2026,
+  batches: 28,
+  specifications: [
+    {
+      property: "Solids content",
+      method: "Gravimetric: 2 g of sol dried 1 h at 120 °C (demo)",
+      unit: "% w/w",
+      numeric: true,
+      // The revision's basis: 500 g of sol at 20 % solids.
+      target: 20,
+      lower: 19,
+      upper: 21,
+      requirement: null,
+      origin: "computed",
+    },
+    {
+      property: "Viscosity",
+      method: "Rotational viscometer, spindle 1, 60 rpm, 25 °C",
+      unit: "mPa·s",
+      numeric: true,
+      target: 4.5,
+      lower: 3.5,
+      upper: 5.5,
+      requirement: null,
+      origin: "entered",
+    },
+    {
+      property: "Appearance",
+      method: "Visual, against a black background",
+      unit: "",
+      numeric: false,
+      target: null,
+      lower: null,
+      upper: null,
+      requirement: "clear, no haze",
+      origin: "entered",
+    },
+  ] as const,
+  /** Solids content (% w/w): mean and spread, then a shift upwards from this batch (0-based) on. */
+  solids: { mean: 20.0, sd: 0.12, shift: 0.35, shiftFrom: 16 },
+  viscosity: { mean: 4.6, sd: 0.15, outOfSpecValue: 5.8 },
+  /** The batch (0-based) with an out-of-specification viscosity, acknowledged and released under deviation. */
+  outOfSpecBatch: 9,
+  acknowledgement: "Viscosity above the upper limit: sol aged 6 h longer over a weekend. Coated test panels pass hardness and adhesion. (Demo data.)",
+  deviationJustification:
+    "Released under deviation: thicker sol gives a dry film within the thickness tolerance at the usual withdrawal speed; checked on two test visors. (Demo data.)",
+  lots: [
+    { material: "gptms", supplier: "Demo Silanes Ltd", lotPrefix: "GP", kilograms: 5, shelfLifeDays: 365, newExpiresInDays: 300 },
+    { material: "teos", supplier: "Demo Silanes Ltd", lotPrefix: "TE", kilograms: 5, shelfLifeDays: 365, newExpiresInDays: 25 },
+    { material: "ti-isopropoxide", supplier: "Demo Metal Organics", lotPrefix: "TI", kilograms: 1, shelfLifeDays: 180, newExpiresInDays: 12 },
+    { material: "acac", supplier: "Demo Metal Organics", lotPrefix: "AA", kilograms: 1, shelfLifeDays: 365, newExpiresInDays: 200 },
+    { material: "ethanol", supplier: "Demo Solvents", lotPrefix: "ET", kilograms: 10, shelfLifeDays: 730, newExpiresInDays: 600 },
+    { material: "hcl-37", supplier: "Demo Solvents", lotPrefix: "HC", kilograms: 1, shelfLifeDays: 730, newExpiresInDays: 500 },
+  ],
+} as const;

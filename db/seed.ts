@@ -8,12 +8,13 @@ import { computeFormulation, ENGINE_VERSION, type FormulationInput, type Materia
 import { createDb, type Db } from "./client";
 import { DEMO_FORMULATIONS, DEMO_PASSWORD, DEMO_PRICE_SOURCE, DEMO_PRICES, DEMO_TEAM, DEMO_USERS, demoMaterialRefs, type DemoInput } from "./demo";
 import { copyReferenceMaterials } from "./queries/library";
+import { seedQualityDemo } from "./seed-quality";
 import { account, auditEvents, formulations, materials, member, organization, reviews, revisions, user } from "./schema";
 
 export interface SeedSummary {
   teamId: string;
   users: Record<string, string>;
-  created: { users: number; formulations: number };
+  created: { users: number; formulations: number; qualityBatches: number };
 }
 
 async function ensureUser(db: Db, email: string, name: string): Promise<{ id: string; created: boolean }> {
@@ -173,7 +174,8 @@ export async function seedDemo(db: Db): Promise<SeedSummary> {
       }
     });
   }
-  return { teamId, users, created: { users: createdUsers, formulations: createdFormulations } };
+  const quality = await seedQualityDemo(db, teamId, users);
+  return { teamId, users, created: { users: createdUsers, formulations: createdFormulations, qualityBatches: quality.batches } };
 }
 
 if (import.meta.url === `file://${process.argv[1]}`) {

@@ -86,6 +86,8 @@ const cases: Case[] = [
   { route: "/api/formulations", name: "create formulation (invalid body)", method: "POST", path: () => "/api/formulations", body: () => ({}), allowed: 422 },
   { route: "/api/formulations/[id]", name: "get formulation", method: "GET", path: () => `/api/formulations/${ids.formulation}`, allowed: 200 },
   { route: "/api/formulations/[id]/diff", name: "diff revisions", method: "GET", path: () => `/api/formulations/${ids.formulation}/diff?from=1&to=2`, allowed: 200 },
+  { route: "/api/formulations/[id]/charts", name: "control charts of a formulation", method: "GET", path: () => `/api/formulations/${ids.formulation}/charts`, allowed: 200 },
+  { route: "/api/formulations/[id]/charts", name: "control charts (missing formulation)", method: "GET", path: () => "/api/formulations/missing/charts", allowed: 404 },
   { route: "/api/revisions/[id]", name: "get released revision", method: "GET", path: () => `/api/revisions/${ids.released}`, allowed: 200 },
   { route: "/api/revisions/[id]", name: "get draft revision", method: "GET", path: () => `/api/revisions/${ids.draft}`, allowed: 200, unreleased: true },
   { route: "/api/revisions/[id]", name: "save draft (invalid body)", method: "PUT", path: () => `/api/revisions/${ids.draft}`, body: () => ({ version: "x" }), allowed: 422 },
@@ -211,6 +213,7 @@ describe("another team's records", () => {
     const probes: [Case["method"], string, unknown?][] = [
       ["GET", `/api/formulations/${ids.formulation}`],
       ["GET", `/api/formulations/${ids.formulation}/diff?from=1&to=2`],
+      ["GET", `/api/formulations/${ids.formulation}/charts`],
       ["POST", `/api/formulations/${ids.formulation}/revisions`, {}],
       ["GET", `/api/revisions/${ids.draft}`],
       ["PUT", `/api/revisions/${ids.draft}`, { version: 1, input: coatInput(otherLib) }],

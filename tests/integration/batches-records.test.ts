@@ -15,6 +15,9 @@ let actor: { userId: string; teamId: string };
 let releasedId: string;
 let draftId: string;
 let formulationId: string;
+/** Batches the demo seed writes (the quality history of the released revision). */
+let seededBatches: number;
+let seededClosed: number;
 
 beforeAll(async () => {
   t = await createTestDatabase("batches");
@@ -31,6 +34,8 @@ beforeAll(async () => {
   formulationId = released!.formulationId;
   const [draft] = await t.db.select({ id: revisions.id }).from(revisions).where(eq(revisions.state, "draft")).limit(1);
   draftId = draft!.id;
+  seededBatches = (await q.listBatches(actor.teamId, { formulationId })).rows.length;
+  seededClosed = (await q.listBatches(actor.teamId, { state: "closed" })).rows.length;
 });
 
 afterAll(async () => {
@@ -99,11 +104,11 @@ describe("batch records", () => {
     const batch = await q.startBatch(actor, releasedId);
     expect([batch.toleranceFraction, batch.balanceResolutionGrams]).toEqual([0.02, 0.001]);
     const list = await q.listBatches(actor.teamId, { formulationId });
-    expect(list.rows.length).toBe(4);
+    expect(list.rows.length).toBe(seededBatches + 4);
     expect(list.rows.every((r) => r.formulationId === formulationId)).toBe(true);
     const [f] = await t.db.select({ name: formulations.name }).from(formulations).where(eq(formulations.id, formulationId));
     expect(list.rows[0]!.formulationName).toBe(f!.name);
-    expect((await q.listBatches(actor.teamId, { state: "closed" })).rows.length).toBe(1);
+    expect((await q.listBatches(actor.teamId, { state: "closed" })).rows.length).toBe(seededClosed + 1);
     expect((await q.listBatches(crypto.randomUUID())).rows).toEqual([]);
   });
 });

@@ -1,8 +1,11 @@
 import { and, count, eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { DEMO_FORMULATIONS, DEMO_PRICES, DEMO_TEAM, DEMO_USERS } from "@/db/demo";
+import { DEMO_FORMULATIONS, DEMO_PRICES, DEMO_QUALITY, DEMO_TEAM, DEMO_USERS } from "@/db/demo";
+import { mulberry32 } from "@/db/seed-quality";
+import { individualsChart } from "@/lib/quality/control-chart";
+import { specificationsSchema } from "@/lib/quality/specification";
 import { seedDemo } from "@/db/seed";
-import { formulations, materials, member, organization, revisions, user } from "@/db/schema";
+import { batchDispositions, batchLotUses, batchRecords, batchResults, formulations, materialLots, materials, member, organization, revisions, user } from "@/db/schema";
 import { referenceMaterials } from "@/data/materials";
 import { createTestDatabase, type TestDatabase } from "../helpers/db";
 
@@ -23,6 +26,9 @@ async function counts() {
     materials: await n(t.db.select({ n: count() }).from(materials)),
     formulations: await n(t.db.select({ n: count() }).from(formulations)),
     revisions: await n(t.db.select({ n: count() }).from(revisions)),
+    batches: await n(t.db.select({ n: count() }).from(batchRecords)),
+    lots: await n(t.db.select({ n: count() }).from(materialLots)),
+    results: await n(t.db.select({ n: count() }).from(batchResults)),
   };
 }
 
@@ -33,7 +39,8 @@ describe("demo seed", () => {
     const second = await seedDemo(t.db);
     const afterSecond = await counts();
     expect(first.created.users).toBe(DEMO_USERS.length);
-    expect(second.created).toEqual({ users: 0, formulations: 0 });
+    expect(second.created).toEqual({ users: 0, formulations: 0, qualityBatches: 0 });
+    expect(first.created.qualityBatches).toBe(DEMO_QUALITY.batches);
     expect(second.teamId).toBe(first.teamId);
     expect(afterSecond).toEqual(afterFirst);
     expect(afterFirst.teams).toBe(1);
@@ -76,5 +83,70 @@ describe("demo seed", () => {
       expect(revision.result?.cost?.total, revision.id).toBeGreaterThan(0);
       expect(revision.result?.voc?.gramsPerLitre, revision.id).toBeGreaterThan(0);
     }
+  });
+
+  it("gives the same numbers from the same seed (mulberry32), different ones from another", () => {
+    const a = mulberry32(42), b = mulberry32(42), c = mulberry32(43);
+    const xs = [a(), a(), a()];
+    expect([b(), b(), b()]).toEqual(xs);
+    expect(c()).not.toBe(xs[0]);
+    expect(xs.every((x) => x >= 0 && x < 1)).toBe(true);
+  });
+
+  it("seeds the visor hard coat's quality history: lots, specifications, released batches with results showing a shift", async () => {
+    const [team] = await t.db.select().from(organization).where(eq(organization.slug, DEMO_TEAM.slug));
+    const teamId = team!.id;
+    const users = Object.fromEntries(
+      (await t.db.select({ id: user.id, role: member.role }).from(member).innerJoin(user, eq(user.id, member.userId)).where(eq(member.organizationId, teamId))).map(
+        (r) => [r.role, r.id],
+      ),
+    );
+    const [rev] = await t.db
+      .select({ id: revisions.id, specifications: revisions.specifications })
+      .from(revisions)
+      .innerJoin(formulations, eq(formulations.id, revisions.formulationId))
+      .where(and(eq(formulations.name, DEMO_QUALITY.formulation), eq(revisions.state, "released")));
+    // Specifications: valid against the shared schema, solids content computed, viscosity entered.
+    const specs = specificationsSchema.parse(rev!.specifications);
+    expect(specs.find((s) => s.property === "Solids content")?.origin).toBe("computed");
+    expect(specs.find((s) => s.property === "Viscosity")?.origin).toBe("entered");
+
+    const batches = await t.db.select().from(batchRecords).where(eq(batchRecords.revisionId, rev!.id));
+    expect(batches.length).toBeGreaterThanOrEqual(25);
+    expect(batches.every((b) => b.state === "closed" && b.startedBy === users.production && /demo data/i.test(b.notes ?? ""))).toBe(true);
+    const dispositions = await t.db.select().from(batchDispositions).where(eq(batchDispositions.teamId, teamId));
+    expect(dispositions.length).toBe(batches.length);
+    // Separation of duties: the reviewer disposes, never the maker.
+    expect(dispositions.every((d) => d.disposedBy === users.reviewer)).toBe(true);
+    const deviated = dispositions.filter((d) => d.disposition === "released_under_deviation");
+    expect(deviated.length).toBe(1);
+    expect(deviated[0]!.justification).toMatch(/\S{10,}/);
+    expect(dispositions.filter((d) => d.disposition === "released").length).toBe(batches.length - 1);
+
+    const results = await t.db.select().from(batchResults).where(eq(batchResults.teamId, teamId));
+    const oos = results.filter((r) => r.outOfSpec);
+    expect(oos.length).toBe(1);
+    expect(oos[0]!.batchId).toBe(deviated[0]!.batchId);
+    expect(oos[0]!.acknowledgedBy).toBe(users.reviewer);
+    expect(oos[0]!.acknowledgement).toBeTruthy();
+
+    // The solids content in time order breaks the 8-in-a-row rule (the shift), by our own chart code.
+    const order = new Map(batches.sort((a, b) => a.createdAt.getTime() - b.createdAt.getTime()).map((b, i) => [b.id, i]));
+    const solidsId = specs.find((s) => s.property === "Solids content")!.id;
+    const solids = results.filter((r) => r.specId === solidsId).sort((a, b) => order.get(a.batchId)! - order.get(b.batchId)!);
+    expect(solids.length).toBe(batches.length);
+    const chart = individualsChart(solids.map((r) => r.valueNumber!))!;
+    expect(chart.points.some((p) => p.rules.includes("eight-on-one-side"))).toBe(true);
+
+    // Lots: some expire within 30 days; none below zero on hand; every lot use points at a batch of the history.
+    const lots = await t.db.select().from(materialLots).where(eq(materialLots.teamId, teamId));
+    expect(lots.length).toBe(DEMO_QUALITY.lots.length * 2);
+    const in30 = new Date(Date.now() + 30 * 86_400_000).toISOString().slice(0, 10);
+    const today = new Date().toISOString().slice(0, 10);
+    expect(lots.filter((l) => l.expiresOn !== null && l.expiresOn >= today && l.expiresOn <= in30).length).toBeGreaterThanOrEqual(2);
+    expect(lots.every((l) => l.quantityOnHand >= 0 && l.quantityOnHand < l.quantityReceived)).toBe(true);
+    const uses = await t.db.select().from(batchLotUses).where(eq(batchLotUses.teamId, teamId));
+    expect(uses.length).toBeGreaterThan(batches.length);
+    expect(uses.every((u) => order.has(u.batchId) && (u.quantityUsed ?? 0) > 0)).toBe(true);
   });
 });

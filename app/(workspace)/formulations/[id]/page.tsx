@@ -37,6 +37,11 @@ export default async function FormulationPage({ params }: { params: Promise<{ id
                 Batch records
               </Link>
             ) : null}
+            {can(ctx.role, "batch:read") ? (
+              <Link href={`/formulations/${f.id}/charts`} className="rounded border border-rule bg-panel px-3 py-1.5 text-sm font-medium">
+                Control charts
+              </Link>
+            ) : null}
             {can(ctx.role, "audit:read") ? (
               <Link href={`/formulations/${f.id}/history`} className="rounded border border-rule bg-panel px-3 py-1.5 text-sm font-medium">
                 History
