@@ -259,3 +259,49 @@ describe("two releases of batches sharing a lot that covers only one, at the sam
     }
   });
 });
+
+describe("two reviewers deciding the same batch at the same moment", () => {
+  it("lets exactly one decide; the other gets a 409 and the lots are taken from once, every round", async () => {
+    const second = await addMember("reviewer");
+    for (let round = 0; round < ROUNDS; round++) {
+      const batch = await weighedBatch({ stock: 10_000 });
+      await bq.closeBatch(prod, batch.id);
+      const outcomes = await Promise.allSettled([
+        dq.disposeBatch(reviewer, batch.id, { disposition: "released" }),
+        dq.disposeBatch(second, batch.id, { disposition: round % 2 === 0 ? "released" : "rejected" }),
+      ]);
+      const failed = outcomes.filter((o): o is PromiseRejectedResult => o.status === "rejected");
+      expect(outcomes.filter((o) => o.status === "fulfilled")).toHaveLength(1);
+      expect(failed).toHaveLength(1);
+      expect(failed[0]!.reason).toBeInstanceOf(ConflictError);
+      // Whichever won, no lot was taken from twice.
+      const uses = await t.db.select().from(batchLotUses).where(eq(batchLotUses.batchId, batch.id));
+      for (const u of uses) {
+        const [lot] = await t.db.select().from(materialLots).where(eq(materialLots.id, u.lotId));
+        const line = batch.lines[u.lineIndex]!;
+        expect([10_000, 10_000 - line.targetGrams!].some((q) => Math.abs(q - lot!.quantityOnHand) < 1e-9)).toBe(true);
+      }
+    }
+  });
+});
+
+describe("an out-of-specification result entered while the batch is being released", () => {
+  it("never lets both through: either the result lands and blocks the release, or the release lands and the result gets a 409", async () => {
+    const rq = await import("@/db/queries/results");
+    const [rev] = await t.db.select({ specifications: revisions.specifications }).from(revisions).where(eq(revisions.id, releasedId));
+    const spec = (rev!.specifications ?? []).find((s) => s.numeric && s.upper !== null);
+    expect(spec, "the demo's released revision carries a numeric specification with an upper limit").toBeDefined();
+    for (let round = 0; round < ROUNDS; round++) {
+      const batch = await weighedBatch({ stock: 10_000 });
+      await bq.closeBatch(prod, batch.id);
+      const [entered, disposed] = await Promise.allSettled([
+        rq.enterResult(prod, batch.id, { specId: spec!.id, value: spec!.upper! + 1000 }),
+        dq.disposeBatch(reviewer, batch.id, { disposition: "released" }),
+      ]);
+      const both = entered.status === "fulfilled" && disposed.status === "fulfilled";
+      expect(both).toBe(false);
+      if (entered.status === "rejected") expect(entered.reason).toBeInstanceOf(ConflictError);
+      if (disposed.status === "rejected") expect(disposed.reason).toBeInstanceOf(RuleError);
+    }
+  });
+});

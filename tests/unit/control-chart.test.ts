@@ -4,8 +4,8 @@ import { capability, CPK_CAUTION, D2, D4, individualsChart } from "@/lib/quality
 // Formulas: NIST/SEMATECH e-Handbook of Statistical Methods, section 6.3.2 (individuals
 // control charts: x̄ ± 3·MR̄/d2, MR chart UCL = D4·MR̄, moving range of 2), section 6.1.6 (Cpk);
 // constants d2 = 1.128, D4 = 3.267 for n = 2: ISO 7870-2, table 2.
-// The worked examples below are computed by hand in the comments (the Handbook's own
-// data set is not reproduced from memory).
+// The worked examples below are computed by hand in the comments; one reproduces the
+// Handbook's own individuals-chart example, its data and limits recalled from memory.
 
 describe("I-MR control limits", () => {
   it("uses the ISO 7870-2 constants for moving ranges of two", () => {
@@ -30,6 +30,24 @@ describe("I-MR control limits", () => {
     expect(c.movingRangeUpperLimit).toBeCloseTo(4.9005, 10);
     expect(c.points.map((p) => p.movingRange)).toEqual([null, 2, 1, 2, 1]);
     expect(c.points.every((p) => p.rules.length === 0)).toBe(true);
+  });
+
+  it("reproduces the individuals-chart example of NIST/SEMATECH 6.3.2.2 (data and limits from memory)", () => {
+    // NIST/SEMATECH e-Handbook of Statistical Methods, 6.3.2.2 "Individuals Control Charts",
+    // example: ten measurements 49.6 47.6 49.9 51.3 47.8 51.2 52.6 52.4 53.6 52.1, with the
+    // Handbook's limits UCL 55.80, centre line 50.81, LCL 45.82 and MR chart UCL 6.13
+    // (data and limits recalled from memory, then recomputed by hand here):
+    // Σx = 508.1 → x̄ = 50.81; moving ranges 2.0 2.3 1.4 3.5 3.4 1.4 0.2 1.2 1.5, Σ = 16.9
+    // → MR̄ = 16.9/9 = 1.87778; 3·MR̄/1.128 = 4.99409 → UCL 55.804, LCL 45.816;
+    // D4·MR̄ = 3.267 · 1.87778 = 6.1347. No point lies beyond the limits, no run of 8.
+    const c = individualsChart([49.6, 47.6, 49.9, 51.3, 47.8, 51.2, 52.6, 52.4, 53.6, 52.1])!;
+    expect(c.mean).toBeCloseTo(50.81, 10);
+    expect(c.meanMovingRange).toBeCloseTo(1.877778, 6);
+    expect(c.upperControlLimit).toBeCloseTo(55.8, 2);
+    expect(c.lowerControlLimit).toBeCloseTo(45.82, 2);
+    expect(c.movingRangeUpperLimit).toBeCloseTo(6.13, 2);
+    expect(c.points.some((p) => p.rules.includes("beyond-3-sigma"))).toBe(false);
+    expect(c.points.some((p) => p.rules.includes("eight-on-one-side"))).toBe(false);
   });
 
   it("refuses fewer than two values or a non-finite one", () => {
