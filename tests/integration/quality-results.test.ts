@@ -12,8 +12,8 @@ import { seedDemo } from "@/db/seed";
 import { auditEvents, batchDispositions, batchResults, formulations, revisions } from "@/db/schema";
 import { ConflictError, NotFoundError, RuleError } from "@/lib/errors";
 import { proposedSpecifications } from "@/lib/quality/proposed-specs";
-import type { Specification } from "@/lib/quality/specification";
 import { createTestDatabase, type TestDatabase } from "../helpers/db";
+import { APPEARANCE_SPEC, VISCOSITY_SPEC } from "../helpers/specifications";
 
 let t: TestDatabase;
 let specsQ: typeof import("@/db/queries/specifications");
@@ -28,30 +28,8 @@ let draftId: string;
 let releasedId: string;
 let releasedFormulationId: string;
 
-const viscosity: Specification = {
-  id: "7f1c3a52-3d7e-4b59-9a51-0d6f2b0c1a01",
-  property: "Viscosity",
-  method: "Brookfield, spindle 1, 60 rpm, 25 °C",
-  unit: "mPa·s",
-  numeric: true,
-  target: 5,
-  lower: 4,
-  upper: 6,
-  requirement: null,
-  origin: "entered",
-};
-const appearance: Specification = {
-  id: "7f1c3a52-3d7e-4b59-9a51-0d6f2b0c1a02",
-  property: "Appearance",
-  method: "Visual, 50 mL in a clear glass bottle",
-  unit: "",
-  numeric: false,
-  target: null,
-  lower: null,
-  upper: null,
-  requirement: "clear, no haze, no gel particles",
-  origin: "entered",
-};
+const viscosity = VISCOSITY_SPEC;
+const appearance = APPEARANCE_SPEC;
 
 beforeAll(async () => {
   t = await createTestDatabase("quality_results");

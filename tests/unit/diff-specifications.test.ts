@@ -3,6 +3,7 @@ import { diffRevisions } from "@/lib/diff";
 import { referenceMaterial } from "@/data/materials";
 import type { FormulationInput } from "@/lib/formulation";
 import type { Specification } from "@/lib/quality/specification";
+import { VISCOSITY_SPEC } from "../helpers/specifications";
 
 // Which specification changes a revision diff shows; no chemistry is checked here.
 const input: FormulationInput = {
@@ -13,18 +14,7 @@ const input: FormulationInput = {
   steps: [{ name: "Cure", temperatureC: 120, durationH: 1 }],
 };
 
-const viscosity: Specification = {
-  id: "00000000-0000-4000-8000-000000000001",
-  property: "Viscosity",
-  method: "Brookfield, spindle 1, 60 rpm, 25 °C",
-  unit: "mPa·s",
-  numeric: true,
-  target: 5,
-  lower: 4,
-  upper: 6,
-  requirement: null,
-  origin: "entered",
-};
+const viscosity = VISCOSITY_SPEC;
 
 const d = (a: Specification[] | null, b: Specification[] | null) =>
   diffRevisions({ input, result: null, specifications: a }, { input, result: null, specifications: b }).specifications;
