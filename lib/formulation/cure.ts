@@ -1,21 +1,8 @@
 import type { DecLine } from "./composition";
 import { CURE_RATIO_RANGE } from "./constants";
-import { type Dec, dec, ONE, timesFactor, toNumber, ZERO } from "./decimal";
+import { type Dec, reciprocal, timesFactor, toNumber, ZERO } from "./decimal";
 import type { IndexedMaterial } from "./material-index";
 import type { CureResult, Notice } from "./result-types";
-
-const reciprocals = new Map<number, Dec>();
-
-/** 1 / equivalent weight (eq/g), memoised: equivalent weights recur on every call. */
-function perGram(equivalentWeight: number): Dec {
-  let value = reciprocals.get(equivalentWeight);
-  if (value === undefined) {
-    if (reciprocals.size >= 1000) reciprocals.clear();
-    value = ONE.div(dec(equivalentWeight));
-    reciprocals.set(equivalentWeight, value);
-  }
-  return value;
-}
 
 /**
  * Active mass of a line, g: the organic phase's dry mass, else the mass as
@@ -55,8 +42,8 @@ export function cureBalance(lines: readonly DecLine[], byId: Map<string, Indexed
     if (eew === undefined && ahew === undefined) continue;
     any = true;
     const active = activeGrams(line, material.assay);
-    if (eew !== undefined) epoxy = epoxy.plus(active.times(perGram(eew)));
-    if (ahew !== undefined) amine = amine.plus(active.times(perGram(ahew)));
+    if (eew !== undefined) epoxy = epoxy.plus(active.times(reciprocal(eew)));
+    if (ahew !== undefined) amine = amine.plus(active.times(reciprocal(ahew)));
   }
   if (!any) return { notices: [] };
   const cure: CureResult = { epoxyEq: toNumber(epoxy), amineHydrogenEq: toNumber(amine) };
