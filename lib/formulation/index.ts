@@ -57,3 +57,12 @@ export type {
   CureResult,
   CostResult,
 } from "./result-types";
+export {
+  decimalModel,
+  figuresFromResult,
+  type NumericFigures,
+  type NumericFailure,
+  type NumericModel,
+  type NumericOutcome,
+  type NumericPhase,
+} from "./numeric/figures";

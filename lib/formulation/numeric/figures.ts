@@ -1,0 +1,200 @@
+/**
+ * The figures the numeric path (plain float64) computes for one point of an
+ * exploration, and the same figures read from the decimal engine's result.
+ * The decimal engine stays the source of every saved, printed or released
+ * recipe; these figures are for plots and searches only.
+ *
+ * A figure the engine leaves out (no coating, no bulk density, no price …)
+ * is NaN here, so that every figures object has the same shape.
+ */
+import { computeFormulation } from "../compute";
+import { isFormulationError } from "../errors";
+import type { FormulationInput } from "../input-schema";
+import type { Material } from "../material-schema";
+import type { FormulationResult, ThermalStatus } from "../result-types";
+
+/** One phase of the dry composite: a residue, an organic phase or a bonded ligand. */
+export interface NumericPhase {
+  materialId: string;
+  /** True for the phase of an organic component (kind "organic"); residues and bonded ligands are not. */
+  organic: boolean;
+  weightFraction: number;
+  volumeFraction: number;
+}
+
+/** Every figure an exploration can plot or search on. Units in the names; NaN where the engine has no value. */
+export interface NumericFigures {
+  /** sol.massGrams */
+  solMassGrams: number;
+  /** sol.volumeMl (ideal mixing) */
+  solVolumeMl: number;
+  /** sol.solidsFraction, dry composite / sol mass */
+  solidsFraction: number;
+  /** sol.residueGramsPerL */
+  residueGramsPerL: number;
+  /** composite.massGrams */
+  compositeMassGrams: number;
+  /** composite.theoreticalDensity, g/cm³ */
+  theoreticalDensity: number;
+  /** composite.porosity (NaN without a bulk density) */
+  porosity: number;
+  /** composite.denseShrinkage.linear */
+  denseLinearShrinkage: number;
+  /** composite.denseShrinkage.volumetric */
+  denseVolumetricShrinkage: number;
+  /** Σ weight fraction of the phases with `organic` true. */
+  organicWeightFraction: number;
+  /** Σ volume fraction of the phases with `organic` true. */
+  organicVolumeFraction: number;
+  /** composite.phases, in the engine's order. */
+  phases: NumericPhase[];
+  /** water.effectiveR */
+  effectiveR: number;
+  /** water.effectiveH (NaN when absent) */
+  effectiveH: number;
+  /** water.addGrams */
+  waterAddGrams: number;
+  /** solvent.addedGrams (NaN without a solvent) */
+  solventAddedGrams: number;
+  /** solvent.molPerNetworkAtom (NaN when absent) */
+  solventMolPerNetworkAtom: number;
+  /** thermal.status */
+  thermalStatus: ThermalStatus;
+  /** thermal.maxAllowedC, °C (NaN when absent) */
+  maxAllowedC: number;
+  /** coating.wetThicknessUm (NaN without a coating) */
+  wetThicknessUm: number;
+  /** coating.dryThicknessNm */
+  dryThicknessNm: number;
+  /** coating.coverageM2PerL */
+  coverageM2PerL: number;
+  /** coating.capillaryNumber (dip only) */
+  capillaryNumber: number;
+  /** optics.refractiveIndex */
+  refractiveIndex: number;
+  /** optics.mismatch, coat − substrate */
+  indexMismatch: number;
+  /** voc.massGrams */
+  vocMassGrams: number;
+  /** voc.gramsPerLitre */
+  vocGramsPerLitre: number;
+  /** voc.gramsPerLitreLessWater */
+  vocGramsPerLitreLessWater: number;
+  /** cure.ratio */
+  cureRatio: number;
+  /** cost.total */
+  costTotal: number;
+  /** cost.perKgDry */
+  costPerKgDry: number;
+  /** cost.perLitreSol */
+  costPerLitreSol: number;
+  /** cost.perM2 */
+  costPerM2: number;
+}
+
+/** A point the engine refuses (infeasible), with the engine's code and field. */
+export interface NumericFailure {
+  ok: false;
+  code: string;
+  field: string;
+}
+
+/** The outcome of one point: figures, or the reason the engine would refuse it. */
+export type NumericOutcome = { ok: true; figures: NumericFigures } | NumericFailure;
+
+/** Figures for inputs over one list of materials, indexed once. */
+export interface NumericModel {
+  /**
+   * The figures of one input. The input must already be valid against
+   * formulationInputSchema (it is not validated again); its `materials`
+   * are ignored in favour of the ones the model was built with.
+   */
+  evaluate(input: FormulationInput): NumericOutcome;
+}
+
+const nan = (value: number | undefined): number => (value === undefined ? Number.NaN : value);
+
+/**
+ * The exploration figures of a decimal engine result.
+ *
+ * @param result - a result of computeFormulation
+ * @param organicIds - ids of the materials of kind "organic"
+ * @returns the figures, NaN where the result has no value
+ * @example
+ * ```ts
+ * figuresFromResult(computeFormulation(input), new Set(["peg-2000"])).theoreticalDensity; // g/cm³
+ * ```
+ */
+export function figuresFromResult(result: FormulationResult, organicIds: ReadonlySet<string>): NumericFigures {
+  let organicWeightFraction = 0;
+  let organicVolumeFraction = 0;
+  const phases: NumericPhase[] = result.composite.phases.map((p) => {
+    const organic = organicIds.has(p.materialId) && p.residueFormula === undefined;
+    if (organic) {
+      organicWeightFraction += p.weightFraction;
+      organicVolumeFraction += p.volumeFraction;
+    }
+    return { materialId: p.materialId, organic, weightFraction: p.weightFraction, volumeFraction: p.volumeFraction };
+  });
+  return {
+    solMassGrams: result.sol.massGrams,
+    solVolumeMl: result.sol.volumeMl,
+    solidsFraction: result.sol.solidsFraction,
+    residueGramsPerL: result.sol.residueGramsPerL,
+    compositeMassGrams: result.composite.massGrams,
+    theoreticalDensity: result.composite.theoreticalDensity,
+    porosity: nan(result.composite.porosity),
+    denseLinearShrinkage: result.composite.denseShrinkage.linear,
+    denseVolumetricShrinkage: result.composite.denseShrinkage.volumetric,
+    organicWeightFraction,
+    organicVolumeFraction,
+    phases,
+    effectiveR: result.water.effectiveR,
+    effectiveH: nan(result.water.effectiveH),
+    waterAddGrams: result.water.addGrams,
+    solventAddedGrams: nan(result.solvent?.addedGrams),
+    solventMolPerNetworkAtom: nan(result.solvent?.molPerNetworkAtom),
+    thermalStatus: result.thermal.status,
+    maxAllowedC: nan(result.thermal.maxAllowedC),
+    wetThicknessUm: nan(result.coating?.wetThicknessUm),
+    dryThicknessNm: nan(result.coating?.dryThicknessNm),
+    coverageM2PerL: nan(result.coating?.coverageM2PerL),
+    capillaryNumber: nan(result.coating?.capillaryNumber),
+    refractiveIndex: nan(result.optics?.refractiveIndex),
+    indexMismatch: nan(result.optics?.mismatch),
+    vocMassGrams: nan(result.voc?.massGrams),
+    vocGramsPerLitre: nan(result.voc?.gramsPerLitre),
+    vocGramsPerLitreLessWater: nan(result.voc?.gramsPerLitreLessWater),
+    cureRatio: nan(result.cure?.ratio),
+    costTotal: nan(result.cost?.total),
+    costPerKgDry: nan(result.cost?.perKgDry),
+    costPerLitreSol: nan(result.cost?.perLitreSol),
+    costPerM2: nan(result.cost?.perM2),
+  };
+}
+
+/**
+ * A NumericModel that runs the full decimal engine on every point (validation
+ * included): the reference the numeric path is tested against, and the way a
+ * chosen candidate is checked before it becomes a draft.
+ *
+ * @param materials - the materials every evaluated input uses
+ * @example
+ * ```ts
+ * const outcome = decimalModel(input.materials).evaluate(input);
+ * if (outcome.ok) outcome.figures.refractiveIndex;
+ * ```
+ */
+export function decimalModel(materials: readonly Material[]): NumericModel {
+  const organicIds = new Set(materials.filter((m) => m.kind === "organic").map((m) => m.id));
+  return {
+    evaluate(input: FormulationInput): NumericOutcome {
+      try {
+        return { ok: true, figures: figuresFromResult(computeFormulation({ ...input, materials: [...materials] }), organicIds) };
+      } catch (error) {
+        if (isFormulationError(error)) return { ok: false, code: error.code, field: error.field };
+        throw error;
+      }
+    },
+  };
+}
