@@ -60,6 +60,8 @@ export type {
 export {
   decimalModel,
   figuresFromResult,
+  organicShareOfResidue,
+  organicShares,
   type NumericFigures,
   type NumericFailure,
   type NumericModel,

@@ -9,6 +9,7 @@
  */
 import { computeFormulation } from "../compute";
 import { isFormulationError } from "../errors";
+import { molarMassOf } from "../formula";
 import type { FormulationInput } from "../input-schema";
 import type { Material } from "../material-schema";
 import type { FormulationResult, ThermalStatus } from "../result-types";
@@ -46,6 +47,12 @@ export interface NumericFigures {
   organicWeightFraction: number;
   /** Σ volume fraction of the phases with `organic` true. */
   organicVolumeFraction: number;
+  /**
+   * Organic content of the dry composite, mass fraction: organic phases, bonded modifier ligands, and the
+   * organic group R of every R-SiO1.5 residue (its share of the residue's formula mass, e.g. C6H11O2 in
+   * (C6H11O2)SiO1.5 from GPTMS: 115.15 / 167.23 = 0.689). What a burn-off (TGA) of the ideal composite would lose.
+   */
+  organicContent: number;
   /** composite.phases, in the engine's order. */
   phases: NumericPhase[];
   /** water.effectiveR */
@@ -115,25 +122,65 @@ export interface NumericModel {
 const nan = (value: number | undefined): number => (value === undefined ? Number.NaN : value);
 
 /**
+ * The organic share (mass fraction) of a residue formula: the parenthesised
+ * leading group R of "(R)SiO1.5" over the whole formula's molar mass; 0 for an
+ * oxide without such a group.
+ *
+ * @example
+ * ```ts
+ * organicShareOfResidue("(CH3)SiO1.5"); // 15.035 / 67.11 ≈ 0.224
+ * organicShareOfResidue("TiO2"); // 0
+ * ```
+ */
+export function organicShareOfResidue(formula: string): number {
+  const match = /^\(([^()]+)\)/.exec(formula.replace(/\s+/g, ""));
+  if (!match?.[1]) return 0;
+  return molarMassOf(match[1]) / molarMassOf(formula);
+}
+
+/**
+ * Per material, the organic share of its phase in the dry composite: 1 for an
+ * organic phase and for a modifier's bonded ligand, the R group's share for a
+ * precursor with an R-SiO1.5 residue, 0 otherwise.
+ *
+ * @example
+ * ```ts
+ * organicShares([gptms, teos, peg]).get("gptms"); // ≈ 0.689
+ * ```
+ */
+export function organicShares(materials: readonly Material[]): Map<string, number> {
+  const shares = new Map<string, number>();
+  for (const m of materials) {
+    if (m.kind === "organic" || m.kind === "modifier") shares.set(m.id, 1);
+    else if (m.kind === "precursor" && m.precursor) shares.set(m.id, organicShareOfResidue(m.precursor.residueFormula));
+  }
+  return shares;
+}
+
+/**
  * The exploration figures of a decimal engine result.
  *
  * @param result - a result of computeFormulation
- * @param organicIds - ids of the materials of kind "organic"
+ * @param materials - the materials of its input
  * @returns the figures, NaN where the result has no value
  * @example
  * ```ts
- * figuresFromResult(computeFormulation(input), new Set(["peg-2000"])).theoreticalDensity; // g/cm³
+ * figuresFromResult(computeFormulation(input), input.materials).theoreticalDensity; // g/cm³
  * ```
  */
-export function figuresFromResult(result: FormulationResult, organicIds: ReadonlySet<string>): NumericFigures {
+export function figuresFromResult(result: FormulationResult, materials: readonly Material[]): NumericFigures {
+  const kinds = new Map(materials.map((m) => [m.id, m.kind]));
+  const shares = organicShares(materials);
   let organicWeightFraction = 0;
   let organicVolumeFraction = 0;
+  let organicContent = 0;
   const phases: NumericPhase[] = result.composite.phases.map((p) => {
-    const organic = organicIds.has(p.materialId) && p.residueFormula === undefined;
+    const organic = kinds.get(p.materialId) === "organic" && p.residueFormula === undefined;
     if (organic) {
       organicWeightFraction += p.weightFraction;
       organicVolumeFraction += p.volumeFraction;
     }
+    organicContent += p.weightFraction * (shares.get(p.materialId) ?? 0);
     return { materialId: p.materialId, organic, weightFraction: p.weightFraction, volumeFraction: p.volumeFraction };
   });
   return {
@@ -148,6 +195,7 @@ export function figuresFromResult(result: FormulationResult, organicIds: Readonl
     denseVolumetricShrinkage: result.composite.denseShrinkage.volumetric,
     organicWeightFraction,
     organicVolumeFraction,
+    organicContent,
     phases,
     effectiveR: result.water.effectiveR,
     effectiveH: nan(result.water.effectiveH),
@@ -186,11 +234,10 @@ export function figuresFromResult(result: FormulationResult, organicIds: Readonl
  * ```
  */
 export function decimalModel(materials: readonly Material[]): NumericModel {
-  const organicIds = new Set(materials.filter((m) => m.kind === "organic").map((m) => m.id));
   return {
     evaluate(input: FormulationInput): NumericOutcome {
       try {
-        return { ok: true, figures: figuresFromResult(computeFormulation({ ...input, materials: [...materials] }), organicIds) };
+        return { ok: true, figures: figuresFromResult(computeFormulation({ ...input, materials: [...materials] }), materials) };
       } catch (error) {
         if (isFormulationError(error)) return { ok: false, code: error.code, field: error.field };
         throw error;
