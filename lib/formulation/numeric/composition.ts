@@ -49,6 +49,9 @@ export interface PointState {
   /** Per table position: mol of precursor molecules and of network atoms (NaN when not a component). */
   precursorMoles: Float64Array;
   precursorAtoms: Float64Array;
+  /** Line and phase objects of earlier points, filled again in place (lines and phases never leave a point). */
+  linePool: NumericLine[];
+  phasePool: PointPhase[];
   /** Scratch: the table position of each component, and the component ids they were found for. */
   positions: Int32Array;
   positionIds: string[];
@@ -79,9 +82,62 @@ export function pointState(table: MaterialTable): PointState {
     carriedWaterMol: 0,
     precursorMoles: new Float64Array(count),
     precursorAtoms: new Float64Array(count),
+    linePool: [],
+    phasePool: [],
     positions: new Int32Array(8),
     positionIds: [],
   };
+}
+
+/**
+ * Adds a recipe line to the point (role, g and mL as supplied, mol, g of residue, g of carried solvent).
+ *
+ * @example
+ * ```ts
+ * addLine(state, waterRow, "water", 7.2, 7.21, 0.4, 0, 0);
+ * ```
+ */
+export function addLine(
+  state: PointState,
+  row: TableMaterial,
+  role: NumericLine["role"],
+  massGrams: number,
+  volumeMl: number,
+  moles: number,
+  residueGrams: number,
+  carriedSolventGrams: number,
+): void {
+  let line = state.linePool[state.lines.length];
+  if (line === undefined) {
+    line = { materialId: row.id, role, massGrams, volumeMl, moles, residueGrams, carriedSolventGrams };
+    state.linePool.push(line);
+  } else {
+    line.materialId = row.id;
+    line.role = role;
+    line.massGrams = massGrams;
+    line.volumeMl = volumeMl;
+    line.moles = moles;
+    line.residueGrams = residueGrams;
+    line.carriedSolventGrams = carriedSolventGrams;
+  }
+  state.lines.push(line);
+  state.rows.push(row);
+}
+
+function addPhase(state: PointState, materialId: string, residueFormula: string | undefined, weightFraction: number, density: number, organic: boolean, share: number): void {
+  let phase = state.phasePool[state.phases.length];
+  if (phase === undefined) {
+    phase = { materialId, residueFormula, weightFraction, density, organic, share };
+    state.phasePool.push(phase);
+  } else {
+    phase.materialId = materialId;
+    phase.residueFormula = residueFormula;
+    phase.weightFraction = weightFraction;
+    phase.density = density;
+    phase.organic = organic;
+    phase.share = share;
+  }
+  state.phases.push(phase);
 }
 
 /** Table positions of the components, looked up again only when the component ids change. */
@@ -203,9 +259,8 @@ export function composePoint(input: FormulationInput, table: MaterialTable, soli
       const atoms = moles * p.networkAtomsPerMolecule;
       const carriedWater = massGrams * row.waterMolPerGram + moles * row.crystalWater;
       const volume = volumeMl(row, massGrams);
-      state.lines.push({ materialId: row.id, role: "precursor", massGrams, volumeMl: volume, moles, residueGrams, carriedSolventGrams: massGrams * row.solventFraction });
-      state.rows.push(row);
-      state.phases.push({ materialId: row.id, residueFormula: p.residueFormula, weightFraction: phaseFraction, density: p.residueDensity, organic: false, share: row.organicShare });
+      addLine(state, row, "precursor", massGrams, volume, moles, residueGrams, massGrams * row.solventFraction);
+      addPhase(state, row.id, p.residueFormula, phaseFraction, p.residueDensity, false, row.organicShare);
       state.networkAtomMol += atoms;
       groups += hydrolysable;
       state.carriedWaterMol += carriedWater;
@@ -222,9 +277,8 @@ export function composePoint(input: FormulationInput, table: MaterialTable, soli
       const volume = volumeMl(row, massGrams);
       if (row.phaseDensityField !== "") refuse("missing_density", row.phaseDensityField);
       const moles = Number.isNaN(row.molarMass) ? 0 : residueGrams / row.molarMass;
-      state.lines.push({ materialId: row.id, role: "organic", massGrams, volumeMl: volume, moles, residueGrams, carriedSolventGrams: massGrams * row.solventFraction });
-      state.rows.push(row);
-      state.phases.push({ materialId: row.id, weightFraction: phaseFraction, density: row.phaseDensity, organic: true, share: row.organicShare });
+      addLine(state, row, "organic", massGrams, volume, moles, residueGrams, massGrams * row.solventFraction);
+      addPhase(state, row.id, undefined, phaseFraction, row.phaseDensity, true, row.organicShare);
       state.carriedWaterMol += massGrams * row.waterMolPerGram;
       if (present && row.thermal) state.subjects.push(row.thermal);
     }
@@ -240,8 +294,7 @@ export function composePoint(input: FormulationInput, table: MaterialTable, soli
     const data = plan.row.material.modifier!;
     const massGrams = moles * molarMassOfRow(plan.row) * plan.row.perAssay;
     const volume = volumeMl(plan.row, massGrams);
-    state.lines.push({ materialId: plan.row.id, role: "modifier", massGrams, volumeMl: volume, moles, residueGrams: 0, carriedSolventGrams: massGrams * plan.row.solventFraction });
-    state.rows.push(plan.row);
+    addLine(state, plan.row, "modifier", massGrams, volume, moles, 0, massGrams * plan.row.solventFraction);
     state.carriedWaterMol += massGrams * plan.row.waterMolPerGram;
     replaced += moles * data.groupsReplacedPerMolecule;
     const bondedGrams = plan.bonded ? moles * data.bondedMolarMass : 0;
@@ -249,7 +302,7 @@ export function composePoint(input: FormulationInput, table: MaterialTable, soli
       let phase: PointPhase | undefined;
       for (let k = firstLigand; k < state.phases.length; k += 1) if (state.phases[k]!.materialId === plan.row.id) phase = state.phases[k];
       if (phase) phase.weightFraction += bondedGrams;
-      else state.phases.push({ materialId: plan.row.id, residueFormula: data.bondedFormula, weightFraction: bondedGrams, density: data.bondedDensity, organic: false, share: 1 });
+      else addPhase(state, plan.row.id, data.bondedFormula, bondedGrams, data.bondedDensity, false, 1);
     }
   }
   // Ligand phases held grams so far: their weight fraction is over the whole dry composite S.

@@ -10,7 +10,7 @@ import { DEFAULT_THERMAL_MARGIN_C, MIN_LINE_GRAMS, ML_PER_L, WATER_MOLAR_MASS_G_
 import type { FormulationInput } from "../input-schema";
 import type { Material } from "../material-schema";
 import { numericCoatHook, type CoatHook } from "./coat-hook";
-import { composePoint, pointState, type PointState } from "./composition";
+import { addLine, composePoint, pointState, type PointState } from "./composition";
 import type { NumericCoatFigures } from "./context";
 import type { NumericFigures, NumericModel, NumericOutcome, NumericPhase } from "./figures";
 import { numericFill } from "./fill";
@@ -59,8 +59,7 @@ function doseLine(state: PointState, row: TableMaterial, role: "catalyst" | "sol
   const volume = volumeMl(row, massGrams);
   const carriedWaterMol = massGrams * row.waterMolPerGram;
   if (massGrams >= minGrams) {
-    state.lines.push({ materialId: row.id, role, massGrams, volumeMl: volume, moles, residueGrams: 0, carriedSolventGrams: massGrams * row.solventFraction });
-    state.rows.push(row);
+    addLine(state, row, role, massGrams, volume, moles, 0, massGrams * row.solventFraction);
     state.carriedWaterMol += carriedWaterMol;
   }
   return { massGrams, carriedWaterMol };
@@ -150,8 +149,7 @@ function liquids(input: FormulationInput, table: MaterialTable, state: PointStat
     if (grams > 0) {
       const volume = volumeMl(solventRow, grams);
       addedMol = Number.isNaN(solventRow.molarMass) ? Number.NaN : (grams * (solventRow.material.assay ?? 1)) / solventRow.molarMass;
-      state.lines.push({ materialId: solventRow.id, role: "solvent", massGrams: grams, volumeMl: volume, moles: Number.isNaN(addedMol) ? 0 : addedMol, residueGrams: 0, carriedSolventGrams: 0 });
-      state.rows.push(solventRow);
+      addLine(state, solventRow, "solvent", grams, volume, Number.isNaN(addedMol) ? 0 : addedMol, 0, 0);
       solMass += grams;
       solVolume += volume;
     }
@@ -170,8 +168,7 @@ function liquids(input: FormulationInput, table: MaterialTable, state: PointStat
   if (addMol > 0) {
     addGrams = addMol * waterMolarMass;
     const addMl = volumeMl(waterRow, addGrams);
-    state.lines.push({ materialId: waterRow.id, role: "water", massGrams: addGrams, volumeMl: addMl, moles: addMol, residueGrams: 0, carriedSolventGrams: 0 });
-    state.rows.push(waterRow);
+    addLine(state, waterRow, "water", addGrams, addMl, addMol, 0, 0);
     solMass += addGrams;
     solVolume += addMl;
   }
