@@ -187,11 +187,16 @@ export const aqueousCaseArb: fc.Arbitrary<FormulationInput> = fc
     waterDensity: optional(fc.double({ min: 0.3, max: 1.2, noNaN: true })),
     ethanol: fc.double({ min: 0, max: 3, noNaN: true }),
     coating: optional(coatingArb),
+    // the materials list in a random order: the refusal names the water by its position
+    order: fc.array(fc.double({ min: 0, max: 1, noNaN: true }), { minLength: 4, maxLength: 4 }),
   })
   .map((r) => {
     const water = r.waterDensity === undefined ? edit(ref("water-di"), {}, ["density"]) : edit(ref("water-di"), { density: r.waterDensity });
     return {
-      materials: [ref("colloidal-silica-30"), ref("teos"), ref("ethanol"), water],
+      materials: [ref("colloidal-silica-30"), ref("teos"), ref("ethanol"), water]
+        .map((material, i) => ({ material, key: r.order[i] ?? 0 }))
+        .sort((a, b) => a.key - b.key)
+        .map((entry) => entry.material),
       basis: { type: "solidMass", grams: 10 },
       components: [
         { materialId: "colloidal-silica-30", weightFraction: r.colloidal },
