@@ -182,7 +182,8 @@ export const coatCaseArb: fc.Arbitrary<CoatCase> = fc
  */
 export const aqueousCaseArb: fc.Arbitrary<FormulationInput> = fc
   .record({
-    colloidal: fc.double({ min: 0.3, max: 1, noNaN: true }),
+    // all colloidal silica, or some TEOS beside it (never a fraction below the schema's 1e-6)
+    colloidal: fc.oneof(fc.constant(1), fc.double({ min: 0.3, max: 0.99, noNaN: true })),
     R: fc.double({ min: 0.5, max: 40, noNaN: true }),
     waterDensity: optional(fc.double({ min: 0.3, max: 1.2, noNaN: true })),
     ethanol: fc.double({ min: 0, max: 3, noNaN: true }),
