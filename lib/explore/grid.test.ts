@@ -133,6 +133,7 @@ describe("planGrid", () => {
       // exactly at the cap is allowed: 200 × 100
       expect(plan(sweep({ kind: "waterRatio", from: 0.01, to: 2, step: 0.01 }, { kind: "stepTemperature", index: 3, from: 1, to: 100, step: 1 })).count).toBe(20_000);
       expect(refusal({ kind: "ternary", materialIds: ["gptms", "teos", "ti-isopropoxide"], step: 0.005 }).field).toBe("grid.step");
+      expect(refusal(sweep(titania(0, 1, 1e-300))).message).toBe("this grid would compute more than 1,000,000,000,000 points; at most 20,000 — widen the step or narrow the range");
     });
 
     it("refuses a weight fraction outside 0–1", () => {
