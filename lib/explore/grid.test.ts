@@ -1,3 +1,4 @@
+import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { isPlanError, planGrid, rangeValues, ternaryShares } from "./grid";
 import type { Grid, Variable } from "./spec";
@@ -71,6 +72,29 @@ describe("planGrid", () => {
     expect(perTeos.axes[0]!.label).toBe(`Water ratio (mol water per mol ${base.materials.find((m) => m.id === "teos")!.name})`);
     const h = plan(sweep({ kind: "waterRatio", from: 1, to: 4, step: 1 }), { ...base, water: { ...base.water, ratio: "h" } });
     expect(h.axes[0]!.label).toContain("Water ratio h");
+  });
+
+  it("never passes `to`, steps by `step`, and counts what it lists (property)", () => {
+    fc.assert(
+      fc.property(fc.double({ min: -200, max: 4000, noNaN: true }), fc.double({ min: -200, max: 4000, noNaN: true }), fc.double({ min: 1e-3, max: 5000, noNaN: true }), (from, to, step) => {
+        const result = planGrid(sweep({ kind: "stepTemperature", index: 3, from, to, step }), base);
+        if (isPlanError(result)) {
+          expect(result.field.startsWith("grid.variables.0")).toBe(true);
+          return;
+        }
+        const values = result.axes[0]!.values;
+        expect(result.count).toBe(values.length);
+        expect(result.count).toBeLessThanOrEqual(20_000);
+        expect(values[0]).toBe(from);
+        const lo = Math.min(from, to);
+        const hi = Math.max(from, to);
+        for (const v of values) expect(v >= lo && v <= hi).toBe(true);
+        for (let i = 1; i < values.length; i++) expect(Math.abs(Math.abs(values[i]! - values[i - 1]!) - step)).toBeLessThanOrEqual(1e-9 * Math.max(step, Math.abs(to)));
+        // one more step would pass `to`
+        expect(Math.abs(values[values.length - 1]! - from) + step).toBeGreaterThan(Math.abs(to - from) * (1 + 1e-12));
+      }),
+      { numRuns: 1000 },
+    );
   });
 
   it("leaves out the revision's mark when its value lies outside the range", () => {
