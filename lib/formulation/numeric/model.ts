@@ -115,6 +115,7 @@ function evaluatePoint(input: FormulationInput, table: MaterialTable, state: Poi
     coatFigures = outcome;
   }
 
+  if (table.formulaRefusal) throw new NumericRefusal(table.formulaRefusal.code, table.formulaRefusal.field);
   return {
     solMassGrams: solMass,
     solVolumeMl: solVolume,
