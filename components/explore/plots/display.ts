@@ -37,6 +37,26 @@ export function valueText(value: number, unit: string, digits = 4): string {
   return unit ? `${text}${NBSP}${unit}` : text;
 }
 
+/**
+ * A place on an axis with its unit, trailing zeros dropped: "20 wt%", "12.5 °C".
+ * @example placeText(20, "wt%") // "20 wt%"
+ */
+export function placeText(value: number, unit: string, digits = 4): string {
+  if (!Number.isFinite(value)) return "–";
+  const raw = sig(value, digits);
+  const text = (raw.includes(".") ? raw.replace(/0+$/, "").replace(/\.$/, "") : raw).replace("-", "−");
+  return unit ? `${text}${NBSP}${unit}` : text;
+}
+
+/**
+ * A label inside a sentence: first letter lower-cased unless it starts an
+ * abbreviation ("Refractive index" → "refractive index", "VOC" stays).
+ * @example inSentence("Refractive index") // "refractive index"
+ */
+export function inSentence(label: string): string {
+  return /^[A-Z][a-z]/.test(label) ? label.charAt(0).toLowerCase() + label.slice(1) : label;
+}
+
 /** Words for each point status, as the plots and the table print them. */
 export const STATUS_WORDS: Record<PointStatus, string> = {
   clear: "clear",

@@ -3,7 +3,7 @@
 import { useId, useMemo, useState, type KeyboardEvent } from "react";
 import { CartesianGrid, Label, Line, LineChart, ReferenceArea, ReferenceLine, ResponsiveContainer, XAxis, YAxis } from "recharts";
 import type { ExplorationRun, OutputInfo } from "@/lib/explore/types";
-import { axisFactor, STATUS_WORDS, valueText, withUnit } from "./display";
+import { axisFactor, placeText, STATUS_WORDS, valueText, withUnit } from "./display";
 import { crossings, lineRows, unitGroups } from "./line-data";
 import { BandPatterns, SERIES, SeriesKey } from "./line-parts";
 import { lineSummary, pointReadout, shownRange } from "./summaries";
@@ -53,7 +53,7 @@ export function LinePlot({ run, outputs, reference }: LinePlotProps) {
   const crossAt = reference ? crossings(xs, rows.map((r) => r.y0 ?? null), reference.value) : [];
   const crossText = reference
     ? crossAt.length
-      ? ` ${outputs[0]!.label} crosses ${reference.label} at ${crossAt.map((x) => valueText(x, axis.unit, 3)).join(", ")}.`
+      ? ` ${outputs[0]!.label} crosses ${reference.label} at ${crossAt.map((x) => placeText(x, axis.unit, 3)).join(", ")}.`
       : ` ${outputs[0]!.label} does not cross ${reference.label}.`
     : "";
   const summary = lineSummary(run, outputs, reference) + crossText;
@@ -151,7 +151,7 @@ export function LinePlot({ run, outputs, reference }: LinePlotProps) {
                   ) : null}
                   {baseX !== undefined ? (
                     <ReferenceLine x={baseX} stroke={INK} strokeWidth={1.5} strokeDasharray="1 2">
-                      {gi === 0 ? <Label value={`this revision ${valueText(baseX, axis.unit, 3)}`} position="insideTopLeft" offset={4} style={{ fontSize: 10, fill: INK }} /> : null}
+                      {gi === 0 ? <Label value={`this revision ${placeText(baseX, axis.unit, 3)}`} position="insideTopLeft" offset={4} style={{ fontSize: 10, fill: INK }} /> : null}
                     </ReferenceLine>
                   ) : null}
                   {cursor !== null && rows[cursor] ? <ReferenceLine x={rows[cursor]!.x} stroke={ACCENT} strokeWidth={1} /> : null}

@@ -87,5 +87,5 @@ export function sortedPoints(count: number, cols: PointColumn[], sorting: { id: 
 /** "Points of the exploration: 21 points, Titania … (wt%) against …; 3 caution." */
 export function tableCaption(run: ExplorationRun, outputs: OutputInfo[]): string {
   const what = outputs.map((o) => withUnit(o.label, o.unit)).join(", ");
-  return `Points of the exploration, one row each: ${run.plan.count} points; ${what || "no figures"}; thermal check in words (${statusSummary(run)}).`;
+  return `Points of the exploration, one row each: ${run.plan.count.toLocaleString("en-GB")} points; ${what || "no figures"}; thermal check in words (${statusSummary(run)}).`;
 }
