@@ -89,7 +89,13 @@ describe("points table", () => {
 
   it("returns the variables of a map and the weight fractions of a ternary map", () => {
     const map = pointColumns(mapRun(), [VOC]);
-    expect([0, 1, 2, 3, 4, 5].map((p) => map[2]!.text(p))).toEqual(["100.0", "120.0", "100.0", "120.0", "100.0", "120.0"]);
+    expect([0, 1, 2, 3, 4, 5].map((p) => map[2]!.text(p))).toEqual(["100", "120", "100", "120", "100", "120"]);
+    expect([0, 2, 4].map((p) => map[1]!.text(p))).toEqual(["0", "10", "20"]);
+    // One number of decimals down a column: 0, 2.5 and 5 wt% print as 0.0, 2.5, 5.0.
+    const run = lineRun();
+    const axis = { ...run.plan.axes[0]!, values: [0, 0.025, 0.05] };
+    const cols = pointColumns({ ...run, plan: { ...run.plan, count: 3, axes: [axis] } }, []);
+    expect([0, 1, 2].map((p) => cols[1]!.text(p))).toEqual(["0.0", "2.5", "5.0"]);
     const tern = pointColumns(ternaryRun(), [VOC]);
     expect(tern[1]!.header).toBe("TEOS (wt%)");
     expect(tern[1]!.text(1)).toBe("20.00");

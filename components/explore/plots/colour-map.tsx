@@ -138,7 +138,7 @@ export function ColourMap({ run, output }: ColourMapProps) {
       <p id={readoutId} className="num mt-1 min-h-5 text-xs text-ink" aria-live="polite" data-testid="colour-map-readout">
         {cursor !== null ? pointReadout(run, cursor, [output]) : "Point at a cell, or focus the map and use the arrow keys, to read a point."}
       </p>
-      <MapLegend label={output.label} unit={output.unit} range={shown} counts={counts} revision={Boolean(showBase)} />
+      <MapLegend label={output.label} unit={output.unit} range={shown} counts={counts} revision={Boolean(showBase)} outlines />
     </figure>
   );
 }

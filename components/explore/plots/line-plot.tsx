@@ -128,7 +128,7 @@ export function LinePlot({ run, outputs, reference }: LinePlotProps) {
                     {last ? <Label value={withUnit(axis.label, axis.unit)} position="insideBottom" offset={-12} style={{ fontSize: 11, fill: MUTED }} /> : null}
                   </XAxis>
                   <YAxis type="number" domain={yt.domain} ticks={yt.values} tickFormatter={(v: number) => tickText(v, yt.decimals)} tick={{ fontSize: 11, fill: MUTED }} width={64}>
-                    <Label value={g.unit || "value"} angle={-90} position="insideLeft" offset={2} style={{ fontSize: 11, fill: MUTED, textAnchor: "middle" }} />
+                    <Label value={g.members.length === 1 ? withUnit(g.members[0]!.info.label, g.unit) : g.unit || "value"} angle={-90} position="insideLeft" offset={2} style={{ fontSize: 11, fill: MUTED, textAnchor: "middle" }} />
                   </YAxis>
                   {bands.map((b) => (
                     <ReferenceArea
@@ -146,7 +146,7 @@ export function LinePlot({ run, outputs, reference }: LinePlotProps) {
                   ))}
                   {own && reference ? (
                     <ReferenceLine y={reference.value} stroke={ACCENT} strokeDasharray="8 4" strokeWidth={1.5}>
-                      <Label value={`${reference.label} ${valueText(reference.value, g.unit)}`} position="insideBottomRight" style={{ fontSize: 10, fill: ACCENT }} />
+                      <Label value={`${reference.label} ${valueText(reference.value, g.unit)}`} position="insideBottomLeft" style={{ fontSize: 10, fill: ACCENT }} />
                     </ReferenceLine>
                   ) : null}
                   {baseX !== undefined ? (

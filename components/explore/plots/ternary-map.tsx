@@ -119,7 +119,7 @@ export function TernaryMap({ run, output }: TernaryMapProps) {
       className="min-w-0"
     >
       <figcaption className="mb-1 text-xs font-semibold text-muted">
-        {mapCaption(run, output)}: shares of their {(t.total * 100).toPrecision(3)} wt% together, in %
+        {mapCaption(run, output)}, in % of the {(t.total * 100).toPrecision(3)} wt% they share
       </figcaption>
       <div
         ref={boxRef}
