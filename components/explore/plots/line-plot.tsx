@@ -20,7 +20,25 @@ export interface LinePlotProps {
 const INK = "#22262a";
 const MUTED = "#5d6268";
 const ACCENT = "#8c4a1f";
-const BAND_WORDS = { caution: "caution", fail: "fails the thermal check", refused: "refused" } as const;
+/** Words inside a band: the full words when they fit, else the short ones, else none (the key below names every band). */
+const BAND_WORDS: Record<string, [string, string]> = { caution: ["caution", "caution"], fail: ["fails the thermal check", "fails"], refused: ["refused", "refused"] };
+
+function bandLabel(status: string) {
+  function BandLabel(props: { viewBox?: unknown }) {
+    const box = props.viewBox as { x?: number; y?: number; width?: number } | undefined;
+    const words = BAND_WORDS[status];
+    if (!box || !words || box.x === undefined || box.y === undefined || box.width === undefined) return <g />;
+    // About 5.5 px a character at 10 px.
+    const text = words.find((w) => w.length * 5.5 + 6 <= box.width!);
+    if (!text) return <g />;
+    return (
+      <text x={box.x + box.width / 2} y={box.y + 12} textAnchor="middle" fontSize={10} fill={INK} stroke="#ffffff" strokeWidth={3} paintOrder="stroke">
+        {text}
+      </text>
+    );
+  }
+  return BandLabel;
+}
 
 /**
  * A one-variable sweep: each figure against the variable, figures of one unit
@@ -139,9 +157,7 @@ export function LinePlot({ run, outputs, reference }: LinePlotProps) {
                       fillOpacity={1}
                       ifOverflow="hidden"
                     >
-                      {gi === 0 && b.to - b.from >= (xHigh - xLow) * 0.12 ? (
-                        <Label value={BAND_WORDS[b.status as keyof typeof BAND_WORDS]} position="insideTop" style={{ fontSize: 10, fill: INK }} />
-                      ) : null}
+                      {gi === 0 ? <Label content={bandLabel(b.status)} /> : null}
                     </ReferenceArea>
                   ))}
                   {own && reference ? (
