@@ -2,9 +2,9 @@ import { describe, expect, it } from "vitest";
 import { crossings, lineRows, unitGroups } from "@/components/explore/plots/line-data";
 import { pointColumns, sortedPoints, tableCaption } from "@/components/explore/plots/points-columns";
 import { lineSummary, mapSummary, pointReadout, shownRange, ternarySummary } from "@/components/explore/plots/summaries";
-import { statusCounts } from "@/components/explore/plots/display";
+import { axisFactor, statusCounts } from "@/components/explore/plots/display";
 import { paddedTicks } from "@/components/explore/plots/ticks";
-import { INDEX, lineRun, mapRun, ORGANIC, ternaryRun, VOC } from "../helpers/explore-run";
+import { INDEX, lineRun, mapRun, ORGANIC, temperatureAxis, ternaryRun, titaniaAxis, VOC } from "../helpers/explore-run";
 
 describe("line plot data", () => {
   it("returns rows in shown units: weight fractions and percent figures ×100, gaps as null", () => {
@@ -121,5 +121,14 @@ describe("points table", () => {
     expect(rising).toBe(true);
     expect(statusCounts(big).clear).toBe(n);
     expect(tableCaption(big, [INDEX])).toContain("10,000 points");
+  });
+});
+
+describe("axis factor", () => {
+  it("returns ×100 for weight fractions and the solids content, ×1 otherwise, and follows an axis's own percent flag", () => {
+    expect(axisFactor(titaniaAxis([0, 0.1]))).toBe(100);
+    expect(axisFactor(temperatureAxis([100, 120]))).toBe(1);
+    expect(axisFactor({ ...titaniaAxis([0, 0.1]), percent: false } as ReturnType<typeof titaniaAxis>)).toBe(1);
+    expect(axisFactor({ ...temperatureAxis([0, 1]), percent: true } as ReturnType<typeof titaniaAxis>)).toBe(100);
   });
 });

@@ -8,11 +8,15 @@ import { POINT_STATUSES, type Axis, type ExplorationRun, type OutputInfo, type P
 const NBSP = "\u00a0";
 
 /**
- * Factor from an axis's stored values to the shown ones: weight fractions and
- * the solids content are stored 0–1 and shown in %, the rest as stored.
+ * Factor from an axis's stored values to the shown ones: the axis's own
+ * `percent` flag when it has one, else weight fractions and the solids content
+ * (stored 0–1) are shown in %, the rest as stored.
  * @example axisFactor({ variable: { kind: "weightFraction", … }, … }) // 100
  */
 export function axisFactor(axis: Axis): number {
+  // The grid may say so itself (an optional `percent` on the axis); else by the variable's kind.
+  const percent = (axis as Axis & { percent?: boolean }).percent;
+  if (percent !== undefined) return percent ? 100 : 1;
   return axis.variable.kind === "weightFraction" || axis.variable.kind === "solidsContent" ? 100 : 1;
 }
 
