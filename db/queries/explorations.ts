@@ -1,0 +1,148 @@
+/**
+ * Saved design explorations (issue 16): a revision's grid, the figures shown,
+ * the target search and its best candidates. Scoped by team; saving one never
+ * changes the revision. Saving and deleting write an audit event in the same
+ * transaction.
+ */
+import { and, desc, eq } from "drizzle-orm";
+import { db } from "@/db";
+import { explorations, formulations, revisions, user } from "@/db/schema";
+import { NotFoundError, RuleError } from "@/lib/errors";
+import type { ExplorationBody } from "@/lib/explore/spec";
+import { recordEvent } from "./audit";
+import type { Actor } from "./formulations";
+
+/** Most explorations one list returns (newest first). */
+export const EXPLORATION_LIST_MAX = 200;
+
+const listColumns = {
+  id: explorations.id,
+  formulationId: explorations.formulationId,
+  revisionId: explorations.revisionId,
+  revisionNumber: revisions.number,
+  revisionState: revisions.state,
+  name: explorations.name,
+  grid: explorations.grid,
+  outputs: explorations.outputs,
+  search: explorations.search,
+  candidates: explorations.candidates,
+  pointCount: explorations.pointCount,
+  createdBy: explorations.createdBy,
+  createdByName: user.name,
+  createdAt: explorations.createdAt,
+};
+
+/**
+ * A formulation's saved explorations, newest first, optionally of one
+ * revision; `releasedOnly` keeps those of released revisions (for a role that
+ * sees released work only).
+ *
+ * @example
+ * ```ts
+ * const rows = await listExplorations(team.id, formulationId, { revisionId });
+ * ```
+ */
+export async function listExplorations(teamId: string, formulationId: string, opts: { revisionId?: string; releasedOnly?: boolean } = {}) {
+  return db
+    .select(listColumns)
+    .from(explorations)
+    .innerJoin(revisions, eq(revisions.id, explorations.revisionId))
+    .leftJoin(user, eq(user.id, explorations.createdBy))
+    .where(
+      and(
+        eq(explorations.teamId, teamId),
+        eq(explorations.formulationId, formulationId),
+        opts.revisionId ? eq(explorations.revisionId, opts.revisionId) : undefined,
+        opts.releasedOnly ? eq(revisions.state, "released") : undefined,
+      ),
+    )
+    .orderBy(desc(explorations.createdAt), desc(explorations.id))
+    .limit(EXPLORATION_LIST_MAX);
+}
+
+/** One exploration with its formulation's name and its revision's number; null when not in this team. */
+export async function getExploration(teamId: string, id: string, opts: { releasedOnly?: boolean } = {}) {
+  const [row] = await db
+    .select({ ...listColumns, formulationName: formulations.name })
+    .from(explorations)
+    .innerJoin(revisions, eq(revisions.id, explorations.revisionId))
+    .innerJoin(formulations, eq(formulations.id, explorations.formulationId))
+    .leftJoin(user, eq(user.id, explorations.createdBy))
+    .where(and(eq(explorations.teamId, teamId), eq(explorations.id, id)))
+    .limit(1);
+  if (!row) return null;
+  if (opts.releasedOnly && row.revisionState !== "released") return null;
+  return row;
+}
+
+/**
+ * Saves an exploration of a revision of `formulationId`. The formulation must
+ * be the team's (404 otherwise); the revision must be one of its revisions
+ * (a RuleError naming `revisionId` otherwise).
+ *
+ * @example
+ * ```ts
+ * const { id } = await createExploration(actor, formulationId, body);
+ * ```
+ */
+export async function createExploration(actor: Actor, formulationId: string, body: ExplorationBody): Promise<{ id: string }> {
+  return db.transaction(async (tx) => {
+    const [f] = await tx
+      .select({ id: formulations.id })
+      .from(formulations)
+      .where(and(eq(formulations.teamId, actor.teamId), eq(formulations.id, formulationId)))
+      .limit(1);
+    if (!f) throw new NotFoundError("formulation");
+    const [rev] = await tx
+      .select({ id: revisions.id, number: revisions.number })
+      .from(revisions)
+      .where(and(eq(revisions.teamId, actor.teamId), eq(revisions.formulationId, formulationId), eq(revisions.id, body.revisionId)))
+      .limit(1);
+    if (!rev) throw new RuleError("unknown_revision", "There is no such revision of this formulation.", "revisionId");
+    const id = crypto.randomUUID();
+    await tx.insert(explorations).values({
+      id,
+      teamId: actor.teamId,
+      formulationId,
+      revisionId: rev.id,
+      name: body.name,
+      grid: body.grid,
+      outputs: body.outputs,
+      search: body.search ?? null,
+      candidates: body.candidates ?? null,
+      pointCount: body.pointCount,
+      createdBy: actor.userId,
+    });
+    await recordEvent(tx, {
+      teamId: actor.teamId,
+      actorId: actor.userId,
+      action: "exploration.saved",
+      entityType: "exploration",
+      entityId: id,
+      summary: { after: { name: body.name, revision: rev.number, points: body.pointCount, formulationId, revisionId: rev.id } },
+    });
+    return { id };
+  });
+}
+
+/** Deletes a saved exploration of the team (404 when there is none); the revision is untouched. */
+export async function deleteExploration(actor: Actor, id: string): Promise<void> {
+  await db.transaction(async (tx) => {
+    const [row] = await tx
+      .select({ id: explorations.id, name: explorations.name, formulationId: explorations.formulationId, revisionId: explorations.revisionId })
+      .from(explorations)
+      .where(and(eq(explorations.teamId, actor.teamId), eq(explorations.id, id)))
+      .for("update")
+      .limit(1);
+    if (!row) throw new NotFoundError("exploration");
+    await tx.delete(explorations).where(eq(explorations.id, id));
+    await recordEvent(tx, {
+      teamId: actor.teamId,
+      actorId: actor.userId,
+      action: "exploration.deleted",
+      entityType: "exploration",
+      entityId: id,
+      summary: { before: { name: row.name, formulationId: row.formulationId, revisionId: row.revisionId } },
+    });
+  });
+}
