@@ -80,6 +80,11 @@ describe("saving, listing, reading and deleting explorations", () => {
     expect(row!.search?.objective).toEqual({ goal: "closest", output: "refractiveIndex", value: 1.586 });
     expect(row!.candidates?.[0]?.figures.refractiveIndex).toBe(1.582);
     expect(typeof row!.createdByName).toBe("string");
+    // Words from the output catalogue over the revision's input, and the name of what varied.
+    expect(row!.outputWords.organicWeightFraction).toMatchObject({ unit: "wt%", percent: true });
+    expect(row!.outputWords.refractiveIndex!.label).toMatch(/refractive index/i);
+    const titania = hc3.input.components[hc3.input.components.length - 1]!.materialId;
+    expect(row!.names[titania]).toBe(hc3.input.materials.find((m) => m.id === titania)!.name);
     expect(row!.createdBy).toBe(users.formulator);
     const got = await eq_.getExploration(teamId, id);
     expect(got?.formulationName).toBe("Visor hard coat HC-3");
