@@ -60,6 +60,14 @@ describe("bestCandidates", () => {
     expect(best[1]).toEqual({ point: 3, values: [4], score: 1, figures: { a: 1 }, thermalStatus: "clear" });
   });
 
+  it("counts figures equal but for float noise as a tie (9 significant digits), keeping the point order", () => {
+    const noisy = fakeRun({ a: [1.0000000000004, 1, 0.9999999999996, 1.00001] }, [CLEAR, CLEAR, CLEAR, CLEAR]);
+    expect(bestCandidates(noisy, search({})).map((c) => c.point)).toEqual([0, 1, 2, 3]);
+    expect(bestCandidates(noisy, search({ objective: { goal: "max", output: "a" } })).map((c) => c.point)).toEqual([3, 0, 1, 2]);
+    // the score is the figure itself, unrounded
+    expect(bestCandidates(noisy, search({}))[0]!.score).toBe(1.0000000000004);
+  });
+
   it("gives each candidate its variable values and only its finite figures", () => {
     const [first] = bestCandidates(run, search({ constraints: [{ output: "b", max: 0.15 }] }));
     expect(first).toEqual({ point: 0, values: [1], score: 5, figures: { a: 5, b: 0.1 }, thermalStatus: "clear" });
