@@ -130,6 +130,22 @@ export async function getExploration(teamId: string, id: string, opts: { release
 }
 
 /**
+ * One exploration with its revision's stored input (for the export, which
+ * computes the points again); null when not in this team.
+ */
+export async function getExplorationWithInput(teamId: string, id: string) {
+  const [row] = await db
+    .select({ ...listColumns, formulationName: formulations.name })
+    .from(explorations)
+    .innerJoin(revisions, eq(revisions.id, explorations.revisionId))
+    .innerJoin(formulations, eq(formulations.id, explorations.formulationId))
+    .leftJoin(user, eq(user.id, explorations.createdBy))
+    .where(and(eq(explorations.teamId, teamId), eq(explorations.id, id)))
+    .limit(1);
+  return row ?? null;
+}
+
+/**
  * Saves an exploration of a revision of `formulationId`. The formulation must
  * be the team's (404 otherwise); the revision must be one of its revisions
  * (a RuleError naming `revisionId` otherwise).

@@ -128,6 +128,27 @@ describe("saving, listing, reading and deleting explorations", () => {
   });
 });
 
+describe("the demo exploration", () => {
+  it("is seeded once for the visor hard coat's released revision, its candidates meeting the search's limits", async () => {
+    const { DEMO_EXPLORATION, seedExplorationDemo } = await import("@/db/seed-exploration");
+    const rows = (await eq_.listExplorations(teamId, hc3.formulationId, { revisionId: hc3.releasedId })).filter((r) => r.name === DEMO_EXPLORATION.name);
+    expect(rows).toHaveLength(1);
+    const demo = rows[0]!;
+    expect(demo.pointCount).toBe(11 * 5);
+    expect(demo.candidates!.length).toBeGreaterThan(0);
+    for (const c of demo.candidates!) {
+      expect(c.thermalStatus).toBe("clear");
+      expect(c.figures.organicContent).toBeGreaterThanOrEqual(0.5);
+      // Clear means below the highest allowed step temperature: the cure (second value) at 90–110 °C.
+      expect(c.values[1]).toBeLessThanOrEqual(110);
+    }
+    // Best first: the first candidate's index is the closest of them to the polycarbonate's 1.586.
+    const distances = demo.candidates!.map((c) => Math.abs(c.figures.refractiveIndex! - 1.586));
+    expect(distances[0]).toBe(Math.min(...distances));
+    expect(await seedExplorationDemo(t.db, teamId, users)).toBe(false);
+  });
+});
+
 describe("edge cases", () => {
   it("refuses a revision of another formulation with a RuleError naming revisionId, and saves nothing", async () => {
     const actor = { userId: users.formulator!, teamId };
