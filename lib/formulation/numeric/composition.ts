@@ -7,45 +7,10 @@
  */
 import type { FormulationInput } from "../input-schema";
 import { positionOf, type MaterialTable, type TableMaterial, molarMassOfRow, volumeMl } from "./material-table";
-import type { NumericLine } from "./context";
+import { addLine, addPhase, componentPositions, type PointPhase, type PointState } from "./point-state";
 import { refuse } from "./refusal";
-import type { ThermalProfile } from "./thermal";
 
-/** One phase of the dry composite with what the figures need besides the coat context's fields. */
-export interface PointPhase {
-  materialId: string;
-  residueFormula?: string;
-  weightFraction: number;
-  /** g/cm³ */
-  density: number;
-  /** An organic component's phase (not a residue, not a ligand). */
-  organic: boolean;
-  /** Organic share of the phase (figures.ts organicShares). */
-  share: number;
-}
-
-/** The running state of one point: lines, phases and the sums the water, solvent and sol figures start from. */
-export interface PointState {
-  lines: NumericLine[];
-  /** The table row of each line (same order as lines). */
-  rows: TableMaterial[];
-  phases: PointPhase[];
-  subjects: ThermalProfile[];
-  conversionsC: number[];
-  /** mol of alcohol released per distinct alcohol (table.alcohols), and the slots in order of first release. */
-  alcoholMol: Float64Array;
-  alcoholOrder: number[];
-  /** S, g */
-  solidMass: number;
-  /** Σa, mol */
-  networkAtomMol: number;
-  /** Σg', mol, after ligand exchange */
-  groupMol: number;
-  carriedWaterMol: number;
-  /** Per table position: mol of precursor molecules and of network atoms (NaN when not a component). */
-  precursorMoles: Float64Array;
-  precursorAtoms: Float64Array;
-}
+const NO_PLANS: readonly Plan[] = [];
 
 interface Plan {
   row: TableMaterial;
@@ -88,56 +53,53 @@ function planModifiers(input: FormulationInput, table: MaterialTable): Plan[] {
  * @param input - a valid input
  * @param table - the model's materials
  * @param solidMass - S, g (from the basis)
- * @returns the point's state after the components and modifiers
+ * @param state - the model's state, reset here
+ * @returns the state, after the components and modifiers
  * @example
  * ```ts
- * composePoint(input, table, 10).networkAtomMol; // 10 / 60.083 mol Si for 10 g of silica from TEOS
+ * composePoint(input, table, 10, pointState(table)).networkAtomMol; // 10 / 60.083 mol Si for 10 g of silica from TEOS
  * ```
  */
-export function composePoint(input: FormulationInput, table: MaterialTable, solidMass: number): PointState {
+export function composePoint(input: FormulationInput, table: MaterialTable, solidMass: number, state: PointState): PointState {
   const components = input.components;
   const n = components.length;
   let floatSum = 0;
   for (let i = 0; i < n; i += 1) floatSum += components[i]!.weightFraction;
   const exact = Math.abs(floatSum - 1) <= 1e-12;
-  const positions = new Int32Array(n);
-  for (let i = 0; i < n; i += 1) positions[i] = positionOf(table, components[i]!.materialId, `components.${i}.materialId`);
-  const fraction = (i: number): number => (exact ? components[i]!.weightFraction : components[i]!.weightFraction / floatSum);
+  // Within 1e-12 of 1 the fractions are used as they are, else scaled to sum to 1 (as compute.ts does).
+  const positions = componentPositions(input, table, state);
 
-  const plans = input.modifiers && input.modifiers.length > 0 ? planModifiers(input, table) : [];
+  const plans = input.modifiers && input.modifiers.length > 0 ? planModifiers(input, table) : NO_PLANS;
   // c = Σ Δm / S_free over the bonded ligands; S_free = S / (1 + c).
   let c = 0;
   for (const plan of plans) {
     if (!plan.bonded) continue;
     const p = table.materials[plan.precursorIndex]!.precursor!;
     let w = 0;
-    for (let i = 0; i < n; i += 1) if (positions[i] === plan.precursorIndex) w = fraction(i);
+    for (let i = 0; i < n; i += 1) if (positions[i] === plan.precursorIndex) w = exact ? components[i]!.weightFraction : components[i]!.weightFraction / floatSum;
     c += plan.x * (p.networkAtomsPerMolecule / (p.residuePerMolecule * p.residueMolarMass)) * w * plan.row.material.modifier!.bondedMolarMass;
   }
   const freeMass = c === 0 ? solidMass : solidMass / (c + 1);
   const share = c === 0 ? 1 : freeMass / solidMass;
 
-  const count = table.materials.length;
-  const state: PointState = {
-    lines: [],
-    rows: [],
-    phases: [],
-    subjects: [],
-    conversionsC: [],
-    alcoholMol: new Float64Array(table.alcohols.length),
-    alcoholOrder: [],
-    solidMass,
-    networkAtomMol: 0,
-    groupMol: 0,
-    carriedWaterMol: 0,
-    precursorMoles: new Float64Array(count).fill(Number.NaN),
-    precursorAtoms: new Float64Array(count).fill(Number.NaN),
-  };
+  state.lines.length = 0;
+  state.rows.length = 0;
+  state.phases.length = 0;
+  state.subjects.length = 0;
+  state.conversionsC.length = 0;
+  state.alcoholMol.fill(0);
+  state.alcoholOrder.length = 0;
+  state.solidMass = solidMass;
+  state.networkAtomMol = 0;
+  state.groupMol = 0;
+  state.carriedWaterMol = 0;
+  state.precursorMoles.fill(Number.NaN);
+  state.precursorAtoms.fill(Number.NaN);
   let groups = 0;
   for (let i = 0; i < n; i += 1) {
     const position = positions[i]!;
     const row = table.materials[position]!;
-    const w = fraction(i);
+    const w = exact ? components[i]!.weightFraction : components[i]!.weightFraction / floatSum;
     const phaseFraction = c === 0 ? w : w * share;
     const present = w !== 0;
     const residueGrams = w * freeMass;
@@ -151,9 +113,8 @@ export function composePoint(input: FormulationInput, table: MaterialTable, soli
       const atoms = moles * p.networkAtomsPerMolecule;
       const carriedWater = massGrams * row.waterMolPerGram + moles * row.crystalWater;
       const volume = volumeMl(row, massGrams);
-      state.lines.push({ materialId: row.id, role: "precursor", massGrams, volumeMl: volume, moles, residueGrams, carriedSolventGrams: massGrams * row.solventFraction });
-      state.rows.push(row);
-      state.phases.push({ materialId: row.id, residueFormula: p.residueFormula, weightFraction: phaseFraction, density: p.residueDensity, organic: false, share: row.organicShare });
+      addLine(state, row, "precursor", massGrams, volume, moles, residueGrams, massGrams * row.solventFraction);
+      addPhase(state, row.id, p.residueFormula, phaseFraction, p.residueDensity, false, row.organicShare);
       state.networkAtomMol += atoms;
       groups += hydrolysable;
       state.carriedWaterMol += carriedWater;
@@ -170,9 +131,8 @@ export function composePoint(input: FormulationInput, table: MaterialTable, soli
       const volume = volumeMl(row, massGrams);
       if (row.phaseDensityField !== "") refuse("missing_density", row.phaseDensityField);
       const moles = Number.isNaN(row.molarMass) ? 0 : residueGrams / row.molarMass;
-      state.lines.push({ materialId: row.id, role: "organic", massGrams, volumeMl: volume, moles, residueGrams, carriedSolventGrams: massGrams * row.solventFraction });
-      state.rows.push(row);
-      state.phases.push({ materialId: row.id, weightFraction: phaseFraction, density: row.phaseDensity, organic: true, share: row.organicShare });
+      addLine(state, row, "organic", massGrams, volume, moles, residueGrams, massGrams * row.solventFraction);
+      addPhase(state, row.id, undefined, phaseFraction, row.phaseDensity, true, row.organicShare);
       state.carriedWaterMol += massGrams * row.waterMolPerGram;
       if (present && row.thermal) state.subjects.push(row.thermal);
     }
@@ -188,8 +148,7 @@ export function composePoint(input: FormulationInput, table: MaterialTable, soli
     const data = plan.row.material.modifier!;
     const massGrams = moles * molarMassOfRow(plan.row) * plan.row.perAssay;
     const volume = volumeMl(plan.row, massGrams);
-    state.lines.push({ materialId: plan.row.id, role: "modifier", massGrams, volumeMl: volume, moles, residueGrams: 0, carriedSolventGrams: massGrams * plan.row.solventFraction });
-    state.rows.push(plan.row);
+    addLine(state, plan.row, "modifier", massGrams, volume, moles, 0, massGrams * plan.row.solventFraction);
     state.carriedWaterMol += massGrams * plan.row.waterMolPerGram;
     replaced += moles * data.groupsReplacedPerMolecule;
     const bondedGrams = plan.bonded ? moles * data.bondedMolarMass : 0;
@@ -197,7 +156,7 @@ export function composePoint(input: FormulationInput, table: MaterialTable, soli
       let phase: PointPhase | undefined;
       for (let k = firstLigand; k < state.phases.length; k += 1) if (state.phases[k]!.materialId === plan.row.id) phase = state.phases[k];
       if (phase) phase.weightFraction += bondedGrams;
-      else state.phases.push({ materialId: plan.row.id, residueFormula: data.bondedFormula, weightFraction: bondedGrams, density: data.bondedDensity, organic: false, share: 1 });
+      else addPhase(state, plan.row.id, data.bondedFormula, bondedGrams, data.bondedDensity, false, 1);
     }
   }
   // Ligand phases held grams so far: their weight fraction is over the whole dry composite S.
