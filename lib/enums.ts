@@ -70,5 +70,7 @@ export const AUDIT_ACTIONS = [
   "batch.disposed",
   "revision.specifications_changed",
   "attachment.removed",
+  "exploration.saved",
+  "exploration.deleted",
 ] as const;
 export type AuditAction = (typeof AUDIT_ACTIONS)[number];

@@ -38,6 +38,8 @@ export const ACTION_LABELS: Record<AuditAction, string> = {
   "batch.result_acknowledged": "acknowledged an out-of-specification result",
   "batch.disposed": "decided a batch's disposition",
   "revision.specifications_changed": "changed the test specifications",
+  "exploration.saved": "saved a design exploration",
+  "exploration.deleted": "deleted a design exploration",
 };
 
 /** A value of a before/after pair in words: empty text and null read "none". */

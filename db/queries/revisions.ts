@@ -7,8 +7,8 @@
 import { and, desc, eq, inArray, sql } from "drizzle-orm";
 import { db } from "@/db";
 import type { DbOrTx } from "@/db/client";
-import { formulations, reviews, revisions, type RevisionRow } from "@/db/schema";
-import { ConflictError, NotFoundError } from "@/lib/errors";
+import { explorations, formulations, reviews, revisions, type RevisionRow } from "@/db/schema";
+import { ConflictError, NotFoundError, RuleError } from "@/lib/errors";
 import { ENGINE_VERSION, type FormulationInput } from "@/lib/formulation";
 import { assertReviewable, assertSubmittable, nextState, type RevisionState, type WorkflowAction } from "@/lib/workflow";
 import { recordEvent } from "./audit";
@@ -101,11 +101,27 @@ export async function saveDraft(actor: Actor, revisionId: string, data: { input:
   });
 }
 
+/** Where a new draft's input came from when it is not the newest revision's: a candidate of an exploration. */
+export interface StartFrom {
+  /** The new draft's input (validated by the caller with formulationInputSchema). */
+  input: FormulationInput;
+  /** The saved exploration (of this formulation) and the point of its grid the input is. */
+  fromExploration?: { explorationId?: string; point: number };
+}
+
 /**
  * Starts a new draft revision from the newest one (approved and released
- * revisions never change). Refused while a draft or a review is open.
+ * revisions never change), or with `from.input` (a candidate opened from the
+ * design explorer), computed by the full engine like any draft. Refused while
+ * a draft or a review is open. An `explorationId` that is not a saved
+ * exploration of this formulation is a RuleError naming it.
+ *
+ * @example
+ * ```ts
+ * await startRevision(actor, formulationId, { input, fromExploration: { explorationId, point: 42 } });
+ * ```
  */
-export async function startRevision(actor: Actor, formulationId: string) {
+export async function startRevision(actor: Actor, formulationId: string, from?: StartFrom) {
   return db.transaction(async (tx) => {
     const [f] = await tx
       .select()
@@ -129,15 +145,17 @@ export async function startRevision(actor: Actor, formulationId: string) {
     if (open[0]) {
       throw new ConflictError("conflict", `Revision ${open[0].number} is still ${open[0].state === "draft" ? "a draft" : "in review"}: edit that one instead.`);
     }
+    const note = from?.fromExploration ? await explorationNote(tx, actor.teamId, formulationId, from.fromExploration) : undefined;
     const id = crypto.randomUUID();
     const number = latest.number + 1;
-    const { result, computeError } = evaluate(latest.input);
+    const input = from?.input ?? latest.input;
+    const { result, computeError } = evaluate(input);
     await tx.insert(revisions).values({
       id,
       teamId: actor.teamId,
       formulationId,
       number,
-      input: latest.input,
+      input,
       result,
       computeError,
       engineVersion: ENGINE_VERSION,
@@ -152,10 +170,26 @@ export async function startRevision(actor: Actor, formulationId: string) {
       action: "revision.started",
       entityType: "revision",
       entityId: id,
-      summary: { before: { revision: latest.number }, after: { revision: number, state: "draft" } },
+      summary: {
+        before: { revision: latest.number },
+        after: { revision: number, state: "draft", ...(from ? { fromExploration: from.fromExploration ?? null, computeError } : {}) },
+        note: note ?? (from ? "opened with an input of its own" : undefined),
+      },
     });
     return { revisionId: id, number };
   });
+}
+
+/** "from the exploration “name”, point 43" (points counted from 1 for people); a RuleError when the exploration is not this formulation's. */
+async function explorationNote(tx: DbOrTx, teamId: string, formulationId: string, from: { explorationId?: string; point: number }): Promise<string> {
+  if (!from.explorationId) return `from a design exploration not saved, point ${from.point + 1}`;
+  const [e] = await tx
+    .select({ name: explorations.name })
+    .from(explorations)
+    .where(and(eq(explorations.teamId, teamId), eq(explorations.formulationId, formulationId), eq(explorations.id, from.explorationId)))
+    .limit(1);
+  if (!e) throw new RuleError("unknown_exploration", "There is no such saved exploration of this formulation.", "fromExploration.explorationId");
+  return `from the exploration “${e.name}”, point ${from.point + 1}`;
 }
 
 export interface TransitionOutcome {

@@ -3,3 +3,4 @@ export * from "./materials";
 export * from "./formulations";
 export * from "./records";
 export * from "./quality";
+export * from "./explorations";
