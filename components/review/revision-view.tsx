@@ -10,6 +10,8 @@ import { Alert } from "@/components/ui/alert";
 import { useRevision, type Revision } from "@/lib/client/formulations";
 import { fmtDateTime } from "@/lib/format";
 import { SpecificationsPanel } from "@/components/quality/specifications-panel";
+import { SavedExplorations } from "@/components/explore/saved-explorations";
+import { explorerUrl } from "@/lib/client/downloads";
 import { DiffPanel } from "./diff-panel";
 import { InputSummary } from "./input-summary";
 import { RevisionActions } from "./revision-actions";
@@ -48,7 +50,14 @@ export function RevisionView({ initial, can }: RevisionViewProps) {
         </div>
         <RevisionActions revision={rev} can={can} onChanged={() => mutate()} />
       </div>
-      <DownloadLinks links={revisionDownloads(rev.id)} />
+      <div className="flex flex-wrap items-center gap-2">
+        <DownloadLinks links={revisionDownloads(rev.id)} />
+        {can.readUnreleased ? (
+          <a href={explorerUrl(rev.formulationId, { revisionId: rev.id })} className="no-print rounded border border-rule bg-panel px-3 py-1 text-sm font-medium" data-testid="explore-link">
+            Explore
+          </a>
+        ) : null}
+      </div>
       {error ? <ErrorPanel title="Could not refresh this revision" message={error.message} onRetry={() => mutate()} /> : null}
       {fails ? (
         <Alert tone="fail" title="Thermal check fails: this revision cannot be approved." data-testid="thermal-block">
@@ -73,6 +82,11 @@ export function RevisionView({ initial, can }: RevisionViewProps) {
         </Panel>
       ) : null}
       <SpecificationsPanel revisionId={rev.id} editable={rev.state === "draft" && can.update} result={rev.result ?? null} onSaved={() => mutate()} />
+      {can.readUnreleased ? (
+        <Panel title="Saved explorations of this revision" id="explorations">
+          <SavedExplorations formulationId={rev.formulationId} revisionId={rev.id} canDelete={can.update} />
+        </Panel>
+      ) : null}
       <Panel title="Choices as entered" id="inputs">
         <InputSummary input={rev.input} />
       </Panel>

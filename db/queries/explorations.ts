@@ -8,7 +8,8 @@ import { and, desc, eq } from "drizzle-orm";
 import { db } from "@/db";
 import { explorations, formulations, revisions, user } from "@/db/schema";
 import { NotFoundError, RuleError } from "@/lib/errors";
-import type { ExplorationBody } from "@/lib/explore/spec";
+import type { ExplorationBody, Grid } from "@/lib/explore/spec";
+import type { FormulationInput } from "@/lib/formulation";
 import { recordEvent } from "./audit";
 import type { Actor } from "./formulations";
 
@@ -30,7 +31,37 @@ const listColumns = {
   createdBy: explorations.createdBy,
   createdByName: user.name,
   createdAt: explorations.createdAt,
+  input: revisions.input,
 };
+
+/**
+ * Names of what the grid varies, read from the revision's input, so a list
+ * can say "Titanium isopropoxide, weight fraction" without the whole input:
+ * a material id → its name, "step:<i>" → the step's name, "modifier:<i>" →
+ * the modifier material's name.
+ */
+export function gridNames(grid: Grid, input: FormulationInput): Record<string, string> {
+  const names: Record<string, string> = {};
+  const material = (id: string) => input.materials.find((m) => m.id === id)?.name ?? id;
+  const ids = grid.kind === "ternary" ? [...grid.materialIds] : grid.variables.flatMap((v) => (v.kind === "weightFraction" ? [v.materialId] : []));
+  for (const id of ids) names[id] = material(id);
+  if (grid.kind === "sweep") {
+    for (const v of grid.variables) {
+      if (v.kind === "stepTemperature") names[`step:${v.index}`] = input.steps[v.index]?.name ?? `step ${v.index + 1}`;
+      if (v.kind === "modifierRatio") {
+        const m = input.modifiers?.[v.index];
+        names[`modifier:${v.index}`] = m ? material(m.materialId) : `modifier ${v.index + 1}`;
+      }
+    }
+  }
+  return names;
+}
+
+/** A row with the names its grid needs in place of the revision's input. */
+function withNames<T extends { grid: Grid; input: FormulationInput }>(row: T): Omit<T, "input"> & { names: Record<string, string> } {
+  const { input, ...rest } = row;
+  return { ...rest, names: gridNames(row.grid, input) };
+}
 
 /**
  * A formulation's saved explorations, newest first, optionally of one
@@ -43,7 +74,7 @@ const listColumns = {
  * ```
  */
 export async function listExplorations(teamId: string, formulationId: string, opts: { revisionId?: string; releasedOnly?: boolean } = {}) {
-  return db
+  const rows = await db
     .select(listColumns)
     .from(explorations)
     .innerJoin(revisions, eq(revisions.id, explorations.revisionId))
@@ -58,6 +89,7 @@ export async function listExplorations(teamId: string, formulationId: string, op
     )
     .orderBy(desc(explorations.createdAt), desc(explorations.id))
     .limit(EXPLORATION_LIST_MAX);
+  return rows.map(withNames);
 }
 
 /** One exploration with its formulation's name and its revision's number; null when not in this team. */
@@ -72,7 +104,7 @@ export async function getExploration(teamId: string, id: string, opts: { release
     .limit(1);
   if (!row) return null;
   if (opts.releasedOnly && row.revisionState !== "released") return null;
-  return row;
+  return withNames(row);
 }
 
 /**

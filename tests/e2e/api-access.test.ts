@@ -7,7 +7,7 @@
 import { existsSync, readdirSync, readFileSync } from "node:fs";
 import { join } from "node:path";
 import { beforeAll, describe, expect, it } from "vitest";
-import { coatInput, library, type LibraryMaterial } from "./fixtures";
+import { coatInput, explorationBody, library, saveExploration, type LibraryMaterial } from "./fixtures";
 import { AUTH_ALLOWED } from "@/lib/auth-http";
 import { can, type Permission } from "@/lib/permissions";
 import { LIBRARY_ROUTES, routeDeclarations, type Method } from "../helpers/route-declarations";
@@ -16,7 +16,7 @@ import { anonymous, demo, signIn, signUp, type Client } from "./http";
 type Role = "admin" | "formulator" | "reviewer" | "production";
 const clients = {} as Record<Role, Client>;
 let lib: Map<string, LibraryMaterial>;
-let ids: { formulation: string; draft: string; released: string; material: string; member: string };
+let ids: { formulation: string; draft: string; released: string; material: string; member: string; exploration: string };
 const stamp = Date.now().toString(36);
 
 beforeAll(async () => {
@@ -38,7 +38,11 @@ beforeAll(async () => {
     draft: m.revisions[0]!.id,
     material: lib.get("ethanol")!.id,
     member: members.rows.find((x) => x.email === demo.production)!.id,
+    exploration: "",
   };
+  // A saved exploration of the released revision (issue 16): the table only reads it.
+  const firstComponent = ((await (await clients.formulator.fetch(`/api/revisions/${ids.released}`)).json()) as { input: { components: { materialId: string }[] } }).input.components[0]!.materialId;
+  ids.exploration = await saveExploration(clients.formulator, hc3.id, explorationBody(ids.released, firstComponent, `Access table ${stamp}`));
 });
 
 type Expectation = Record<Role, number>;
@@ -149,6 +153,13 @@ const cases: Case[] = [
   { route: "/api/batches/[id]/lines/[index]/lot", name: "choose a lot for a line (missing)", method: "PUT", path: () => "/api/batches/missing/lines/0/lot", body: () => ({ lotId: "missing" }), allowed: 404 },
   { route: "/api/batches/[id]/disposition", name: "disposition status (missing)", method: "GET", path: () => "/api/batches/missing/disposition", allowed: 404 },
   { route: "/api/batches/[id]/disposition", name: "dispose batch (missing)", method: "POST", path: () => "/api/batches/missing/disposition", body: () => ({ disposition: "rejected" }), allowed: 404 },
+  // Issue 16, saved design explorations: the same role rules as unreleased revisions (production sees none).
+  { route: "/api/formulations/[id]/explorations", name: "list a formulation's explorations", method: "GET", path: () => `/api/formulations/${ids.formulation}/explorations`, allowed: 200 },
+  { route: "/api/formulations/[id]/explorations", name: "save an exploration (invalid body)", method: "POST", path: () => `/api/formulations/${ids.formulation}/explorations`, body: () => ({ name: "" }), allowed: 422 },
+  { route: "/api/explorations/[id]", name: "get a saved exploration", method: "GET", path: () => `/api/explorations/${ids.exploration}`, allowed: 200 },
+  { route: "/api/explorations/[id]", name: "delete an exploration (missing)", method: "DELETE", path: () => "/api/explorations/00000000-0000-0000-0000-000000000000", allowed: 404 },
+  { route: "/api/explorations/[id]/export", name: "export an exploration's points", method: "GET", path: () => `/api/explorations/${ids.exploration}/export?format=csv`, allowed: 200 },
+  { route: "/api/formulations/[id]/revisions", name: "open a candidate as a draft (invalid input)", method: "POST", path: () => `/api/formulations/${ids.formulation}/revisions`, body: () => ({ input: { components: [] } }), allowed: 422 },
 ];
 
 function call(client: Client, c: Case) {
@@ -228,6 +239,12 @@ describe("another team's records", () => {
       ["DELETE", `/api/members/${ids.member}`],
       ["GET", `/api/revisions/${ids.draft}/specifications`],
       ["PUT", `/api/revisions/${ids.draft}/specifications`, { specifications: [], version: 1 }],
+      ["GET", `/api/formulations/${ids.formulation}/explorations`],
+      ["POST", `/api/formulations/${ids.formulation}/explorations`, explorationBody(ids.released, otherLib.get("teos")!.id)],
+      ["GET", `/api/explorations/${ids.exploration}`],
+      ["GET", `/api/explorations/${ids.exploration}/export?format=xlsx`],
+      ["DELETE", `/api/explorations/${ids.exploration}`],
+      ["POST", `/api/formulations/${ids.formulation}/revisions`, { input: coatInput(otherLib) }],
     ];
     for (const [method, path, json] of probes) {
       const res = await other.fetch(path, { method, json });
@@ -239,6 +256,32 @@ describe("another team's records", () => {
     expect(await (await clients.admin.fetch(`/api/materials/${ids.material}`)).json()).toEqual(beforeMaterial);
     const members = (await (await clients.admin.fetch("/api/members")).json()) as { rows: { id: string; role: string }[] };
     expect(members.rows.find((m) => m.id === ids.member)?.role).toBe("production");
+    expect((await clients.admin.fetch(`/api/explorations/${ids.exploration}`)).status).toBe(200);
+  });
+
+  it("keeps the other team's saved exploration from Larkspur's members (404), and out of their lists", async () => {
+    const otherLib = await library(other);
+    const created = await other.fetch("/api/formulations", { method: "POST", json: { name: `Elsewhere coat ${stamp}`, input: coatInput(otherLib) } });
+    expect(created.status).toBe(201);
+    const { formulationId, revisionId } = (await created.json()) as { formulationId: string; revisionId: string };
+    const theirs = await saveExploration(other, formulationId, explorationBody(revisionId, otherLib.get("teos")!.id, "Theirs"));
+    for (const role of ["admin", "formulator"] as Role[]) {
+      for (const [method, path] of [
+        ["GET", `/api/explorations/${theirs}`],
+        ["GET", `/api/explorations/${theirs}/export?format=csv`],
+        ["DELETE", `/api/explorations/${theirs}`],
+        ["GET", `/api/formulations/${formulationId}/explorations`],
+        ["POST", `/api/formulations/${formulationId}/explorations`],
+      ] as const) {
+        const res = await clients[role].fetch(path, { method, json: method === "POST" ? explorationBody(revisionId, otherLib.get("teos")!.id) : undefined });
+        expect(res.status, `${role} ${method} ${path}`).toBe(404);
+      }
+      // Their revision id in a body sent to Larkspur's formulation: not a revision of it (422 naming revisionId).
+      const res = await clients[role].fetch(`/api/formulations/${ids.formulation}/explorations`, { method: "POST", json: explorationBody(revisionId, otherLib.get("teos")!.id) });
+      expect(res.status, role).toBe(422);
+      expect(Object.keys(((await res.json()) as { error: { fields: Record<string, string> } }).error.fields)).toContain("revisionId");
+    }
+    expect((await other.fetch(`/api/explorations/${theirs}`)).status).toBe(200);
   });
 });
 

@@ -6,7 +6,8 @@
  */
 import { beforeAll, describe, expect, it } from "vitest";
 import { formulationInputSchema, materialSchema } from "@/lib/formulation";
-import { coatInput, library } from "./fixtures";
+import { coatInput, explorationBody, library } from "./fixtures";
+import { saveExplorationSchema } from "@/lib/validations/explorations";
 import { demo, signIn, type Client } from "./http";
 import { APPEARANCE_SPEC, releasedWithSpecs, VISCOSITY_SPEC } from "./quality-fixtures";
 
@@ -340,6 +341,64 @@ beforeAll(async () => {
       ] as [string, string][]) {
         cases.push({ label: `quality ${method} ${label}`, client, method, path, body });
       }
+    }
+  }
+
+  // Issue 16, saved design explorations and opening a candidate as a new draft (the monolith has an open draft,
+  // so even an input the schema took would be refused with 409 and start nothing).
+  {
+    const hc3Released = hc3Revs.revisions.find((r) => r.state === "released")!.id;
+    const firstComponent = ((await (await formulator.fetch(`/api/revisions/${hc3Released}`)).json()) as { input: { components: { materialId: string }[] } }).input.components[0]!.materialId;
+    const validExploration = explorationBody(hc3Released, firstComponent) as unknown as Json;
+    const saveUrl = () => `/api/formulations/${hc3.id}/explorations`;
+    const explorationCases: [string, () => string, Json, string | undefined][] = [];
+    for (const m of mutations(validExploration, () => false, (b) => saveExplorationSchema.safeParse(b).success)) {
+      explorationCases.push(["POST", saveUrl, m.body, m.field]);
+    }
+    for (const name of NAME_BAD) explorationCases.push(["POST", saveUrl, { ...(validExploration as object), name: name.slice(0, 121) }, "name"]);
+    const ex = validExploration as Record<string, Json>;
+    explorationCases.push(
+      ["POST", saveUrl, { ...ex, revisionId: draftId }, "revisionId"],
+      ["POST", saveUrl, { ...ex, revisionId: "00000000-0000-0000-0000-000000000000" }, "revisionId"],
+      ["POST", saveUrl, { ...ex, pointCount: 20_001 }, "pointCount"],
+      ["POST", saveUrl, { ...ex, pointCount: 0 }, "pointCount"],
+      ["POST", saveUrl, { ...ex, outputs: [] }, "outputs"],
+      ["POST", saveUrl, { ...ex, grid: { kind: "sweep", variables: [] } }, "grid.variables"],
+      ["POST", saveUrl, { ...ex, grid: { kind: "cube", variables: [] } }, "grid"],
+      ["POST", saveUrl, { ...ex, grid: { kind: "sweep", variables: [{ kind: "weightFraction", materialId: firstComponent, from: 0, to: 1, step: 0 }] } }, "grid.variables"],
+      ["POST", saveUrl, { ...ex, grid: { kind: "ternary", materialIds: ["a", "b"], step: 0.1 } }, "grid.materialIds"],
+      ["POST", saveUrl, { ...ex, search: { constraints: [{ output: "refractiveIndex" }], thermal: "clear", objective: { goal: "min", output: "refractiveIndex" } } }, "search.constraints"],
+      ["POST", saveUrl, { ...ex, search: { constraints: [{ output: "refractiveIndex", min: 2, max: 1 }], thermal: "clear", objective: { goal: "min", output: "refractiveIndex" } } }, "search.constraints"],
+      ["POST", saveUrl, { ...ex, search: { constraints: [], thermal: "clear", objective: { goal: "closest", output: "refractiveIndex" } } }, "search.objective"],
+      ["POST", saveUrl, { ...ex, candidates: Array.from({ length: 11 }, () => (ex.candidates as Json[])[0]!) }, "candidates"],
+      ["POST", saveUrl, { ...ex, extra: 1 }, "body"],
+      ["POST", saveUrl, [], "body"],
+    );
+    const startUrl = () => `/api/formulations/${monolith.id}/revisions`;
+    for (const m of mutations(validInput, skipInput, (b) => formulationInputSchema.safeParse(b).success).filter((_, i) => i % 3 === 0)) {
+      explorationCases.push(["POST", startUrl, { input: m.body }, `input.${m.field}`]);
+    }
+    explorationCases.push(
+      ["POST", startUrl, { input: validInput, fromExploration: { point: -1 } }, "fromExploration.point"],
+      ["POST", startUrl, { input: validInput, fromExploration: { point: 1.5 } }, "fromExploration.point"],
+      ["POST", startUrl, { input: validInput, fromExploration: { point: 20_000 } }, "fromExploration.point"],
+      ["POST", startUrl, { input: validInput, fromExploration: { point: 0, explorationId: 7 } }, "fromExploration.explorationId"],
+      ["POST", startUrl, { fromExploration: { point: 0 } }, "input"],
+      ["POST", startUrl, { input: "recipe" }, "input"],
+      ["POST", startUrl, { input: validInput, surprise: true }, "body"],
+    );
+    for (const [method, path, body, field] of explorationCases) {
+      cases.push({ label: `exploration ${method} ${path().split("/").slice(-1)[0]} ${JSON.stringify(body).slice(0, 60)}`, client: f2, method, path, body: JSON.stringify(body), field });
+    }
+    for (const [path, label, body] of [
+      [saveUrl, "malformed JSON", "{\"name\": "],
+      [saveUrl, "truncated unicode", "{\"name\": \"\uD83D"],
+      // Over the route's own 256 kB limit, well under the 1 MB every JSON route has.
+      [saveUrl, "body over 256 kB", JSON.stringify({ ...ex, pad: "x".repeat(300_000) })],
+      [startUrl, "malformed JSON", "{\"input\": "],
+      [startUrl, "oversized body", JSON.stringify({ pad: "☃".repeat(700_000) })],
+    ] as [() => string, string, string][]) {
+      cases.push({ label: `exploration POST ${path().split("/").slice(-1)[0]} ${label}`, client: f2, method: "POST", path, body });
     }
   }
 

@@ -46,3 +46,27 @@ export function coatInput(lib: Map<string, LibraryMaterial>, opts: { cureC?: num
     marginC: 20,
   };
 }
+
+/**
+ * The body that saves an exploration (lib/explore/spec.ts): a component's
+ * weight fraction swept 0.2 → 0.6 in steps of 0.1 (5 points), refractive
+ * index and density shown, a search for the closest index to 1.5.
+ */
+export function explorationBody(revisionId: string, materialId: string, name = "Probe sweep") {
+  return {
+    revisionId,
+    name,
+    grid: { kind: "sweep", variables: [{ kind: "weightFraction", materialId, from: 0.2, to: 0.6, step: 0.1 }] },
+    outputs: ["refractiveIndex", "theoreticalDensity"],
+    search: { constraints: [{ output: "theoreticalDensity", min: 1 }], thermal: "caution", objective: { goal: "closest", output: "refractiveIndex", value: 1.5 } },
+    pointCount: 5,
+    candidates: [{ point: 1, values: [0.3], score: 0.01, figures: { refractiveIndex: 1.49, theoreticalDensity: 1.6 }, thermalStatus: "clear" }],
+  };
+}
+
+/** Saves an exploration of a formulation through the API; returns its id. */
+export async function saveExploration(client: Client, formulationId: string, body: ReturnType<typeof explorationBody>): Promise<string> {
+  const res = await client.fetch(`/api/formulations/${formulationId}/explorations`, { method: "POST", json: body });
+  if (res.status !== 201) throw new Error(`save exploration: ${res.status} ${await res.text()}`);
+  return ((await res.json()) as { id: string }).id;
+}

@@ -1,11 +1,13 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
+import { SavedExplorations } from "@/components/explore/saved-explorations";
 import { RevisionsTable } from "@/components/history/revisions-table";
 import { pageContext } from "@/components/layout/page-context";
 import { PageHeader, Panel } from "@/components/ui/panel";
 import { StateBadge } from "@/components/ui/status";
 import { getFormulation } from "@/db/queries/formulations";
+import { explorerUrl } from "@/lib/client/downloads";
 import { can } from "@/lib/permissions";
 
 export const metadata: Metadata = { title: "Formulation" };
@@ -32,6 +34,11 @@ export default async function FormulationPage({ params }: { params: Promise<{ id
                 Open revision {latest.number}
               </Link>
             ) : null}
+            {latest && can(ctx.role, "formulation:readUnreleased") ? (
+              <Link href={explorerUrl(f.id, { revisionId: latest.id })} className="rounded border border-rule bg-panel px-3 py-1.5 text-sm font-medium" data-testid="explore-link">
+                Explore
+              </Link>
+            ) : null}
             {can(ctx.role, "batch:read") ? (
               <Link href={`/batches?formulationId=${f.id}`} className="rounded border border-rule bg-panel px-3 py-1.5 text-sm font-medium">
                 Batch records
@@ -54,6 +61,11 @@ export default async function FormulationPage({ params }: { params: Promise<{ id
       <Panel title="Revisions" id="revisions">
         <RevisionsTable rows={f.revisions} canEdit={can(ctx.role, "formulation:update")} />
       </Panel>
+      {can(ctx.role, "formulation:readUnreleased") ? (
+        <Panel title="Saved explorations" id="explorations" className="mt-4">
+          <SavedExplorations formulationId={f.id} canDelete={can(ctx.role, "formulation:update")} />
+        </Panel>
+      ) : null}
     </>
   );
 }
