@@ -89,15 +89,17 @@ function defaultOutputs(catalogue: readonly OutputInfo[]): string[] {
   return wanted.length > 0 ? wanted : catalogue.slice(0, 1).map((o) => o.key);
 }
 
-function defaultSearch(catalogue: readonly OutputInfo[]): SearchValues {
-  const has = (k: string) => catalogue.some((o) => o.key === k);
+/** No limits yet; the aim: closest to the substrate's index when the coat's index is a figure, else the lowest of the first figure. */
+function defaultSearch(base: FormulationInput, catalogue: readonly OutputInfo[]): SearchValues {
+  const substrateIndex = base.materials.find((m) => m.id === base.substrateId)?.refractiveIndex;
+  const byIndex = substrateIndex !== undefined && catalogue.some((o) => o.key === "refractiveIndex");
   return {
     on: false,
-    constraints: [{ output: has("organicContent") ? "organicContent" : (catalogue[0]?.key ?? ""), min: Number.NaN, max: Number.NaN }],
+    constraints: [],
     thermal: "clear",
-    goal: "closest",
-    output: has("refractiveIndex") ? "refractiveIndex" : (catalogue[0]?.key ?? ""),
-    value: Number.NaN,
+    goal: byIndex ? "closest" : "min",
+    output: byIndex ? "refractiveIndex" : (catalogue[0]?.key ?? ""),
+    value: byIndex ? substrateIndex : Number.NaN,
   };
 }
 
@@ -111,7 +113,7 @@ export function initialSetup(base: FormulationInput, catalogue: readonly OutputI
     materialIds: [components[0] ?? "", components[1] ?? "", components[2] ?? ""],
     ternaryStep: 5,
     outputs: defaultOutputs(catalogue),
-    search: defaultSearch(catalogue),
+    search: defaultSearch(base, catalogue),
   };
   if (!saved) return values;
   const known = saved.outputs.filter((k) => catalogue.some((o) => o.key === k));
