@@ -23,7 +23,7 @@ function indexReference(base: FormulationInput): { value: number; label: string 
 }
 
 /**
- * A run's figures: a line plot per figure for one variable (the coat's index against the substrate's), a map of a chosen figure for
+ * A run's figures: a line plot for one variable (the coat's index against the substrate's), a map of a chosen figure for
  * two variables or three components, or the same points as a table.
  */
 export function ResultsView({ run, outputs, base }: ResultsViewProps) {
@@ -54,11 +54,7 @@ export function ResultsView({ run, outputs, base }: ResultsViewProps) {
       {asTable ? (
         <PointsTable run={run} outputs={outputs} />
       ) : isLine ? (
-        <div className="grid gap-4 xl:grid-cols-2">
-          {outputs.map((o) => (
-            <LinePlot key={o.key} run={run} outputs={[o]} reference={o.key === "refractiveIndex" ? indexReference(base) : undefined} />
-          ))}
-        </div>
+        <LinePlot run={run} outputs={outputs} reference={outputs.some((o) => o.key === "refractiveIndex") ? indexReference(base) : undefined} />
       ) : !mapOutput ? null : run.plan.ternary ? (
         <TernaryMap run={run} output={mapOutput} />
       ) : (
