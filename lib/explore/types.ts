@@ -11,6 +11,8 @@ export interface Axis {
   label: string;
   /** Unit shown beside the values, e.g. "wt%", "°C", "mm/s", "mol/mol". Weight fractions are stored 0–1 and shown in %. */
   unit: string;
+  /** True when values are fractions stored 0–1 and shown ×100 (weight fractions, solids content). */
+  percent?: boolean;
   values: number[];
 }
 
