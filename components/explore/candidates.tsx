@@ -4,7 +4,7 @@ import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { ApiRequestError, apiSend, errorMessage } from "@/lib/client/fetcher";
-import { pointInput } from "@/lib/explore/apply";
+import { isPointRefusal, pointInput } from "@/lib/explore/apply";
 import type { Candidate } from "@/lib/explore/spec";
 import type { ExplorationRun, OutputInfo } from "@/lib/explore/types";
 import type { FormulationInput } from "@/lib/formulation";
@@ -43,7 +43,7 @@ export function Candidates({ formulationId, base, run, candidates, outputs, expl
     setBusy(c.point);
     setMessages((m) => ({ ...m, [c.point]: "" }));
     const input = pointInput(base, run.plan, c.point);
-    if (!("materials" in input)) {
+    if (isPointRefusal(input)) {
       setMessages((m) => ({ ...m, [c.point]: `This point cannot become a recipe (${input.code} at ${input.field}).` }));
       setBusy(null);
       return;

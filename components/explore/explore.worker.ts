@@ -4,7 +4,7 @@
  * the figures back as transferred buffers. The page cancels a run by
  * terminating the worker.
  */
-import { planGrid } from "@/lib/explore/grid";
+import { isPlanError, planGrid } from "@/lib/explore/grid";
 import { runExploration } from "@/lib/explore/run";
 import { decimalModel } from "@/lib/formulation/numeric/figures";
 import type { FailedMessage, RunRequest, WorkerMessage } from "./worker-messages";
@@ -27,7 +27,7 @@ scope.onmessage = async (event: MessageEvent<RunRequest>) => {
   const started = performance.now();
   try {
     const plan = planGrid(request.grid, request.base);
-    if ("message" in plan && "field" in plan) {
+    if (isPlanError(plan)) {
       post({ type: "failed", message: plan.message });
       return;
     }

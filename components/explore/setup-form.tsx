@@ -86,6 +86,10 @@ export function SetupForm({ plan }: SetupFormProps) {
             <span className="num font-semibold">{plan.count.toLocaleString("en")}</span> points to compute (at most {EXPLORE_MAX_POINTS.toLocaleString("en")} per
             exploration).
           </>
+        ) : messageFor("count") ? (
+          <span id="x-count-error" className="text-fail">
+            {messageFor("count")}
+          </span>
         ) : (
           <span className="text-fail">Nothing to run yet: see the message beside the field above.</span>
         )}

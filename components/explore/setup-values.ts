@@ -4,7 +4,7 @@
  * (lib/explore/spec.ts), and every message placed at the form field at fault.
  */
 import { z } from "zod";
-import { planGrid } from "@/lib/explore/grid";
+import { isPlanError, planGrid } from "@/lib/explore/grid";
 import { gridSchema, searchSchema, type Grid, type Search, type Variable, type VariableKind } from "@/lib/explore/spec";
 import type { GridPlan, OutputInfo } from "@/lib/explore/types";
 import type { FormulationInput } from "@/lib/formulation";
@@ -54,7 +54,7 @@ export interface SetupValues {
   search: SearchValues;
 }
 
-/** A message at a form field path, e.g. "variables.0.step". */
+/** A message at a form field path, e.g. "variables.0.step" ("count": the grid as a whole, shown with the point count). */
 export interface SetupIssue {
   path: string;
   message: string;
@@ -166,6 +166,8 @@ export function gridFieldOf(path: readonly PropertyKey[], ternary: boolean): str
     return "mode";
   }
   if (parts[0] === "variables" && parts[1] !== undefined) return `variables.${parts[1]}.${parts[2] ?? "kind"}`;
+  // The grid as a whole (too many points of two variables together): beside the point count.
+  if (parts[0] === "variables") return "count";
   return "mode";
 }
 
@@ -210,7 +212,7 @@ export function checkSetup(values: SetupValues, base: FormulationInput, catalogu
   } else {
     grid = parsed.data;
     const planned = planGrid(grid, base);
-    if ("message" in planned && "field" in planned) {
+    if (isPlanError(planned)) {
       issues.push({ path: gridFieldOf(planned.field.replace(/^grid\.?/, "").split(".").filter(Boolean), ternary), message: planned.message });
     } else {
       plan = planned;

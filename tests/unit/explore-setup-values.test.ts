@@ -117,7 +117,8 @@ describe("setup values", () => {
       const check = checkSetup(v, hc3, catalogue);
       expect(check.plan).toBeUndefined();
       expect(check.issues).toHaveLength(1);
-      expect(check.issues[0]!.path).toMatch(/^variables\.[01]\.(from|to|step|kind)$/);
+      // Two variables together: the message stands with the point count.
+      expect(check.issues[0]!.path).toBe("count");
       expect(check.issues[0]!.message).toContain(EXPLORE_MAX_POINTS.toLocaleString("en"));
     });
 
@@ -143,7 +144,8 @@ describe("setup values", () => {
     it("maps grid and search paths to form fields", () => {
       expect(gridFieldOf(["variables", 1, "to"], false)).toBe("variables.1.to");
       expect(gridFieldOf(["variables", 0], false)).toBe("variables.0.kind");
-      expect(gridFieldOf(["variables"], false)).toBe("mode");
+      expect(gridFieldOf(["variables"], false)).toBe("count");
+      expect(gridFieldOf([], false)).toBe("mode");
       expect(gridFieldOf(["step"], true)).toBe("ternaryStep");
       expect(gridFieldOf(["materialIds", 2], true)).toBe("materialIds.2");
       expect(searchFieldOf(["constraints", 3])).toBe("search.constraints.3.min");
