@@ -62,3 +62,24 @@ export function tickText(value: number, decimals: number): string {
   const text = value.toFixed(decimals);
   return Number(text) === 0 ? (0).toFixed(decimals) : text.replace("-", "−");
 }
+
+/**
+ * Nice ticks that enclose [lo, hi]: the domain runs from the tick at or below
+ * the lowest value to the tick at or above the highest (for a y axis).
+ * @example paddedTicks(1.4712, 1.5934, 5) // { domain: [1.45, 1.6], values: [1.45, 1.475, …, 1.6], … }
+ */
+export function paddedTicks(lo: number, hi: number, target = 5): Ticks & { domain: [number, number] } {
+  let min = Math.min(lo, hi);
+  let max = Math.max(lo, hi);
+  if (!Number.isFinite(min) || !Number.isFinite(max)) return { values: [0, 1], step: 1, decimals: 0, domain: [0, 1] };
+  if (min === max) {
+    const pad = min === 0 ? 1 : Math.abs(min) * 0.05;
+    min -= pad;
+    max += pad;
+  }
+  const step = niceStep(max - min, target);
+  const a = Math.floor(min / step + 1e-9) * step;
+  const b = Math.ceil(max / step - 1e-9) * step;
+  const t = niceTicks(a, b, Math.round((b - a) / step));
+  return { ...t, domain: [t.values[0] ?? a, t.values.at(-1) ?? b] };
+}
