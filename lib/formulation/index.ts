@@ -68,3 +68,4 @@ export {
   type NumericOutcome,
   type NumericPhase,
 } from "./numeric/figures";
+export { numericModel } from "./numeric/model";

@@ -1,0 +1,62 @@
+/**
+ * The numeric path against the decimal engine, on thousands of random valid
+ * inputs (fast-check): every figure within 1e-9 relative (|a − b| ≤ 1e-9 ·
+ * max(|a|, |b|), differences ≤ 1e-12 taken as 0), NaN exactly where the engine
+ * has no value, the same thermal verdict, and a refusal exactly where the
+ * engine refuses, with the same code and field. The decimal engine is the
+ * reference here: its equations are checked against published sources in
+ * the worked-example tests.
+ */
+import fc from "fast-check";
+import { describe, expect, it } from "vitest";
+import { formulationInputSchema, type FormulationInput } from "../input-schema";
+import { figuresDifference, SCALAR_FIGURES, type ScalarFigure } from "./compare";
+import { decimalModel, type NumericFigures, type NumericOutcome } from "./figures";
+import { numericModel } from "./model";
+import { formulationInputs } from "./test-arbitraries";
+import { COAT_FIGURES, numericCoatHook } from "./coat-hook";
+
+const TOLERANCE = 1e-9;
+
+/** The figures compared: all, or all but the coat figures while the coat path is not wired in. */
+const COMPARED: readonly ScalarFigure[] = numericCoatHook ? SCALAR_FIGURES : SCALAR_FIGURES.filter((key) => !COAT_FIGURES.includes(key));
+
+/** The input without the materials' texts, for a failure message. */
+function describeInput(input: FormulationInput): string {
+  return JSON.stringify({ ...input, materials: input.materials.map((m) => m.id + (m.density === undefined ? " (no density)" : "") + (m.molarMass === undefined ? " (no molar mass)" : "")) });
+}
+
+function agree(input: FormulationInput): { numeric: NumericOutcome; decimal: NumericOutcome } {
+  const decimal = decimalModel(input.materials).evaluate(input);
+  const numeric = numericModel(input.materials).evaluate(input);
+  if (!decimal.ok) {
+    expect(numeric, describeInput(input)).toEqual(decimal);
+  } else {
+    expect(numeric.ok ? "figures" : `refused ${numeric.code} on ${numeric.field}`, describeInput(input)).toBe("figures");
+    if (numeric.ok) {
+      const difference = figuresDifference(numeric.figures, decimal.figures, COMPARED);
+      const show = (figures: NumericFigures): string => JSON.stringify(difference.figure.startsWith("phases") ? figures.phases : figures[difference.figure as ScalarFigure]);
+      expect(difference.max, `${difference.figure}: numeric ${show(numeric.figures)}, decimal ${show(decimal.figures)}; ${describeInput(input)}`).toBeLessThanOrEqual(TOLERANCE);
+    }
+  }
+  return { numeric, decimal };
+}
+
+describe("numeric path vs the decimal engine", () => {
+  it("gives every figure within 1e-9, NaN where the engine has none, and the engine's refusals", () => {
+    let valid = 0;
+    let refused = 0;
+    fc.assert(
+      fc.property(formulationInputs, (input) => {
+        if (!formulationInputSchema.safeParse(input).success) return;
+        valid += 1;
+        if (!agree(input).decimal.ok) refused += 1;
+      }),
+      { numRuns: 4000 },
+    );
+    // The generator must mostly give valid inputs, and some the engine refuses.
+    expect(valid).toBeGreaterThan(2500);
+    expect(refused).toBeGreaterThan(20);
+    expect(refused).toBeLessThan(valid / 2);
+  });
+});
