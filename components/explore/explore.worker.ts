@@ -6,7 +6,7 @@
  */
 import { isPlanError, planGrid } from "@/lib/explore/grid";
 import { runExploration } from "@/lib/explore/run";
-import { decimalModel } from "@/lib/formulation/numeric/figures";
+import { numericModel } from "@/lib/formulation/numeric/model";
 import type { FailedMessage, RunRequest, WorkerMessage } from "./worker-messages";
 
 /** The worker's global scope, typed by hand (the project's lib is the DOM's). */
@@ -31,7 +31,7 @@ scope.onmessage = async (event: MessageEvent<RunRequest>) => {
       post({ type: "failed", message: plan.message });
       return;
     }
-    const model = decimalModel(request.base.materials);
+    const model = numericModel(request.base.materials);
     const run = await runExploration({
       base: request.base,
       plan,

@@ -31,6 +31,8 @@ export function ResultsView({ run, outputs, base }: ResultsViewProps) {
   const [mapKey, setMapKey] = useState(outputs[0]?.key ?? "");
   const mapOutput = outputs.find((o) => o.key === mapKey) ?? outputs[0];
   const isLine = !run.plan.ternary && run.plan.axes.length === 1;
+  // The line plot draws the reference in its first figure's panel: the coat's index first when shown.
+  const lineOrder = [...outputs].sort((a, b) => Number(b.key === "refractiveIndex") - Number(a.key === "refractiveIndex"));
   return (
     <div className="flex flex-col gap-3" data-testid="results">
       <div className="flex flex-wrap items-center gap-3">
@@ -54,7 +56,7 @@ export function ResultsView({ run, outputs, base }: ResultsViewProps) {
       {asTable ? (
         <PointsTable run={run} outputs={outputs} />
       ) : isLine ? (
-        <LinePlot run={run} outputs={outputs} reference={outputs.some((o) => o.key === "refractiveIndex") ? indexReference(base) : undefined} />
+        <LinePlot run={run} outputs={lineOrder} reference={lineOrder[0]?.key === "refractiveIndex" ? indexReference(base) : undefined} />
       ) : !mapOutput ? null : run.plan.ternary ? (
         <TernaryMap run={run} output={mapOutput} />
       ) : (

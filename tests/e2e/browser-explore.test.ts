@@ -66,6 +66,8 @@ async function setVariable(page: Page, i: 0 | 1, kind: string, which: string | n
 async function tableColumn(page: Page, header: RegExp): Promise<number[]> {
   const table = page.getByTestId("points-table").locator("table");
   await poll(() => table.count()).toBeGreaterThan(0);
+  // All the points on one page (the table pages them).
+  await page.getByTestId("points-table").getByLabel("Rows").selectOption("250");
   const headers = await table.first().locator("thead th").allTextContents();
   const col = headers.findIndex((h) => header.test(h));
   if (col < 0) throw new Error(`no column ${header} among ${headers.join(" | ")}`);
@@ -166,7 +168,7 @@ describe("the design explorer", () => {
     expect(await page.getByRole("progressbar").count()).toBe(0);
     await poll(() => page.getByTestId("run-state").textContent()).toMatch(/Stopped after [\d,]+ of 10,100 points/);
     expect(await page.getByTestId("results").count()).toBe(0);
-  });
+  }, 120_000);
 
   it("times a 100 × 100 colour map from the Run click to the drawn map", async () => {
     const page = session.page;
@@ -179,12 +181,12 @@ describe("the design explorer", () => {
     const started = Date.now();
     await page.getByRole("button", { name: "Run", exact: true }).click();
     // The map sets data-draw-ms once its canvas is painted.
-    await page.locator('[data-testid="colour-map"][data-draw-ms]:not([data-draw-ms=""])').waitFor({ timeout: 60_000 });
+    await page.locator('[data-testid="colour-map"][data-draw-ms]:not([data-draw-ms=""])').waitFor({ timeout: 170_000 });
     const ms = Date.now() - started;
     console.log(`explore map: 100 x 100 points drawn in ${ms} ms`);
     expect(await page.getByTestId("run-state").getAttribute("data-phase")).toBe("done");
     await screenshot(page, "explore-map-100x100");
-  });
+  }, 180_000);
 
   it("searches for a clear cure with ≥ 60 wt% organic content closest to the polycarbonate's index, saves it and opens the best candidate as a draft", async () => {
     const page = session.page;
@@ -244,7 +246,7 @@ describe("the design explorer", () => {
     await page.getByTestId("candidate").first().getByRole("button", { name: "Open as a new draft" }).click();
     await poll(() => page.getByTestId("candidate").first().locator("[id^=candidate-][id$=-message]").textContent()).toMatch(/is still a draft: edit that one instead/);
     expect(page.url()).toMatch(/\/explore\?revision=/);
-  });
+  }, 180_000);
 
   it("shows the saved exploration to a reviewer beside the revision, without Save or Open as draft", async () => {
     const reviewer = await openSession();
