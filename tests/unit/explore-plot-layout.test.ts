@@ -87,7 +87,7 @@ describe("ternary coordinates", () => {
       [0.7, 0.1, 0.2],
       [0, 0.45, 0.55],
     ] as const) {
-      const back = xyToTernary(...ternaryToXY(...s));
+      const back = xyToTernary(...ternaryToXY(s[0], s[1], s[2]));
       expect(back[0] + back[1] + back[2]).toBeCloseTo(1, 12);
       back.forEach((v, i) => expect(v).toBeCloseTo(s[i]!, 12));
     }

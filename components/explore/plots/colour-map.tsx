@@ -3,7 +3,7 @@
 import { useEffect, useId, useMemo, useRef, useState, type KeyboardEvent, type MouseEvent } from "react";
 import type { ExplorationRun, OutputInfo } from "@/lib/explore/types";
 import { figureRange, scaleTable } from "./colour-scale";
-import { axisFactor, outputFactor, outputIndex, statusCounts } from "./display";
+import { axisFactor, inSentence, outputFactor, outputIndex, statusCounts } from "./display";
 import { drawMap } from "./draw-map";
 import { MapAxes } from "./map-axes";
 import { axisPixel, cellOf, cellRect, pointAtPixel, pointOf, type MapLayout } from "./map-layout";
@@ -63,7 +63,7 @@ export function ColourMap({ run, output }: ColourMapProps) {
   if (!ok || !a0 || !a1) {
     return (
       <figure data-testid="colour-map" className="min-w-0">
-        <p className="text-sm text-muted">A colour map needs a sweep of two variables and the figure {output.label.toLowerCase()} in the run.</p>
+        <p className="text-sm text-muted">A colour map needs a sweep of two variables and the figure {inSentence(output.label)} in the run.</p>
       </figure>
     );
   }
@@ -138,7 +138,7 @@ export function ColourMap({ run, output }: ColourMapProps) {
       <p id={readoutId} className="num mt-1 min-h-5 text-xs text-ink" aria-live="polite" data-testid="colour-map-readout">
         {cursor !== null ? pointReadout(run, cursor, [output]) : "Point at a cell, or focus the map and use the arrow keys, to read a point."}
       </p>
-      <MapLegend label={output.label} unit={output.unit} range={shown} counts={counts} revision={Boolean(showBase)} />
+      <MapLegend label={output.label} unit={output.unit} range={shown} counts={counts} revision={Boolean(showBase)} outlines />
     </figure>
   );
 }

@@ -8,11 +8,15 @@ import { POINT_STATUSES, type Axis, type ExplorationRun, type OutputInfo, type P
 const NBSP = "\u00a0";
 
 /**
- * Factor from an axis's stored values to the shown ones: weight fractions and
- * the solids content are stored 0–1 and shown in %, the rest as stored.
+ * Factor from an axis's stored values to the shown ones: the axis's own
+ * `percent` flag when it has one, else weight fractions and the solids content
+ * (stored 0–1) are shown in %, the rest as stored.
  * @example axisFactor({ variable: { kind: "weightFraction", … }, … }) // 100
  */
 export function axisFactor(axis: Axis): number {
+  // The grid may say so itself (an optional `percent` on the axis); else by the variable's kind.
+  const percent = (axis as Axis & { percent?: boolean }).percent;
+  if (percent !== undefined) return percent ? 100 : 1;
   return axis.variable.kind === "weightFraction" || axis.variable.kind === "solidsContent" ? 100 : 1;
 }
 
@@ -35,6 +39,26 @@ export function valueText(value: number, unit: string, digits = 4): string {
   if (!Number.isFinite(value)) return "–";
   const text = sig(value, digits).replace("-", "−");
   return unit ? `${text}${NBSP}${unit}` : text;
+}
+
+/**
+ * A place on an axis with its unit, trailing zeros dropped: "20 wt%", "12.5 °C".
+ * @example placeText(20, "wt%") // "20 wt%"
+ */
+export function placeText(value: number, unit: string, digits = 4): string {
+  if (!Number.isFinite(value)) return "–";
+  const raw = sig(value, digits);
+  const text = (raw.includes(".") ? raw.replace(/0+$/, "").replace(/\.$/, "") : raw).replace("-", "−");
+  return unit ? `${text}${NBSP}${unit}` : text;
+}
+
+/**
+ * A label inside a sentence: first letter lower-cased unless it starts an
+ * abbreviation ("Refractive index" → "refractive index", "VOC" stays).
+ * @example inSentence("Refractive index") // "refractive index"
+ */
+export function inSentence(label: string): string {
+  return /^[A-Z][a-z]/.test(label) ? label.charAt(0).toLowerCase() + label.slice(1) : label;
 }
 
 /** Words for each point status, as the plots and the table print them. */

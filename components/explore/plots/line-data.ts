@@ -54,7 +54,7 @@ export function unitGroups(outputs: OutputInfo[]): UnitGroup[] {
  * neighbouring points; gaps (null) break the line. A point exactly on the level counts once.
  * @example crossings([0, 10, 20], [1.5, 1.58, 1.6], 1.586) // [13]
  */
-export function crossings(xs: readonly number[], ys: readonly (number | null)[], level: number): number[] {
+export function crossings(xs: readonly number[], ys: readonly (number | null | undefined)[], level: number): number[] {
   const out: number[] = [];
   for (let i = 0; i < xs.length - 1; i++) {
     const a = ys[i];

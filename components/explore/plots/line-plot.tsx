@@ -3,7 +3,7 @@
 import { useId, useMemo, useState, type KeyboardEvent } from "react";
 import { CartesianGrid, Label, Line, LineChart, ReferenceArea, ReferenceLine, ResponsiveContainer, XAxis, YAxis } from "recharts";
 import type { ExplorationRun, OutputInfo } from "@/lib/explore/types";
-import { axisFactor, STATUS_WORDS, valueText, withUnit } from "./display";
+import { axisFactor, placeText, STATUS_WORDS, valueText, withUnit } from "./display";
 import { crossings, lineRows, unitGroups } from "./line-data";
 import { BandPatterns, SERIES, SeriesKey } from "./line-parts";
 import { lineSummary, pointReadout, shownRange } from "./summaries";
@@ -20,7 +20,25 @@ export interface LinePlotProps {
 const INK = "#22262a";
 const MUTED = "#5d6268";
 const ACCENT = "#8c4a1f";
-const BAND_WORDS = { caution: "caution", fail: "fails the thermal check", refused: "refused" } as const;
+/** Words inside a band: the full words when they fit, else the short ones, else none (the key below names every band). */
+const BAND_WORDS: Record<string, [string, string]> = { caution: ["caution", "caution"], fail: ["fails the thermal check", "fails"], refused: ["refused", "refused"] };
+
+function bandLabel(status: string) {
+  function BandLabel(props: { viewBox?: unknown }) {
+    const box = props.viewBox as { x?: number; y?: number; width?: number } | undefined;
+    const words = BAND_WORDS[status];
+    if (!box || !words || box.x === undefined || box.y === undefined || box.width === undefined) return <g />;
+    // About 5.5 px a character at 10 px.
+    const text = words.find((w) => w.length * 5.5 + 6 <= box.width!);
+    if (!text) return <g />;
+    return (
+      <text x={box.x + box.width / 2} y={box.y + 12} textAnchor="middle" fontSize={10} fill={INK} stroke="#ffffff" strokeWidth={3} paintOrder="stroke">
+        {text}
+      </text>
+    );
+  }
+  return BandLabel;
+}
 
 /**
  * A one-variable sweep: each figure against the variable, figures of one unit
@@ -53,7 +71,7 @@ export function LinePlot({ run, outputs, reference }: LinePlotProps) {
   const crossAt = reference ? crossings(xs, rows.map((r) => r.y0 ?? null), reference.value) : [];
   const crossText = reference
     ? crossAt.length
-      ? ` ${outputs[0]!.label} crosses ${reference.label} at ${crossAt.map((x) => valueText(x, axis.unit, 3)).join(", ")}.`
+      ? ` ${outputs[0]!.label} crosses ${reference.label} at ${crossAt.map((x) => placeText(x, axis.unit, 3)).join(", ")}.`
       : ` ${outputs[0]!.label} does not cross ${reference.label}.`
     : "";
   const summary = lineSummary(run, outputs, reference) + crossText;
@@ -128,7 +146,7 @@ export function LinePlot({ run, outputs, reference }: LinePlotProps) {
                     {last ? <Label value={withUnit(axis.label, axis.unit)} position="insideBottom" offset={-12} style={{ fontSize: 11, fill: MUTED }} /> : null}
                   </XAxis>
                   <YAxis type="number" domain={yt.domain} ticks={yt.values} tickFormatter={(v: number) => tickText(v, yt.decimals)} tick={{ fontSize: 11, fill: MUTED }} width={64}>
-                    <Label value={g.unit || "value"} angle={-90} position="insideLeft" offset={2} style={{ fontSize: 11, fill: MUTED, textAnchor: "middle" }} />
+                    <Label value={g.members.length === 1 ? withUnit(g.members[0]!.info.label, g.unit) : g.unit || "value"} angle={-90} position="insideLeft" offset={2} style={{ fontSize: 11, fill: MUTED, textAnchor: "middle" }} />
                   </YAxis>
                   {bands.map((b) => (
                     <ReferenceArea
@@ -139,19 +157,17 @@ export function LinePlot({ run, outputs, reference }: LinePlotProps) {
                       fillOpacity={1}
                       ifOverflow="hidden"
                     >
-                      {gi === 0 && b.to - b.from >= (xHigh - xLow) * 0.12 ? (
-                        <Label value={BAND_WORDS[b.status as keyof typeof BAND_WORDS]} position="insideTop" style={{ fontSize: 10, fill: INK }} />
-                      ) : null}
+                      {gi === 0 ? <Label content={bandLabel(b.status)} /> : null}
                     </ReferenceArea>
                   ))}
                   {own && reference ? (
                     <ReferenceLine y={reference.value} stroke={ACCENT} strokeDasharray="8 4" strokeWidth={1.5}>
-                      <Label value={`${reference.label} ${valueText(reference.value, g.unit)}`} position="insideBottomRight" style={{ fontSize: 10, fill: ACCENT }} />
+                      <Label value={`${reference.label} ${valueText(reference.value, g.unit)}`} position="insideBottomLeft" style={{ fontSize: 10, fill: ACCENT }} />
                     </ReferenceLine>
                   ) : null}
                   {baseX !== undefined ? (
                     <ReferenceLine x={baseX} stroke={INK} strokeWidth={1.5} strokeDasharray="1 2">
-                      {gi === 0 ? <Label value={`this revision ${valueText(baseX, axis.unit, 3)}`} position="insideTopLeft" offset={4} style={{ fontSize: 10, fill: INK }} /> : null}
+                      {gi === 0 ? <Label value={`this revision ${placeText(baseX, axis.unit, 3)}`} position="insideTopLeft" offset={4} style={{ fontSize: 10, fill: INK }} /> : null}
                     </ReferenceLine>
                   ) : null}
                   {cursor !== null && rows[cursor] ? <ReferenceLine x={rows[cursor]!.x} stroke={ACCENT} strokeWidth={1} /> : null}

@@ -16,6 +16,8 @@ interface MapLegendProps {
   counts: { caution: number; fail: number; refused: number };
   /** The revision's own point is on the map. */
   revision: boolean;
+  /** The map outlines the caution (dashed) and fail (solid) regions as well as hatching them. */
+  outlines?: boolean;
 }
 
 const BAR_W = 240;
@@ -53,7 +55,7 @@ function Swatch({ fill, children }: { fill: string; children: ReactNode }) {
  * Colour scale bar with its figures and unit, and the key to the overlays
  * (caution hatch, fail cross-hatch, refused dots, the revision's mark).
  */
-export function MapLegend({ label, unit, range, counts, revision }: MapLegendProps) {
+export function MapLegend({ label, unit, range, counts, revision, outlines = false }: MapLegendProps) {
   const id = useId().replace(/:/g, "");
   const ticks = range ? niceTicks(range.min, range.max, 4) : null;
   const span = range ? range.max - range.min : 0;
@@ -97,8 +99,8 @@ export function MapLegend({ label, unit, range, counts, revision }: MapLegendPro
             </pattern>
           </defs>
         </svg>
-        <Swatch fill={`url(#${id}-caution)`}>caution, dashed outline ({counts.caution})</Swatch>
-        <Swatch fill={`url(#${id}-fail)`}>fails the thermal check, solid outline ({counts.fail})</Swatch>
+        <Swatch fill={`url(#${id}-caution)`}>caution{outlines ? ", dashed outline" : ""} ({counts.caution})</Swatch>
+        <Swatch fill={`url(#${id}-fail)`}>fails the thermal check{outlines ? ", solid outline" : ""} ({counts.fail})</Swatch>
         <Swatch fill={`url(#${id}-refused)`}>refused by the engine ({counts.refused})</Swatch>
         {revision ? (
           <span className="inline-flex items-center gap-1.5">

@@ -4,6 +4,7 @@
  * the value each sorts by. Plain TypeScript, no framework.
  */
 import { POINT_STATUSES, type ExplorationRun, type OutputInfo } from "@/lib/explore/types";
+import { stepDecimals } from "./ticks";
 import { axisFactor, outputFactor, outputIndex, pointStatus, STATUS_WORDS, statusSummary, valueText, withUnit } from "./display";
 
 /** One column: its header (with unit), the text of a point's cell and the number it sorts by (NaN last). */
@@ -36,7 +37,10 @@ export function pointColumns(run: ExplorationRun, outputs: OutputInfo[]): PointC
       const f = axisFactor(axis);
       const index = (p: number) => (plan.axes.length === 2 ? (k === 0 ? Math.floor(p / n1) : p % n1) : p);
       const v = (p: number) => (axis.values[index(p)] ?? NaN) * f;
-      cols.push({ id: `axis${k}`, header: withUnit(axis.label, axis.unit), numeric: true, text: (p) => plain(v(p)), sortValue: v });
+      // One number of decimals down the column, enough for every value of the axis.
+      const decimals = Math.min(6, Math.max(0, ...axis.values.map((x) => stepDecimals(Math.abs(x * f)))));
+      const text = (p: number) => (Number.isFinite(v(p)) ? v(p).toFixed(decimals).replace("-", "−") : "–");
+      cols.push({ id: `axis${k}`, header: withUnit(axis.label, axis.unit), numeric: true, text, sortValue: v });
     });
   }
   outputs.forEach((info, j) => {
@@ -87,5 +91,5 @@ export function sortedPoints(count: number, cols: PointColumn[], sorting: { id: 
 /** "Points of the exploration: 21 points, Titania … (wt%) against …; 3 caution." */
 export function tableCaption(run: ExplorationRun, outputs: OutputInfo[]): string {
   const what = outputs.map((o) => withUnit(o.label, o.unit)).join(", ");
-  return `Points of the exploration, one row each: ${run.plan.count} points; ${what || "no figures"}; thermal check in words (${statusSummary(run)}).`;
+  return `Points of the exploration, one row each: ${run.plan.count.toLocaleString("en-GB")} points; ${what || "no figures"}; thermal check in words (${statusSummary(run)}).`;
 }

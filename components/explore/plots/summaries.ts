@@ -5,7 +5,7 @@
  */
 import type { Axis, ExplorationRun, OutputInfo } from "@/lib/explore/types";
 import { figureRange, type FigureRange } from "./colour-scale";
-import { axisFactor, outputFactor, outputIndex, pointStatus, STATUS_WORDS, statusSummary, valueText, withUnit } from "./display";
+import { axisFactor, inSentence, outputFactor, outputIndex, placeText, pointStatus, STATUS_WORDS, statusSummary, valueText, withUnit } from "./display";
 
 /**
  * Range of a figure over the run's points in shown units (×100 for a percent
@@ -28,12 +28,12 @@ export function axisSummary(axis: Axis): string {
   const first = axis.values[0];
   const last = axis.values.at(-1);
   if (first === undefined || last === undefined) return `${axis.label} (no values)`;
-  return `${axis.label} from ${valueText(first * f, axis.unit)} to ${valueText(last * f, axis.unit)} (${axis.values.length} ${axis.values.length === 1 ? "value" : "values"})`;
+  return `${axis.label} from ${placeText(first * f, axis.unit)} to ${placeText(last * f, axis.unit)} (${axis.values.length} ${axis.values.length === 1 ? "value" : "values"})`;
 }
 
 /** "refractive index from 1.48 to 1.59" or "refractive index: no point has a value". */
 export function rangeSummary(info: OutputInfo, range: FigureRange | null): string {
-  const name = info.label.charAt(0).toLowerCase() + info.label.slice(1);
+  const name = inSentence(info.label);
   if (!range) return `${name}: no point has a value`;
   if (range.min === range.max) return `${name} ${valueText(range.min, info.unit)} at every point`;
   return `${name} from ${valueText(range.min, info.unit)} to ${valueText(range.max, info.unit)}`;
@@ -44,9 +44,9 @@ function baseSummary(run: ExplorationRun): string {
   if (!plan.base) return "this revision lies outside the ranges";
   if (plan.ternary) {
     const t = plan.ternary;
-    return `this revision at ${t.labels.map((l, k) => `${l} ${valueText((plan.base![k] ?? NaN) * 100, "%", 3)}`).join(", ")}`;
+    return `this revision at ${t.labels.map((l, k) => `${l} ${placeText((plan.base![k] ?? NaN) * 100, "%", 3)}`).join(", ")}`;
   }
-  return `this revision at ${plan.axes.map((a, k) => `${a.label} ${valueText((plan.base![k] ?? NaN) * axisFactor(a), a.unit)}`).join(", ")}`;
+  return `this revision at ${plan.axes.map((a, k) => `${a.label} ${placeText((plan.base![k] ?? NaN) * axisFactor(a), a.unit)}`).join(", ")}`;
 }
 
 /**
@@ -59,7 +59,7 @@ export function lineSummary(run: ExplorationRun, outputs: OutputInfo[], referenc
   const against = axis ? axisSummary(axis) : "no variable";
   const ranges = outputs.map((o) => rangeSummary(o, shownRange(run, o))).join("; ");
   const ref = reference ? `; reference line ${reference.label} at ${valueText(reference.value, outputs[0]?.unit ?? "")}` : "";
-  return `Line plot of ${outputs.map((o) => o.label.toLowerCase()).join(", ")} against ${against}: ${ranges}${ref}; ${statusSummary(run)}; ${baseSummary(run)}.`;
+  return `Line plot of ${outputs.map((o) => inSentence(o.label)).join(", ")} against ${against}: ${ranges}${ref}; ${statusSummary(run)}; ${baseSummary(run)}.`;
 }
 
 /**
@@ -69,7 +69,7 @@ export function lineSummary(run: ExplorationRun, outputs: OutputInfo[], referenc
 export function mapSummary(run: ExplorationRun, info: OutputInfo): string {
   const [a0, a1] = run.plan.axes;
   const over = a0 && a1 ? `${axisSummary(a0)} across and ${axisSummary(a1)} up` : "no variables";
-  return `Colour map of ${info.label.toLowerCase()} over ${over}, ${run.plan.count} points: ${rangeSummary(info, shownRange(run, info))}; ${statusSummary(run)}; ${baseSummary(run)}.`;
+  return `Colour map of ${inSentence(info.label)} over ${over}, ${run.plan.count.toLocaleString("en-GB")} points: ${rangeSummary(info, shownRange(run, info))}; ${statusSummary(run)}; ${baseSummary(run)}.`;
 }
 
 /**
@@ -78,8 +78,8 @@ export function mapSummary(run: ExplorationRun, info: OutputInfo): string {
  */
 export function ternarySummary(run: ExplorationRun, info: OutputInfo): string {
   const t = run.plan.ternary;
-  const over = t ? `${t.labels.join(", ").replace(/, ([^,]*)$/, " and $1")} (shares of their ${valueText(t.total * 100, "wt%", 3)} total)` : "no components";
-  return `Ternary map of ${info.label.toLowerCase()} over ${over}, ${run.plan.count} points: ${rangeSummary(info, shownRange(run, info))}; ${statusSummary(run)}; ${baseSummary(run)}.`;
+  const over = t ? `${t.labels.join(", ").replace(/, ([^,]*)$/, " and $1")} (shares of their ${placeText(t.total * 100, "wt%", 3)} total)` : "no components";
+  return `Ternary map of ${inSentence(info.label)} over ${over}, ${run.plan.count.toLocaleString("en-GB")} points: ${rangeSummary(info, shownRange(run, info))}; ${statusSummary(run)}; ${baseSummary(run)}.`;
 }
 
 /** The variables of point p in words: "Titania 12 wt%, water ratio 4" or ternary shares. */
@@ -87,15 +87,15 @@ export function pointPlace(run: ExplorationRun, p: number): string {
   const { plan } = run;
   if (plan.ternary) {
     const t = plan.ternary;
-    return t.labels.map((l, k) => `${l} ${valueText((t.shares[3 * p + k] ?? NaN) * 100, "%", 3)} (${valueText((t.shares[3 * p + k] ?? NaN) * t.total * 100, "wt%", 3)})`).join(", ");
+    return t.labels.map((l, k) => `${l} ${placeText((t.shares[3 * p + k] ?? NaN) * 100, "%", 3)} (${placeText((t.shares[3 * p + k] ?? NaN) * t.total * 100, "wt%", 3)})`).join(", ");
   }
   if (plan.axes.length === 2) {
     const n1 = plan.axes[1]!.values.length;
     const idx = [Math.floor(p / n1), p % n1];
-    return plan.axes.map((a, k) => `${a.label} ${valueText((a.values[idx[k]!] ?? NaN) * axisFactor(a), a.unit)}`).join(", ");
+    return plan.axes.map((a, k) => `${a.label} ${placeText((a.values[idx[k]!] ?? NaN) * axisFactor(a), a.unit)}`).join(", ");
   }
   const a = plan.axes[0];
-  return a ? `${a.label} ${valueText((a.values[p] ?? NaN) * axisFactor(a), a.unit)}` : `point ${p + 1}`;
+  return a ? `${a.label} ${placeText((a.values[p] ?? NaN) * axisFactor(a), a.unit)}` : `point ${p + 1}`;
 }
 
 /**

@@ -3,7 +3,7 @@
 import { useEffect, useId, useMemo, useRef, useState, type KeyboardEvent, type MouseEvent } from "react";
 import type { ExplorationRun, OutputInfo } from "@/lib/explore/types";
 import { figureRange, scaleTable } from "./colour-scale";
-import { outputFactor, outputIndex, statusCounts } from "./display";
+import { inSentence, outputFactor, outputIndex, statusCounts } from "./display";
 import { drawTernary, ternaryPixel, type TernaryLayout } from "./draw-ternary";
 import { MapLegend, RevisionMark } from "./map-legend";
 import { prepareCanvas } from "./overlay-patterns";
@@ -72,7 +72,7 @@ export function TernaryMap({ run, output }: TernaryMapProps) {
   if (!t || !values) {
     return (
       <figure data-testid="ternary-map" className="min-w-0">
-        <p className="text-sm text-muted">A ternary map needs a ternary grid and the figure {output.label.toLowerCase()} in the run.</p>
+        <p className="text-sm text-muted">A ternary map needs a ternary grid and the figure {inSentence(output.label)} in the run.</p>
       </figure>
     );
   }
@@ -119,7 +119,7 @@ export function TernaryMap({ run, output }: TernaryMapProps) {
       className="min-w-0"
     >
       <figcaption className="mb-1 text-xs font-semibold text-muted">
-        {mapCaption(run, output)}: shares of their {(t.total * 100).toPrecision(3)} wt% together, in %
+        {mapCaption(run, output)}, in % of the {(t.total * 100).toPrecision(3)} wt% they share
       </figcaption>
       <div
         ref={boxRef}
