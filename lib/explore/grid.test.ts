@@ -1,3 +1,4 @@
+import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { isPlanError, planGrid, rangeValues, ternaryShares } from "./grid";
 import type { Grid, Variable } from "./spec";
@@ -73,6 +74,29 @@ describe("planGrid", () => {
     expect(h.axes[0]!.label).toContain("Water ratio h");
   });
 
+  it("never passes `to`, steps by `step`, and counts what it lists (property)", () => {
+    fc.assert(
+      fc.property(fc.double({ min: -200, max: 4000, noNaN: true }), fc.double({ min: -200, max: 4000, noNaN: true }), fc.double({ min: 1e-3, max: 5000, noNaN: true }), (from, to, step) => {
+        const result = planGrid(sweep({ kind: "stepTemperature", index: 3, from, to, step }), base);
+        if (isPlanError(result)) {
+          expect(result.field.startsWith("grid.variables.0")).toBe(true);
+          return;
+        }
+        const values = result.axes[0]!.values;
+        expect(result.count).toBe(values.length);
+        expect(result.count).toBeLessThanOrEqual(20_000);
+        expect(values[0]).toBe(from);
+        const lo = Math.min(from, to);
+        const hi = Math.max(from, to);
+        for (const v of values) expect(v >= lo && v <= hi).toBe(true);
+        for (let i = 1; i < values.length; i++) expect(Math.abs(Math.abs(values[i]! - values[i - 1]!) - step)).toBeLessThanOrEqual(1e-9 * Math.max(step, Math.abs(to)));
+        // one more step would pass `to`
+        expect(Math.abs(values[values.length - 1]! - from) + step).toBeGreaterThan(Math.abs(to - from) * (1 + 1e-12));
+      }),
+      { numRuns: 1000 },
+    );
+  });
+
   it("leaves out the revision's mark when its value lies outside the range", () => {
     expect(plan(sweep(titania(0.1, 0.2, 0.05))).base).toBeUndefined();
   });
@@ -133,6 +157,7 @@ describe("planGrid", () => {
       // exactly at the cap is allowed: 200 × 100
       expect(plan(sweep({ kind: "waterRatio", from: 0.01, to: 2, step: 0.01 }, { kind: "stepTemperature", index: 3, from: 1, to: 100, step: 1 })).count).toBe(20_000);
       expect(refusal({ kind: "ternary", materialIds: ["gptms", "teos", "ti-isopropoxide"], step: 0.005 }).field).toBe("grid.step");
+      expect(refusal(sweep(titania(0, 1, 1e-300))).message).toBe("this grid would compute more than 1,000,000,000,000 points; at most 20,000 — widen the step or narrow the range");
     });
 
     it("refuses a weight fraction outside 0–1", () => {

@@ -27,7 +27,7 @@ const fmt = (n: number): string => n.toLocaleString("en", { maximumFractionDigit
 function tooMany(count: number, field: string): PlanError {
   return {
     field,
-    message: `this grid would compute ${fmt(count)} points; at most ${fmt(EXPLORE_MAX_POINTS)} — widen the step or narrow the range`,
+    message: `this grid would compute ${count > 1e12 ? `more than ${fmt(1e12)}` : fmt(count)} points; at most ${fmt(EXPLORE_MAX_POINTS)} — widen the step or narrow the range`,
   };
 }
 

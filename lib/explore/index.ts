@@ -10,5 +10,6 @@ export { planGrid, isPlanError, rangeCount, rangeValues, ternaryShares } from ".
 export { pointInput, isPointRefusal, type PointRefusal } from "./apply";
 export { outputCatalogue, outputInfo, outputValue, outputReader, SCALAR_FIGURE_KEYS, type OutputReader, type ScalarFigureKey } from "./outputs";
 export { bestCandidates, pointValues, searchOutputs } from "./search";
-export { runExploration, runExplorationSync, abortError, DEFAULT_CHUNK, type RunOptions, type AsyncRunOptions } from "./run";
+export { runExploration, runExplorationSync, planAndRun, abortError, DEFAULT_CHUNK, type RunOptions, type AsyncRunOptions } from "./run";
 export { variableLabel, materialName, shownValue } from "./labels";
+export { explorationRows, refusalWords, NUMERIC_PATH_NOTE, STATUS_WORDS, type ExplorationExport, type ExplorationRows, type ExportCell } from "./rows";

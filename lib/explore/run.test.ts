@@ -73,6 +73,16 @@ describe("runExplorationSync", () => {
   });
 });
 
+describe("film thickness along a withdrawal-speed sweep", () => {
+  it("grows as U^(2/3) (Landau–Levich, Acta Physicochim. URSS 17 (1942) 42)", () => {
+    // h_wet = 0.94 (ηU)^(2/3) / (γ^(1/6) (ρg)^(1/2)); the sol is the same at every speed, so h(4)/h(1) = 4^(2/3)
+    const p = plan({ kind: "sweep", variables: [{ kind: "withdrawalSpeed", from: 1, to: 4, step: 3 }] });
+    const run = runExplorationSync({ base, plan: p, outputs: ["wetThicknessUm", "dryThicknessNm"], model });
+    expect(run.values[0]![1]! / run.values[0]![0]!).toBeCloseTo(4 ** (2 / 3), 10);
+    expect(run.values[1]![1]! / run.values[1]![0]!).toBeCloseTo(4 ** (2 / 3), 10);
+  });
+});
+
 describe("thermal verdicts along a cure-temperature sweep", () => {
   it("never gets better as the cure gets hotter, and is clear well below the substrate's limit", () => {
     // A hotter cure of the same coat on the same substrate is never safer (common practice, no source).
@@ -121,11 +131,21 @@ describe("runExploration", () => {
   it("yields to the event loop between chunks, so a message (a cancel) can arrive mid-run", async () => {
     const controller = new AbortController();
     let evaluated = 0;
-    const counting: NumericModel = { evaluate: (input) => (evaluated++, model.evaluate(input)) };
+    // each point takes at least 2 ms, 60 points at least 120 ms: a timer set for 0 ms fires long before the end
+    const slow: NumericModel = {
+      evaluate: (input) => {
+        evaluated++;
+        const until = performance.now() + 2;
+        while (performance.now() < until);
+        return model.evaluate(input);
+      },
+    };
+    const long = plan({ kind: "sweep", variables: [{ kind: "waterRatio", from: 0.5, to: 6.4, step: 0.1 }] });
+    expect(long.count).toBe(60);
     setTimeout(() => controller.abort(), 0);
-    await expect(runExploration({ base, plan: titaniaSweep, outputs: ["refractiveIndex"], model: counting, chunk: 1, signal: controller.signal })).rejects.toMatchObject({ name: "AbortError" });
+    await expect(runExploration({ base, plan: long, outputs: ["effectiveR"], model: slow, chunk: 1, signal: controller.signal })).rejects.toMatchObject({ name: "AbortError" });
     expect(evaluated).toBeGreaterThan(0);
-    expect(evaluated).toBeLessThan(11);
+    expect(evaluated).toBeLessThan(60);
   });
 
   it("rejects at once when already aborted", async () => {

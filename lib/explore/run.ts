@@ -7,10 +7,11 @@
 import type { FormulationInput } from "../formulation/input-schema";
 import type { NumericModel } from "../formulation/numeric/figures";
 import { isPointRefusal, pointInput } from "./apply";
+import { isPlanError, planGrid } from "./grid";
 import { outputReader, type OutputReader } from "./outputs";
 import { bestCandidates, searchOutputs } from "./search";
-import type { OutputKey, Search } from "./spec";
-import { POINT_STATUSES, type ExplorationRun, type GridPlan } from "./types";
+import type { Grid, OutputKey, Search } from "./spec";
+import { POINT_STATUSES, type ExplorationRun, type GridPlan, type PlanError } from "./types";
 
 /** What a run needs. */
 export interface RunOptions {
@@ -159,4 +160,21 @@ export async function runExploration(options: AsyncRunOptions): Promise<Explorat
   } finally {
     tasks.close();
   }
+}
+
+/**
+ * Plans a stored grid over a revision and runs it at once: what an export route needs to turn a saved
+ * exploration (grid, outputs, search) back into rows. A grid that can no longer be planned over the
+ * revision gives its PlanError.
+ *
+ * @example
+ * ```ts
+ * const run = planAndRun({ base: revision.input, grid: saved.grid, outputs: saved.outputs, search: saved.search, model: decimalModel(revision.input.materials) });
+ * if ("message" in run) return Response.json({ field: run.field, message: run.message }, { status: 422 });
+ * ```
+ */
+export function planAndRun(options: Omit<RunOptions, "plan"> & { grid: Grid }): ExplorationRun | PlanError {
+  const plan = planGrid(options.grid, options.base);
+  if (isPlanError(plan)) return plan;
+  return runExplorationSync({ ...options, plan });
 }

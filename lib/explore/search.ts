@@ -5,6 +5,13 @@
 import { SEARCH_CANDIDATES, type Candidate, type OutputKey, type Search } from "./spec";
 import { POINT_STATUSES, type ExplorationRun, type GridPlan } from "./types";
 
+/**
+ * Significant digits at which objective figures are compared: figures equal but for float64 noise
+ * (the numeric path agrees with the decimal engine within 1e-9 relative) tie and keep the point order,
+ * so both paths list the same candidates.
+ */
+export const RANK_DIGITS = 9;
+
 /** Highest status index each thermal allowance admits (clear 0, caution 1, fail 2; refused 3 never). */
 const ALLOWED: Record<Search["thermal"], number> = { clear: 0, caution: 1, any: 2 };
 
@@ -38,7 +45,7 @@ export function searchOutputs(search: Search): OutputKey[] {
  * The best points of a run for a search: a point qualifies when its thermal status is allowed
  * ("clear" only; "caution": clear or caution; "any": all but refused points) and every constraint's
  * figure lies within its min/max (NaN fails). Ranked by the objective: lowest, highest, or smallest
- * |value − target| for "closest"; ties keep the points' order. At most SEARCH_CANDIDATES. A candidate's
+ * |value − target| for "closest", figures compared at RANK_DIGITS significant digits; ties keep the points' order. At most SEARCH_CANDIDATES. A candidate's
  * `score` is the objective's figure at its point (for "closest", the figure itself, not the distance).
  * Figures read outputs the run did not compute as NaN (so nothing qualifies): runExploration appends
  * the search's outputs for that reason.
@@ -60,7 +67,10 @@ export function bestCandidates(run: ExplorationRun, search: Search): Candidate[]
   const objective = column(search.objective.output);
   if (!objective || limits.some((l) => !l.values)) return [];
   const goal = search.objective;
-  const rank = (v: number): number => (goal.goal === "min" ? v : goal.goal === "max" ? -v : Math.abs(v - goal.value));
+  const rank = (figure: number): number => {
+    const v = Number(figure.toPrecision(RANK_DIGITS));
+    return goal.goal === "min" ? v : goal.goal === "max" ? -v : Math.abs(v - goal.value);
+  };
   const allowed = ALLOWED[search.thermal];
 
   // A short list kept sorted by rank; a later point with an equal rank goes after the earlier one.

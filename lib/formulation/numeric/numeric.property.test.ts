@@ -9,7 +9,8 @@
  */
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { formulationInputSchema, type FormulationInput } from "../input-schema";
+import type { FormulationInput } from "../input-schema";
+import { parseFormulationInput } from "../validate";
 import { figuresDifference, SCALAR_FIGURES, type ScalarFigure } from "./compare";
 import { decimalModel, type NumericFigures, type NumericOutcome } from "./figures";
 import { numericModel } from "./model";
@@ -20,6 +21,16 @@ const TOLERANCE = 1e-9;
 
 /** The figures compared: all, or all but the coat figures while the coat path is not wired in. */
 const COMPARED: readonly ScalarFigure[] = numericCoatHook ? SCALAR_FIGURES : SCALAR_FIGURES.filter((key) => !COAT_FIGURES.includes(key));
+
+/** True when the input schema accepts the input (the numeric path takes valid inputs only). */
+function isValid(input: FormulationInput): boolean {
+  try {
+    parseFormulationInput(input);
+    return true;
+  } catch {
+    return false;
+  }
+}
 
 /** The input without the materials' texts, for a failure message. */
 function describeInput(input: FormulationInput): string {
@@ -48,15 +59,15 @@ describe("numeric path vs the decimal engine", () => {
     let refused = 0;
     fc.assert(
       fc.property(formulationInputs, (input) => {
-        if (!formulationInputSchema.safeParse(input).success) return;
+        if (!isValid(input)) return;
         valid += 1;
         if (!agree(input).decimal.ok) refused += 1;
       }),
-      { numRuns: 4000 },
+      { numRuns: 2000 },
     );
     // The generator must mostly give valid inputs, and some the engine refuses.
-    expect(valid).toBeGreaterThan(2500);
+    expect(valid).toBeGreaterThan(1600);
     expect(refused).toBeGreaterThan(20);
-    expect(refused).toBeLessThan(valid / 2);
+    expect(refused).toBeLessThan(valid / 4);
   });
 });

@@ -83,10 +83,16 @@ const coating: fc.Arbitrary<CoatingSpec> = fc.oneof(
   fc.record({ method: fc.constant("wetFilm" as const), wetThicknessUm: double(1, 200) }),
 );
 
+/** `value` in `weight` of `outOf` draws, undefined in the others. */
+function rarely<T>(value: fc.Arbitrary<T>, weight: number, outOf: number): fc.Arbitrary<T | undefined> {
+  return fc.oneof({ arbitrary: value, weight }, { arbitrary: fc.constant(undefined), weight: outOf - weight });
+}
+
 /** Drops a property from one material now and then, so that the engine refuses (missing density, molar mass …). */
-const damage = fc.option(
+const damage = rarely(
   fc.record({ slot: fc.nat(), property: fc.constantFrom("density" as const, "molarMass" as const, "phaseDensity" as const, "precursor" as const) }),
-  { nil: undefined, freq: 12 },
+  1,
+  12,
 );
 
 /**
@@ -119,8 +125,9 @@ export const formulationInputs: fc.Arbitrary<FormulationInput> = fc
     substrate: fc.option(fc.constantFrom(...SUBSTRATES), { nil: undefined }),
     steps: fc.array(step, { minLength: 0, maxLength: 3 }),
     marginC: fc.option(double(0, 100), { nil: undefined }),
-    bulk: fc.option(double(0.05, 4), { nil: undefined, freq: 4 }),
+    bulk: rarely(double(0.05, 4), 1, 3),
     coating: fc.option(coating, { nil: undefined }),
+    prices: rarely(fc.array(double(0.5, 500), { minLength: 1, maxLength: 4 }), 1, 3),
     damage,
   })
   .map((r): FormulationInput => {
@@ -136,11 +143,17 @@ export const formulationInputs: fc.Arbitrary<FormulationInput> = fc
     if (r.solvent) wanted.add(r.solvent.id);
     if (r.catalyst) wanted.add(r.catalyst.id);
     if (r.substrate) wanted.add(r.substrate);
-    const materials: Material[] = [...wanted].map((id) => referenceMaterial(id));
+    // The sources' texts never enter the arithmetic; without them validation is quicker.
+    const materials: Material[] = [...wanted].map((id, i) => {
+      const material: Material = { ...referenceMaterial(id) };
+      delete material.sources;
+      return r.prices ? { ...material, pricePerKg: r.prices[i % r.prices.length]! } : material;
+    });
     if (r.damage) {
       const index = r.damage.slot % materials.length;
-      const { [r.damage.property]: _dropped, ...rest } = materials[index]!;
-      materials[index] = rest as Material;
+      const damaged: Material = { ...materials[index]! };
+      delete damaged[r.damage.property];
+      materials[index] = damaged;
     }
     const fill = r.solvent?.fill === true && r.basis.type !== "solidMass";
     return {
