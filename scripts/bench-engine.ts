@@ -8,50 +8,14 @@
  * Target: ≤ 0.2 ms per call for 10 components.
  */
 import { performance } from "node:perf_hooks";
-import { referenceMaterial } from "../data/materials";
 import { computeFormulation, type FormulationInput, type Material } from "../lib/formulation";
+import { makeInput } from "./bench-input";
 
 const TARGET_MS_AT_10 = 0.2;
 const WARMUP_CALLS = 500;
 /** Calls per round; the figure reported is the lowest of the rounds' medians, to damp the effect of other load on the machine. */
 const CALLS_PER_ROUND = 2000;
 const ROUNDS = 5;
-
-/** A formulation with n components: n − 1 precursor copies and one organic phase (n ≥ 2). */
-function makeInput(n: number): FormulationInput {
-  const bases = ["teos", "gptms", "mtes", "ti-isopropoxide", "zr-propoxide-70", "triethyl-phosphate"].map(referenceMaterial);
-  const precursors: Material[] = [];
-  for (let i = 0; i < n - 1; i += 1) {
-    const base = bases[i % bases.length] as Material;
-    precursors.push({ ...base, id: `${base.id}-${i}`, name: `${base.name} #${i}` });
-  }
-  const organic = referenceMaterial("peg-2000");
-  const share = 1 / n;
-  return {
-    materials: [
-      ...precursors,
-      organic,
-      referenceMaterial("ethanol"),
-      referenceMaterial("water-di"),
-      referenceMaterial("hcl-37"),
-      referenceMaterial("polycarbonate"),
-    ],
-    basis: { type: "solidsContent", solMassGrams: 500, solidsFraction: 0.15 },
-    components: [
-      ...precursors.map((material) => ({ materialId: material.id, weightFraction: share })),
-      { materialId: organic.id, weightFraction: 1 - share * (n - 1) },
-    ],
-    water: { materialId: "water-di", ratio: "R", value: 4 },
-    solvent: { materialId: "ethanol", mode: "fill" },
-    catalyst: { materialId: "hcl-37", molPerNetworkAtom: 0.01 },
-    substrateId: "polycarbonate",
-    steps: [
-      { name: "Hydrolysis", temperatureC: 25, durationH: 2 },
-      { name: "Drying", temperatureC: 60, durationH: 1 },
-      { name: "Cure", temperatureC: 110, durationH: 2 },
-    ],
-  };
-}
 
 /**
  * The same core arithmetic with plain numbers: per-component amounts, water

@@ -24,6 +24,7 @@ export FAKE_S3_PORT=4580 S3_ENDPOINT="http://127.0.0.1:4580"
 start_fake_s3 "$FAKE_S3_PORT" "$ROOT/.data/s3-bench" "$ROOT/.data/bench-fake-s3.pid"
 npx tsx db/migrate.ts && npx tsx db/seed.ts && npx tsx scripts/bench-data.ts 10000
 echo; npx tsx scripts/bench-engine.ts
+echo; npx tsx scripts/bench-explore.ts
 npx tsx scripts/bench-import.ts
 npx next build >"$ROOT/.data/bench-build.log"
 GELWRIGHT_RATE_LIMIT=off setsid npx tsx scripts/server.ts -H localhost -p 3120 >"$ROOT/.data/bench-app.log" 2>&1 &

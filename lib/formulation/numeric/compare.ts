@@ -45,15 +45,20 @@ export const SCALAR_FIGURES = [
 /** A scalar figure's key. */
 export type ScalarFigure = (typeof SCALAR_FIGURES)[number];
 
-/** Differences below this are taken as 0 (values near 0: a relative error means nothing there). */
-export const ABSOLUTE_FLOOR = 1e-12;
+/**
+ * The smallest scale a difference is measured against: values near 0 have no meaningful relative
+ * error, so |a − b| ≤ 1e-9 · 1e-3 = 1e-12 passes the 1e-9 bound whatever a and b are.
+ */
+export const SCALE_FLOOR = 1e-3;
 
 /**
- * |a − b| / max(|a|, |b|), 0 when both are NaN or |a − b| ≤ 1e-12, Infinity when only one is NaN.
+ * |a − b| / max(|a|, |b|, 1e-3): 0 when both are NaN, Infinity when only one is. At most 1e-9 exactly
+ * when |a − b| ≤ 1e-9 · max(|a|, |b|) or |a − b| ≤ 1e-12.
  *
  * @example
  * ```ts
  * relativeDifference(1, 1 + 1e-12); // ≈ 1e-12
+ * relativeDifference(1e-20, 2e-20); // 1e-17 (near 0: measured against 1e-3)
  * relativeDifference(Number.NaN, 0); // Infinity
  * ```
  */
@@ -62,9 +67,7 @@ export function relativeDifference(a: number, b: number): number {
   const bNaN = Number.isNaN(b);
   if (aNaN || bNaN) return aNaN && bNaN ? 0 : Number.POSITIVE_INFINITY;
   if (a === b) return 0;
-  const difference = Math.abs(a - b);
-  if (difference <= ABSOLUTE_FLOOR) return 0;
-  return difference / Math.max(Math.abs(a), Math.abs(b));
+  return Math.abs(a - b) / Math.max(Math.abs(a), Math.abs(b), SCALE_FLOOR);
 }
 
 /** The largest difference between two figures objects and where it is. */

@@ -24,7 +24,11 @@ export interface PointPhase {
   share: number;
 }
 
-/** The running state of one point: lines, phases and the sums the water, solvent and sol figures start from. */
+/**
+ * The running state of one point: lines, phases and the sums the water, solvent and sol figures start
+ * from. One per model, reset for every point (a model evaluates one point at a time), so that a point
+ * allocates only its lines and phases.
+ */
 export interface PointState {
   lines: NumericLine[];
   /** The table row of each line (same order as lines). */
@@ -45,7 +49,58 @@ export interface PointState {
   /** Per table position: mol of precursor molecules and of network atoms (NaN when not a component). */
   precursorMoles: Float64Array;
   precursorAtoms: Float64Array;
+  /** Scratch: the table position of each component, and the component ids they were found for. */
+  positions: Int32Array;
+  positionIds: string[];
 }
+
+/**
+ * A fresh state for a model over `table`.
+ *
+ * @example
+ * ```ts
+ * const state = pointState(table);
+ * composePoint(input, table, 10, state);
+ * ```
+ */
+export function pointState(table: MaterialTable): PointState {
+  const count = table.materials.length;
+  return {
+    lines: [],
+    rows: [],
+    phases: [],
+    subjects: [],
+    conversionsC: [],
+    alcoholMol: new Float64Array(table.alcohols.length),
+    alcoholOrder: [],
+    solidMass: 0,
+    networkAtomMol: 0,
+    groupMol: 0,
+    carriedWaterMol: 0,
+    precursorMoles: new Float64Array(count),
+    precursorAtoms: new Float64Array(count),
+    positions: new Int32Array(8),
+    positionIds: [],
+  };
+}
+
+/** Table positions of the components, looked up again only when the component ids change. */
+function componentPositions(input: FormulationInput, table: MaterialTable, state: PointState): Int32Array {
+  const components = input.components;
+  const n = components.length;
+  let same = state.positionIds.length === n;
+  for (let i = 0; same && i < n; i += 1) same = state.positionIds[i] === components[i]!.materialId;
+  if (same) return state.positions;
+  if (state.positions.length < n) state.positions = new Int32Array(n);
+  state.positionIds.length = 0;
+  for (let i = 0; i < n; i += 1) {
+    state.positions[i] = positionOf(table, components[i]!.materialId, `components.${i}.materialId`);
+    state.positionIds.push(components[i]!.materialId);
+  }
+  return state.positions;
+}
+
+const NO_PLANS: readonly Plan[] = [];
 
 interface Plan {
   row: TableMaterial;
@@ -88,56 +143,53 @@ function planModifiers(input: FormulationInput, table: MaterialTable): Plan[] {
  * @param input - a valid input
  * @param table - the model's materials
  * @param solidMass - S, g (from the basis)
- * @returns the point's state after the components and modifiers
+ * @param state - the model's state, reset here
+ * @returns the state, after the components and modifiers
  * @example
  * ```ts
- * composePoint(input, table, 10).networkAtomMol; // 10 / 60.083 mol Si for 10 g of silica from TEOS
+ * composePoint(input, table, 10, pointState(table)).networkAtomMol; // 10 / 60.083 mol Si for 10 g of silica from TEOS
  * ```
  */
-export function composePoint(input: FormulationInput, table: MaterialTable, solidMass: number): PointState {
+export function composePoint(input: FormulationInput, table: MaterialTable, solidMass: number, state: PointState): PointState {
   const components = input.components;
   const n = components.length;
   let floatSum = 0;
   for (let i = 0; i < n; i += 1) floatSum += components[i]!.weightFraction;
   const exact = Math.abs(floatSum - 1) <= 1e-12;
-  const positions = new Int32Array(n);
-  for (let i = 0; i < n; i += 1) positions[i] = positionOf(table, components[i]!.materialId, `components.${i}.materialId`);
-  const fraction = (i: number): number => (exact ? components[i]!.weightFraction : components[i]!.weightFraction / floatSum);
+  // Within 1e-12 of 1 the fractions are used as they are, else scaled to sum to 1 (as compute.ts does).
+  const positions = componentPositions(input, table, state);
 
-  const plans = input.modifiers && input.modifiers.length > 0 ? planModifiers(input, table) : [];
+  const plans = input.modifiers && input.modifiers.length > 0 ? planModifiers(input, table) : NO_PLANS;
   // c = Σ Δm / S_free over the bonded ligands; S_free = S / (1 + c).
   let c = 0;
   for (const plan of plans) {
     if (!plan.bonded) continue;
     const p = table.materials[plan.precursorIndex]!.precursor!;
     let w = 0;
-    for (let i = 0; i < n; i += 1) if (positions[i] === plan.precursorIndex) w = fraction(i);
+    for (let i = 0; i < n; i += 1) if (positions[i] === plan.precursorIndex) w = exact ? components[i]!.weightFraction : components[i]!.weightFraction / floatSum;
     c += plan.x * (p.networkAtomsPerMolecule / (p.residuePerMolecule * p.residueMolarMass)) * w * plan.row.material.modifier!.bondedMolarMass;
   }
   const freeMass = c === 0 ? solidMass : solidMass / (c + 1);
   const share = c === 0 ? 1 : freeMass / solidMass;
 
-  const count = table.materials.length;
-  const state: PointState = {
-    lines: [],
-    rows: [],
-    phases: [],
-    subjects: [],
-    conversionsC: [],
-    alcoholMol: new Float64Array(table.alcohols.length),
-    alcoholOrder: [],
-    solidMass,
-    networkAtomMol: 0,
-    groupMol: 0,
-    carriedWaterMol: 0,
-    precursorMoles: new Float64Array(count).fill(Number.NaN),
-    precursorAtoms: new Float64Array(count).fill(Number.NaN),
-  };
+  state.lines.length = 0;
+  state.rows.length = 0;
+  state.phases.length = 0;
+  state.subjects.length = 0;
+  state.conversionsC.length = 0;
+  state.alcoholMol.fill(0);
+  state.alcoholOrder.length = 0;
+  state.solidMass = solidMass;
+  state.networkAtomMol = 0;
+  state.groupMol = 0;
+  state.carriedWaterMol = 0;
+  state.precursorMoles.fill(Number.NaN);
+  state.precursorAtoms.fill(Number.NaN);
   let groups = 0;
   for (let i = 0; i < n; i += 1) {
     const position = positions[i]!;
     const row = table.materials[position]!;
-    const w = fraction(i);
+    const w = exact ? components[i]!.weightFraction : components[i]!.weightFraction / floatSum;
     const phaseFraction = c === 0 ? w : w * share;
     const present = w !== 0;
     const residueGrams = w * freeMass;

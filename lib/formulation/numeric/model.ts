@@ -10,7 +10,7 @@ import { DEFAULT_THERMAL_MARGIN_C, MIN_LINE_GRAMS, ML_PER_L, WATER_MOLAR_MASS_G_
 import type { FormulationInput } from "../input-schema";
 import type { Material } from "../material-schema";
 import { numericCoatHook, type CoatHook } from "./coat-hook";
-import { composePoint, type PointState } from "./composition";
+import { composePoint, pointState, type PointState } from "./composition";
 import type { NumericCoatFigures } from "./context";
 import type { NumericFigures, NumericModel, NumericOutcome, NumericPhase } from "./figures";
 import { numericFill } from "./fill";
@@ -183,9 +183,9 @@ function shrinkageOf(ratio: number): { linear: number; volumetric: number } {
   return { volumetric: 1 - ratio, linear: 1 - Math.cbrt(ratio) };
 }
 
-function evaluatePoint(input: FormulationInput, table: MaterialTable, coat: CoatHook | undefined): NumericFigures {
+function evaluatePoint(input: FormulationInput, table: MaterialTable, state: PointState, coat: CoatHook | undefined): NumericFigures {
   const solidMass = solidMassOf(input.basis);
-  const state = composePoint(input, table, solidMass);
+  composePoint(input, table, solidMass, state);
   const l = liquids(input, table, state);
   const { solMass, solVolume } = l;
 
@@ -263,7 +263,20 @@ function evaluatePoint(input: FormulationInput, table: MaterialTable, coat: Coat
     solventMolPerNetworkAtom: l.solventMolPerNetworkAtom,
     thermalStatus: thermal.status,
     maxAllowedC: thermal.maxAllowedC,
-    ...coatFigures,
+    wetThicknessUm: coatFigures.wetThicknessUm,
+    dryThicknessNm: coatFigures.dryThicknessNm,
+    coverageM2PerL: coatFigures.coverageM2PerL,
+    capillaryNumber: coatFigures.capillaryNumber,
+    refractiveIndex: coatFigures.refractiveIndex,
+    indexMismatch: coatFigures.indexMismatch,
+    vocMassGrams: coatFigures.vocMassGrams,
+    vocGramsPerLitre: coatFigures.vocGramsPerLitre,
+    vocGramsPerLitreLessWater: coatFigures.vocGramsPerLitreLessWater,
+    cureRatio: coatFigures.cureRatio,
+    costTotal: coatFigures.costTotal,
+    costPerKgDry: coatFigures.costPerKgDry,
+    costPerLitreSol: coatFigures.costPerLitreSol,
+    costPerM2: coatFigures.costPerM2,
   };
 }
 
@@ -285,10 +298,11 @@ function evaluatePoint(input: FormulationInput, table: MaterialTable, coat: Coat
 export function numericModel(materials: readonly Material[]): NumericModel {
   const coat = numericCoatHook;
   const table = materialTable(materials);
+  const state = pointState(table);
   return {
     evaluate(input: FormulationInput): NumericOutcome {
       try {
-        return { ok: true, figures: evaluatePoint(input, table, coat) };
+        return { ok: true, figures: evaluatePoint(input, table, state, coat) };
       } catch (error) {
         if (error instanceof NumericRefusal) return error.toFailure();
         throw error;

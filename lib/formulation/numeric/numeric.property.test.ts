@@ -3,7 +3,8 @@
  * inputs (fast-check): every figure within 1e-9 relative (|a − b| ≤ 1e-9 ·
  * max(|a|, |b|), differences ≤ 1e-12 taken as 0), NaN exactly where the engine
  * has no value, the same thermal verdict, and a refusal exactly where the
- * engine refuses, with the same code and field. The decimal engine is the
+ * engine refuses, with the same code and field; and the same again when one
+ * model evaluates many inputs in turn (it reuses its scratch state). The decimal engine is the
  * reference here: its equations are checked against published sources in
  * the worked-example tests.
  */
@@ -14,7 +15,7 @@ import { parseFormulationInput } from "../validate";
 import { figuresDifference, SCALAR_FIGURES, type ScalarFigure } from "./compare";
 import { decimalModel, type NumericFigures, type NumericOutcome } from "./figures";
 import { numericModel } from "./model";
-import { formulationInputs } from "./test-arbitraries";
+import { allMaterials, formulationInputs } from "./test-arbitraries";
 import { COAT_FIGURES, numericCoatHook } from "./coat-hook";
 
 const TOLERANCE = 1e-9;
@@ -69,5 +70,27 @@ describe("numeric path vs the decimal engine", () => {
     expect(valid).toBeGreaterThan(1600);
     expect(refused).toBeGreaterThan(20);
     expect(refused).toBeLessThan(valid / 4);
+  });
+
+  it("gives the same figures when one model evaluates many inputs in turn, as the explorer does", () => {
+    const materials = allMaterials();
+    const model = numericModel(materials);
+    const reference = decimalModel(materials);
+    let compared = 0;
+    fc.assert(
+      fc.property(fc.array(formulationInputs, { minLength: 4, maxLength: 4 }), (list) => {
+        for (const one of list) {
+          const input = { ...one, materials };
+          if (!isValid(input)) continue;
+          compared += 1;
+          const numeric = model.evaluate(input);
+          const decimal = reference.evaluate(input);
+          if (!decimal.ok || !numeric.ok) expect(numeric, describeInput(input)).toEqual(decimal);
+          else expect(figuresDifference(numeric.figures, decimal.figures).max, describeInput(input)).toBeLessThanOrEqual(TOLERANCE);
+        }
+      }),
+      { numRuns: 100 },
+    );
+    expect(compared).toBeGreaterThan(300);
   });
 });

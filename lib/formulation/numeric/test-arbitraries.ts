@@ -88,6 +88,23 @@ function rarely<T>(value: fc.Arbitrary<T>, weight: number, outOf: number): fc.Ar
   return fc.oneof({ arbitrary: value, weight }, { arbitrary: fc.constant(undefined), weight: outOf - weight });
 }
 
+/**
+ * Every material the inputs may use, without sources: one list for many inputs, so that one model
+ * can evaluate them all in turn (as the explorer does).
+ *
+ * @example
+ * ```ts
+ * const model = numericModel(allMaterials());
+ * ```
+ */
+export function allMaterials(): Material[] {
+  return [...PRECURSORS, ...ORGANICS, ...MODIFIERS, ...SOLVENTS, ...CATALYSTS, ...SUBSTRATES, "water-di"].map((id) => {
+    const material: Material = { ...referenceMaterial(id) };
+    delete material.sources;
+    return material;
+  });
+}
+
 /** Drops a property from one material now and then, so that the engine refuses (missing density, molar mass …). */
 const damage = rarely(
   fc.record({ slot: fc.nat(), property: fc.constantFrom("density" as const, "molarMass" as const, "phaseDensity" as const, "precursor" as const) }),
