@@ -8,6 +8,7 @@ import { computeFormulation, ENGINE_VERSION, type FormulationInput, type Materia
 import { createDb, type Db } from "./client";
 import { DEMO_FORMULATIONS, DEMO_PASSWORD, DEMO_PRICE_SOURCE, DEMO_PRICES, DEMO_TEAM, DEMO_USERS, demoMaterialRefs, type DemoInput } from "./demo";
 import { copyReferenceMaterials } from "./queries/library";
+import { seedExplorationDemo } from "./seed-exploration";
 import { seedQualityDemo } from "./seed-quality";
 import { account, auditEvents, formulations, materials, member, organization, reviews, revisions, user } from "./schema";
 
@@ -175,6 +176,7 @@ export async function seedDemo(db: Db): Promise<SeedSummary> {
     });
   }
   const quality = await seedQualityDemo(db, teamId, users);
+  await seedExplorationDemo(db, teamId, users);
   return { teamId, users, created: { users: createdUsers, formulations: createdFormulations, qualityBatches: quality.batches } };
 }
 

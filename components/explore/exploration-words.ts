@@ -94,3 +94,14 @@ export function objectiveWords(o: Objective, words: OutputWords): string {
 export function thermalWords(search: Search): string {
   return search.thermal === "clear" ? "thermal check clear" : search.thermal === "caution" ? "thermal check clear or caution" : "any thermal verdict";
 }
+
+/**
+ * A candidate's values of the grid's variables with units, in the grid's order
+ * (a ternary map: the three weight fractions).
+ *
+ * @example candidateValuesWords({ kind: "sweep", variables: [tiFraction, cureStep] }, [0.1, 110]) // "10 %, 110 °C"
+ */
+export function candidateValuesWords(grid: GridLike, values: readonly number[]): string {
+  const units = grid.kind === "ternary" ? values.map(() => ({ unit: "%", percent: true })) : grid.variables.map((v) => variableLabel(v, {}));
+  return values.map((x, i) => figureWords(x, units[i] ?? { unit: "", percent: false })).join(", ");
+}

@@ -12,8 +12,7 @@ import { explorationExportUrl, explorerUrl } from "@/lib/client/downloads";
 import { deleteExploration, useExplorations, type ExplorationSummary } from "@/lib/client/explorations";
 import { errorMessage } from "@/lib/client/fetcher";
 import { fmtDateTime } from "@/lib/format";
-import { constraintWords, figureWords, gridWords, objectiveWords, shortNumber, thermalWords } from "./exploration-words";
-import { outputWords } from "./output-words";
+import { candidateValuesWords, constraintWords, figureWords, gridWords, objectiveWords, thermalWords } from "./exploration-words";
 
 interface SavedExplorationsProps {
   formulationId: string;
@@ -77,6 +76,7 @@ interface ExplorationItemProps {
 
 function ExplorationItem({ exploration: e, showRevision, onDelete }: ExplorationItemProps) {
   const best = e.candidates?.[0];
+  const outputWords = (key: string) => e.outputWords[key] ?? { key, label: key, unit: "" };
   return (
     <li className="rounded border border-rule/70 p-2 text-sm" data-testid="saved-exploration">
       <div className="flex flex-wrap items-baseline justify-between gap-2">
@@ -118,7 +118,7 @@ function ExplorationItem({ exploration: e, showRevision, onDelete }: Exploration
             <dd data-testid="best-candidate">
               {best ? (
                 <>
-                  point {best.point + 1} ({best.values.map(shortNumber).join(", ")}), thermal {best.thermalStatus}
+                  point {best.point + 1} ({candidateValuesWords(e.grid, best.values)}), thermal {best.thermalStatus}
                   {Object.entries(best.figures).length > 0 ? ": " : ""}
                   {Object.entries(best.figures)
                     .map(([k, v]) => `${outputWords(k).label} ${figureWords(v, outputWords(k))}`)

@@ -8,7 +8,9 @@ import { and, desc, eq } from "drizzle-orm";
 import { db } from "@/db";
 import { explorations, formulations, revisions, user } from "@/db/schema";
 import { NotFoundError, RuleError } from "@/lib/errors";
-import type { ExplorationBody, Grid } from "@/lib/explore/spec";
+import { outputInfo } from "@/lib/explore/outputs";
+import type { Candidate, ExplorationBody, Grid, OutputKey, Search } from "@/lib/explore/spec";
+import type { OutputInfo } from "@/lib/explore/types";
 import type { FormulationInput } from "@/lib/formulation";
 import { recordEvent } from "./audit";
 import type { Actor } from "./formulations";
@@ -57,10 +59,30 @@ export function gridNames(grid: Grid, input: FormulationInput): Record<string, s
   return names;
 }
 
-/** A row with the names its grid needs in place of the revision's input. */
-function withNames<T extends { grid: Grid; input: FormulationInput }>(row: T): Omit<T, "input"> & { names: Record<string, string> } {
+/**
+ * Words and unit of every figure an exploration names (shown, limited, aimed
+ * at, or in a candidate), from the output catalogue over the revision's input;
+ * a key the catalogue does not know keeps the key as its words.
+ */
+export function outputWordsOf(
+  row: { outputs: OutputKey[]; search: Search | null; candidates: Candidate[] | null },
+  input: FormulationInput,
+): Record<string, OutputInfo> {
+  const keys = new Set<string>(row.outputs);
+  for (const c of row.search?.constraints ?? []) keys.add(c.output);
+  if (row.search) keys.add(row.search.objective.output);
+  for (const c of row.candidates ?? []) for (const k of Object.keys(c.figures)) keys.add(k);
+  const out: Record<string, OutputInfo> = {};
+  for (const key of keys) out[key] = outputInfo(key, input) ?? { key, label: key, unit: "" };
+  return out;
+}
+
+/** A row with the names and figure words it needs in place of the revision's input. */
+function withNames<T extends { grid: Grid; input: FormulationInput; outputs: OutputKey[]; search: Search | null; candidates: Candidate[] | null }>(
+  row: T,
+): Omit<T, "input"> & { names: Record<string, string>; outputWords: Record<string, OutputInfo> } {
   const { input, ...rest } = row;
-  return { ...rest, names: gridNames(row.grid, input) };
+  return { ...rest, names: gridNames(row.grid, input), outputWords: outputWordsOf(row, input) };
 }
 
 /**
@@ -105,6 +127,22 @@ export async function getExploration(teamId: string, id: string, opts: { release
   if (!row) return null;
   if (opts.releasedOnly && row.revisionState !== "released") return null;
   return withNames(row);
+}
+
+/**
+ * One exploration with its revision's stored input (for the export, which
+ * computes the points again); null when not in this team.
+ */
+export async function getExplorationWithInput(teamId: string, id: string) {
+  const [row] = await db
+    .select({ ...listColumns, formulationName: formulations.name })
+    .from(explorations)
+    .innerJoin(revisions, eq(revisions.id, explorations.revisionId))
+    .innerJoin(formulations, eq(formulations.id, explorations.formulationId))
+    .leftJoin(user, eq(user.id, explorations.createdBy))
+    .where(and(eq(explorations.teamId, teamId), eq(explorations.id, id)))
+    .limit(1);
+  return row ?? null;
 }
 
 /**

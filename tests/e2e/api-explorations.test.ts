@@ -88,6 +88,44 @@ describe("save, list, read, delete", () => {
   });
 });
 
+describe("export of a saved exploration", () => {
+  it("returns the points as CSV and .xlsx, one row per point, headings with units, with a proper type and file name", async () => {
+    const id = await saveExploration(clients.formulator, hc3.id, explorationBody(hc3.released, hc3.firstComponent, `Export ${stamp}`));
+    const csv = await clients.reviewer.fetch(`/api/explorations/${id}/export?format=csv`);
+    expect(csv.status).toBe(200);
+    expect(csv.headers.get("content-type")).toBe("text/csv; charset=utf-8");
+    expect(csv.headers.get("content-disposition")).toMatch(/^attachment; filename=".*Export.*\.csv"$/);
+    const { rows } = parseCsv(await csv.text());
+    const start = rows.findIndex((r) => r[0] === "[Points]");
+    expect(start).toBeGreaterThan(0);
+    const header = rows[start + 1]!.map(String);
+    // The swept component's weight fraction in wt% (stored 0–1), the figures with their units.
+    expect(header[0]).toMatch(/weight fraction.*\(wt%\)$/);
+    expect(header).toContain("Theoretical density of the dry composite (g/cm³)");
+    expect(header).toContain("Thermal check");
+    const points = rows.slice(start + 2).filter((r) => r.some((c) => c !== null && c !== ""));
+    expect(points).toHaveLength(5);
+    expect(points.map((r) => Number(r[0]))).toEqual([20, 30, 40, 50, 60]);
+
+    const xlsx = await clients.formulator.fetch(`/api/explorations/${id}/export?format=xlsx`);
+    expect(xlsx.status).toBe(200);
+    expect(xlsx.headers.get("content-type")).toBe("application/vnd.openxmlformats-officedocument.spreadsheetml.sheet");
+    expect(xlsx.headers.get("content-disposition")).toMatch(/\.xlsx"$/);
+    const wb = XLSX.read(Buffer.from(await xlsx.arrayBuffer()), { type: "buffer" });
+    const sheet = XLSX.utils.sheet_to_json<unknown[]>(wb.Sheets.Points!, { header: 1 });
+    expect(sheet).toHaveLength(1 + 5);
+    expect(sheet[0]).toEqual(header);
+    const density = header.indexOf("Theoretical density of the dry composite (g/cm³)");
+    // The same numbers in both files (CSV rounds nothing away that matters at 1e-9).
+    for (let p = 0; p < 5; p++) {
+      expect(sheet[p + 1]![0]).toBe(20 + 10 * p);
+      expect(Number(sheet[p + 1]![density])).toBeCloseTo(Number(points[p]![density]), 6);
+    }
+    // GPTMS's residue, (C6H11O2)SiO1.5, is less dense than silica and titania (residue densities in data/materials.ts), so the composite's density falls as its share rises.
+    expect(Number(sheet[5]![density])).toBeLessThan(Number(sheet[1]![density]));
+  });
+});
+
 describe("opening a candidate as a new draft", () => {
   it("starts a draft with the candidate's input, computed by the full engine, and refuses a second while it is open", async () => {
     const formulationId = await approvedFormulation(`Candidate draft ${stamp}`);

@@ -80,6 +80,11 @@ describe("saving, listing, reading and deleting explorations", () => {
     expect(row!.search?.objective).toEqual({ goal: "closest", output: "refractiveIndex", value: 1.586 });
     expect(row!.candidates?.[0]?.figures.refractiveIndex).toBe(1.582);
     expect(typeof row!.createdByName).toBe("string");
+    // Words from the output catalogue over the revision's input, and the name of what varied.
+    expect(row!.outputWords.organicWeightFraction).toMatchObject({ unit: "wt%", percent: true });
+    expect(row!.outputWords.refractiveIndex!.label).toMatch(/refractive index/i);
+    const titania = hc3.input.components[hc3.input.components.length - 1]!.materialId;
+    expect(row!.names[titania]).toBe(hc3.input.materials.find((m) => m.id === titania)!.name);
     expect(row!.createdBy).toBe(users.formulator);
     const got = await eq_.getExploration(teamId, id);
     expect(got?.formulationName).toBe("Visor hard coat HC-3");
@@ -120,6 +125,27 @@ describe("saving, listing, reading and deleting explorations", () => {
     await eq_.createExploration({ userId: users.formulator!, teamId }, hc3.formulationId, body(hc3.releasedId, { name: "Hands off" }));
     const [after] = await t.db.select().from(revisions).where(eq(revisions.id, hc3.releasedId));
     expect(after).toEqual(before);
+  });
+});
+
+describe("the demo exploration", () => {
+  it("is seeded once for the visor hard coat's released revision, its candidates meeting the search's limits", async () => {
+    const { DEMO_EXPLORATION, seedExplorationDemo } = await import("@/db/seed-exploration");
+    const rows = (await eq_.listExplorations(teamId, hc3.formulationId, { revisionId: hc3.releasedId })).filter((r) => r.name === DEMO_EXPLORATION.name);
+    expect(rows).toHaveLength(1);
+    const demo = rows[0]!;
+    expect(demo.pointCount).toBe(11 * 5);
+    expect(demo.candidates!.length).toBeGreaterThan(0);
+    for (const c of demo.candidates!) {
+      expect(c.thermalStatus).toBe("clear");
+      expect(c.figures.organicContent).toBeGreaterThanOrEqual(0.5);
+      // Clear means below the highest allowed step temperature: the cure (second value) at 90–110 °C.
+      expect(c.values[1]).toBeLessThanOrEqual(110);
+    }
+    // Best first: the first candidate's index is the closest of them to the polycarbonate's 1.586.
+    const distances = demo.candidates!.map((c) => Math.abs(c.figures.refractiveIndex! - 1.586));
+    expect(distances[0]).toBe(Math.min(...distances));
+    expect(await seedExplorationDemo(t.db, teamId, users)).toBe(false);
   });
 });
 

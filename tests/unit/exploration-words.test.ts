@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { constraintWords, figureWords, gridWords, objectiveWords, shortNumber, thermalWords, variableWords } from "@/components/explore/exploration-words";
+import { candidateValuesWords, constraintWords, figureWords, gridWords, objectiveWords, shortNumber, thermalWords, variableWords } from "@/components/explore/exploration-words";
 import { gridNames } from "@/db/queries/explorations";
 import type { OutputInfo } from "@/lib/explore/types";
 import type { FormulationInput } from "@/lib/formulation";
@@ -61,6 +61,18 @@ describe("exploration words", () => {
       ),
     ).toEqual({ "modifier:0": "Acetylacetone", "step:0": "Hydrolysis" });
     expect(gridNames({ kind: "ternary", materialIds: ["tip", "m1", "gone"], step: 0.1 }, input)).toEqual({ tip: "Titanium isopropoxide", m1: "Acetylacetone", gone: "gone" });
+  });
+
+  it("returns a candidate's values with the units of the grid's variables", () => {
+    const grid = {
+      kind: "sweep" as const,
+      variables: [
+        { kind: "weightFraction" as const, materialId: "tip", from: 0, to: 0.2, step: 0.05 },
+        { kind: "stepTemperature" as const, index: 3, from: 80, to: 140, step: 10 },
+      ],
+    };
+    expect(candidateValuesWords(grid, [0.1, 110])).toBe("10 %, 110 °C");
+    expect(candidateValuesWords({ kind: "ternary", materialIds: ["a", "b", "c"], step: 0.1 }, [0.5, 0.3, 0.2])).toBe("50 %, 30 %, 20 %");
   });
 
   describe("edge cases", () => {
