@@ -9,7 +9,7 @@
  */
 import type { Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { openSession, poll, screenshot, setNumber, signInAs, unique, type Session } from "./browser";
+import { openSession, pickOption, poll, screenshot, setNumber, signInAs, unique, type Session } from "./browser";
 import { demo, signIn } from "./http";
 
 /** Polycarbonate's n_D in the reference data (data/materials.ts; PC is 1.584–1.586 in the CRC Handbook). */
@@ -53,10 +53,15 @@ async function showFigures(page: Page, keys: string[]): Promise<void> {
   }
 }
 
-/** Sets one row of what varies. */
-async function setVariable(page: Page, i: 0 | 1, kind: string, which: string | null, from: number, to: number, step: number): Promise<void> {
+/** The components by name (the team's library gives them ids of its own). */
+const TITANIA = /Titanium\(IV\) isopropoxide/;
+const GPTMS = /\(GPTMS\)/;
+
+/** Sets one row of what varies: `which` is a component's name or the index of a modifier or step. */
+async function setVariable(page: Page, i: 0 | 1, kind: string, which: RegExp | string | null, from: number, to: number, step: number): Promise<void> {
   await page.locator(`#x-variables-${i}-kind`).selectOption(kind);
-  if (which !== null) await page.locator(kind === "weightFraction" ? `#x-variables-${i}-materialId` : `#x-variables-${i}-index`).selectOption(which);
+  if (which instanceof RegExp) await pickOption(page, `#x-variables-${i}-materialId`, which);
+  else if (which !== null) await page.locator(`#x-variables-${i}-index`).selectOption(which);
   await setNumber(page, `#x-variables-${i}-from`, from);
   await setNumber(page, `#x-variables-${i}-to`, to);
   await setNumber(page, `#x-variables-${i}-step`, step);
@@ -95,7 +100,7 @@ describe("the design explorer", () => {
     await page.goto(`/formulations/${ids.formulationId}`);
     await page.getByTestId("explore-link").click();
     await page.waitForURL(/\/explore\?revision=/);
-    await setVariable(page, 0, "weightFraction", "ti-isopropoxide", 0, 20, 2);
+    await setVariable(page, 0, "weightFraction", TITANIA, 0, 20, 2);
     await poll(() => page.getByTestId("point-count").getAttribute("data-count")).toBe("11");
     await showFigures(page, ["refractiveIndex", "indexMismatch"]);
     await runAndWait(page);
@@ -116,7 +121,7 @@ describe("the design explorer", () => {
   it("maps titania against the chelate ratio and finds the coat's index below and above the polycarbonate's", async () => {
     const page = session.page;
     await page.locator("#x-mode-map").check();
-    await setVariable(page, 0, "weightFraction", "ti-isopropoxide", 0, 60, 5);
+    await setVariable(page, 0, "weightFraction", TITANIA, 0, 60, 5);
     await setVariable(page, 1, "modifierRatio", "0", 0, 1, 0.25);
     await poll(() => page.getByTestId("point-count").getAttribute("data-count")).toBe(String(13 * 5));
     await showFigures(page, ["refractiveIndex"]);
@@ -133,7 +138,7 @@ describe("the design explorer", () => {
   it("refuses a zero step and a 10⁷-point grid beside their fields, and runs nothing", async () => {
     const page = session.page;
     await page.reload();
-    await setVariable(page, 0, "weightFraction", "ti-isopropoxide", 0, 20, 0);
+    await setVariable(page, 0, "weightFraction", TITANIA, 0, 20, 0);
     await poll(() => page.locator("#x-variables-0-step-error").textContent()).toMatch(/step must be greater than 0/);
     await page.getByRole("button", { name: "Run", exact: true }).click();
     await page.waitForTimeout(300);
@@ -142,7 +147,7 @@ describe("the design explorer", () => {
 
     // 10,001 × 1,001 = 10,011,001 points: over the cap of 20,000, said before anything runs.
     await page.locator("#x-mode-map").check();
-    await setVariable(page, 0, "weightFraction", "ti-isopropoxide", 0, 100, 0.01);
+    await setVariable(page, 0, "weightFraction", TITANIA, 0, 100, 0.01);
     await setVariable(page, 1, "waterRatio", null, 0, 1000, 1);
     await poll(() => page.locator("[id^=x-][id$=-error]").allTextContents()).toEqual(expect.arrayContaining([expect.stringMatching(/20,000/)]));
     expect(await page.getByTestId("point-count").getAttribute("data-count")).toBe("");
@@ -156,7 +161,7 @@ describe("the design explorer", () => {
     const page = session.page;
     await page.reload();
     await page.locator("#x-mode-map").check();
-    await setVariable(page, 0, "weightFraction", "gptms", 50, 100, 0.5);
+    await setVariable(page, 0, "weightFraction", GPTMS, 50, 100, 0.5);
     await setVariable(page, 1, "stepTemperature", "3", 21, 120, 1);
     await poll(() => page.getByTestId("point-count").getAttribute("data-count")).toBe(String(101 * 100));
     await page.getByRole("button", { name: "Run", exact: true }).click();
@@ -174,7 +179,7 @@ describe("the design explorer", () => {
     const page = session.page;
     await page.reload();
     await page.locator("#x-mode-map").check();
-    await setVariable(page, 0, "weightFraction", "gptms", 1, 100, 1);
+    await setVariable(page, 0, "weightFraction", GPTMS, 1, 100, 1);
     await setVariable(page, 1, "stepTemperature", "3", 21, 120, 1);
     await poll(() => page.getByTestId("point-count").getAttribute("data-count")).toBe("10000");
     await showFigures(page, ["refractiveIndex"]);
@@ -194,7 +199,7 @@ describe("the design explorer", () => {
     // GPTMS 70–100 % (TEOS and titania keep their 25 : 5 proportion) against the cure temperature 90–120 °C: the
     // stored cure (120 °C) sits within the 20 °C margin of the polycarbonate's 132 °C heat deflection (caution); 110 °C is clear.
     await page.locator("#x-mode-map").check();
-    await setVariable(page, 0, "weightFraction", "gptms", 70, 100, 2);
+    await setVariable(page, 0, "weightFraction", GPTMS, 70, 100, 2);
     await setVariable(page, 1, "stepTemperature", "3", 90, 120, 5);
     await poll(() => page.getByTestId("point-count").getAttribute("data-count")).toBe(String(16 * 7));
     await showFigures(page, ["refractiveIndex", "organicContent"]);
@@ -239,7 +244,7 @@ describe("the design explorer", () => {
     // A second draft while this one is open: the 409's message beside the button.
     await page.goto(`/formulations/${ids.formulationId}/explore?revision=${ids.releasedId}`);
     await page.locator("#x-mode-map").check();
-    await setVariable(page, 0, "weightFraction", "gptms", 86, 90, 2);
+    await setVariable(page, 0, "weightFraction", GPTMS, 86, 90, 2);
     await setVariable(page, 1, "stepTemperature", "3", 100, 110, 10);
     await page.locator("#x-search-on").check();
     await runAndWait(page);
