@@ -38,6 +38,8 @@ scope.onmessage = async (event: MessageEvent<RunRequest>) => {
       outputs: request.outputs,
       model,
       search: request.search,
+      // About 20 progress reports a run: enough for the bar, few re-renders of the page.
+      chunk: Math.max(250, Math.ceil(plan.count / 20)),
       onProgress: (done: number, total: number) => post({ type: "progress", done, total }),
     });
     const transfer: Transferable[] = [...run.values.map((v) => v.buffer as ArrayBuffer), run.status.buffer as ArrayBuffer];

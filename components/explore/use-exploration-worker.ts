@@ -31,28 +31,42 @@ export interface StartArgs {
 
 const IDLE: ExplorationState = { phase: "idle", done: 0, total: 0, run: null, grid: null, search: null, message: null, ms: null };
 
+const spawn = (): Worker => new Worker(new URL("./explore.worker.ts", import.meta.url), { type: "module" });
+
 /**
- * Runs explorations in a Web Worker (one per run): progress as it goes, cancel
- * by terminating the worker, the figures rebuilt into an ExplorationRun with
- * the page's own plan of the same grid.
+ * Runs explorations in a Web Worker: progress as it goes, cancel by
+ * terminating the worker, the figures rebuilt into an ExplorationRun with the
+ * page's own plan of the same grid. A worker is started with the page (its
+ * code loaded before the first Run) and kept for the next run; a cancelled
+ * or failed one is replaced.
  */
 export function useExplorationWorker(): ExplorationState & { start: (args: StartArgs) => void; cancel: () => void } {
   const [state, setState] = useState<ExplorationState>(IDLE);
   const worker = useRef<Worker | null>(null);
+  const busy = useRef(false);
 
-  const stop = useCallback(() => {
+  const drop = useCallback(() => {
     worker.current?.terminate();
     worker.current = null;
+    busy.current = false;
   }, []);
 
-  useEffect(() => stop, [stop]);
+  const ready = useCallback((): Worker => {
+    worker.current ??= spawn();
+    return worker.current;
+  }, []);
+
+  useEffect(() => {
+    ready();
+    return drop;
+  }, [ready, drop]);
 
   const start = useCallback(
     ({ base, grid, plan, outputs, search }: StartArgs) => {
-      stop();
+      if (busy.current) drop();
       const started = performance.now();
-      const w = new Worker(new URL("./explore.worker.ts", import.meta.url), { type: "module" });
-      worker.current = w;
+      const w = ready();
+      busy.current = true;
       setState((s) => ({ ...s, phase: "running", done: 0, total: plan.count, message: null }));
       w.onmessage = (event: MessageEvent<WorkerMessage>) => {
         if (worker.current !== w) return;
@@ -60,30 +74,31 @@ export function useExplorationWorker(): ExplorationState & { start: (args: Start
         if (m.type === "progress") {
           setState((s) => ({ ...s, done: m.done, total: m.total }));
         } else if (m.type === "done") {
-          stop();
+          busy.current = false;
           const run: ExplorationRun = { plan, outputs: m.outputs, values: m.values, status: m.status, refusals: m.refusals, candidates: m.candidates };
           setState({ phase: "done", done: plan.count, total: plan.count, run, grid, search: search ?? null, message: null, ms: performance.now() - started });
         } else {
-          stop();
+          drop();
           setState((s) => ({ ...s, phase: "failed", message: m.message }));
         }
       };
       w.onerror = (event) => {
         if (worker.current !== w) return;
-        stop();
+        drop();
         setState((s) => ({ ...s, phase: "failed", message: `The exploration stopped: ${event.message || "the worker failed"}` }));
       };
       const request: RunRequest = { type: "run", base, grid, outputs, search };
       w.postMessage(request);
     },
-    [stop],
+    [drop, ready],
   );
 
   const cancel = useCallback(() => {
-    if (!worker.current) return;
-    stop();
+    if (!busy.current) return;
+    drop();
+    ready();
     setState((s) => ({ ...s, phase: "cancelled", message: `Stopped after ${s.done.toLocaleString("en")} of ${s.total.toLocaleString("en")} points; nothing was kept from this run.` }));
-  }, [stop]);
+  }, [drop, ready]);
 
   return { ...state, start, cancel };
 }

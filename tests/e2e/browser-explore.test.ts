@@ -266,7 +266,7 @@ describe("the design explorer", () => {
       await page.waitForURL(/\/explore\?exploration=/);
       // The setup comes back as saved: the grid and the search.
       await poll(() => page.getByTestId("point-count").getAttribute("data-count")).toBe("112");
-      expect(await page.locator("#x-search-on").isChecked()).toBe(true);
+      await poll(() => page.locator("#x-search-on").isChecked()).toBe(true);
       await runAndWait(page);
       await poll(() => page.getByTestId("candidate").count()).toBe(10);
       expect(await page.getByRole("button", { name: "Open as a new draft" }).count()).toBe(0);
