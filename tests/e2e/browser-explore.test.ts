@@ -161,18 +161,44 @@ describe("the design explorer", () => {
     const page = session.page;
     await page.reload();
     await page.locator("#x-mode-map").check();
-    await setVariable(page, 0, "weightFraction", GPTMS, 50, 100, 0.5);
+    // 200 × 100 = 20,000 points, the cap.
+    await setVariable(page, 0, "weightFraction", GPTMS, 50.25, 100, 0.25);
     await setVariable(page, 1, "stepTemperature", "3", 21, 120, 1);
-    await poll(() => page.getByTestId("point-count").getAttribute("data-count")).toBe(String(101 * 100));
-    await page.getByRole("button", { name: "Run", exact: true }).click();
-    await poll(() => page.getByRole("progressbar").count()).toBe(1);
-    // The page stays responsive while the worker computes: a form control still takes input.
-    await setNumber(page, "#x-variables-0-from", 51);
-    await page.getByRole("button", { name: "Cancel the run" }).click();
+    await poll(() => page.getByTestId("point-count").getAttribute("data-count")).toBe("20000");
+    // In the page, so that nothing waits on the test's round trips: Run, watch the page's timers keep firing while the
+    // worker computes (a page doing the work itself would stall them), then Cancel the run.
+    const seen = await page.evaluate(async () => {
+      const button = (text: string) => Array.from(document.querySelectorAll("button")).find((b) => b.textContent?.trim() === text);
+      const tick = () => new Promise<number>((resolve) => setTimeout(() => resolve(performance.now()), 5));
+      button("Run")!.click();
+      const started = performance.now();
+      while (!button("Cancel the run") && performance.now() - started < 10_000) await tick();
+      const bar = document.querySelector('[role="progressbar"]');
+      let last = performance.now();
+      let gap = 0;
+      const until = last + 60;
+      while (last < until) {
+        const now = await tick();
+        gap = Math.max(gap, now - last);
+        last = now;
+      }
+      const stillRunning = Boolean(button("Cancel the run"));
+      button("Cancel the run")?.click();
+      return { bar: bar?.getAttribute("aria-valuemax") ?? null, gap, stillRunning };
+    });
+    expect(seen.bar).toBe("20000");
+    expect(seen.stillRunning).toBe(true);
+    // Timers set 5 ms apart kept firing (a generous bound for a loaded machine; the run itself takes several hundred ms).
+    expect(seen.gap).toBeLessThan(250);
     await poll(() => page.getByTestId("run-state").getAttribute("data-phase")).toBe("cancelled");
     expect(await page.getByRole("progressbar").count()).toBe(0);
-    await poll(() => page.getByTestId("run-state").textContent()).toMatch(/Stopped after [\d,]+ of 10,100 points/);
+    await poll(() => page.getByTestId("run-state").textContent()).toMatch(/Stopped after [\d,]+ of 20,000 points/);
     expect(await page.getByTestId("results").count()).toBe(0);
+    // A form control still takes input, and a new run goes to the end.
+    await setNumber(page, "#x-variables-0-step", 5);
+    await poll(() => page.getByTestId("point-count").getAttribute("data-count")).toBe(String(10 * 100));
+    await runAndWait(page);
+    await poll(() => page.getByTestId("colour-map").count()).toBe(1);
   }, 120_000);
 
   it("times a 100 × 100 colour map from the Run click to the drawn map", async () => {
