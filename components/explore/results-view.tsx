@@ -19,7 +19,7 @@ interface ResultsViewProps {
 function indexReference(base: FormulationInput): { value: number; label: string } | undefined {
   const substrate = base.materials.find((m) => m.id === base.substrateId);
   if (!substrate?.refractiveIndex) return undefined;
-  return { value: substrate.refractiveIndex, label: `${substrate.name}, n = ${substrate.refractiveIndex}` };
+  return { value: substrate.refractiveIndex, label: `${substrate.name}, the substrate` };
 }
 
 /**

@@ -301,4 +301,16 @@ describe("the design explorer", () => {
       await reviewer.close();
     }
   });
+
+  it("keeps production out: the explorer answers that their role does not allow it", async () => {
+    const production = await openSession();
+    try {
+      await signInAs(production.page, demo.production);
+      await production.page.goto(`/formulations/${ids.formulationId}/explore?revision=${ids.releasedId}`);
+      await poll(() => production.page.getByText(/does not allow you to explore formulations/).count()).toBe(1);
+      expect(await production.page.locator("#x-variables-0-kind").count()).toBe(0);
+    } finally {
+      await production.close();
+    }
+  });
 });
