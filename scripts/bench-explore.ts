@@ -7,7 +7,7 @@
  * every figure, core and coat, and every scalar figure is read into the
  * run's Float64Arrays.
  *
- * Printed figures (median of the timed rounds, after warm-up rounds):
+ * Printed figures (median of 9 rounds in which the three take turns, after 3 warm-up rounds):
  * - "numeric path": the whole run above, 10,000 points;
  * - "model only": numericModel.evaluate over the same 10,000 inputs made beforehand;
  * - "bare arithmetic": the floor the arithmetic itself costs. A hand-inlined loop over
@@ -58,15 +58,21 @@ function median(values: number[]): number {
   return sorted.length % 2 === 1 ? sorted[middle]! : (sorted[middle - 1]! + sorted[middle]!) / 2;
 }
 
-function timeMs(fn: () => void): number {
-  for (let i = 0; i < WARMUP_ROUNDS; i += 1) fn();
-  const times: number[] = [];
+/**
+ * Median and fastest time of each function, ms: warm-up rounds, then rounds in which the functions
+ * take turns, so that the load of other work on a shared machine falls on all of them alike.
+ */
+function timeTogether(fns: readonly (() => void)[]): { median: number; fastest: number }[] {
+  for (let i = 0; i < WARMUP_ROUNDS; i += 1) for (const fn of fns) fn();
+  const times = fns.map(() => [] as number[]);
   for (let i = 0; i < ROUNDS; i += 1) {
-    const start = performance.now();
-    fn();
-    times.push(performance.now() - start);
+    fns.forEach((fn, k) => {
+      const start = performance.now();
+      fn();
+      times[k]!.push(performance.now() - start);
+    });
   }
-  return median(times);
+  return times.map((t) => ({ median: median(t), fastest: Math.min(...t) }));
 }
 
 /** Per component constants of this formulation, extracted once (what a bare loop would start from). */
@@ -201,22 +207,26 @@ function bareArithmetic(): void {
 
 const outputs = [...SCALAR_FIGURE_KEYS];
 let refused = 0;
-const pathMs = timeMs(() => {
-  refused = runExplorationSync({ base, plan, outputs, model }).refusals.length;
-});
 const inputs: FormulationInput[] = [];
 for (let p = 0; p < plan.count; p++) {
   const input = pointInput(base, plan, p);
   if (!isPointRefusal(input)) inputs.push(input);
 }
 let sink = 0;
-const modelMs = timeMs(() => {
-  for (const input of inputs) {
-    const outcome = model.evaluate(input);
-    if (outcome.ok) sink += outcome.figures.solMassGrams;
-  }
-});
-const bareMs = timeMs(bareArithmetic);
+const [path, modelOnly, bareLoop] = timeTogether([
+  () => {
+    refused = runExplorationSync({ base, plan, outputs, model }).refusals.length;
+  },
+  () => {
+    for (const input of inputs) {
+      const outcome = model.evaluate(input);
+      if (outcome.ok) sink += outcome.figures.solMassGrams;
+    }
+  },
+  bareArithmetic,
+]);
+const pathMs = path!.median;
+const bareMs = bareLoop!.median;
 
 // The bare loop must compute the same figures, or its time means nothing.
 let bareCheck = 0;
@@ -253,9 +263,10 @@ for (let p = 0; p < plan.count; p += SAMPLE_EVERY) {
 }
 
 console.log(`grid: ${plan.count} points (${fractions.length} × ${ratios.length}: ${varied} weight fraction × water ratio R), ${base.components.length} components, ${refused} refused`);
-console.log(`numeric path (runner, all ${outputs.length} figures): ${pathMs.toFixed(1)} ms (${((pathMs * 1000) / plan.count).toFixed(2)} µs per point)`);
-console.log(`model only (inputs made beforehand): ${modelMs.toFixed(1)} ms`);
-console.log(`bare arithmetic (core figures, see header): ${bareMs.toFixed(2)} ms; agrees with the model to ${bareCheck.toExponential(1)}`);
+console.log(`median (fastest) of ${ROUNDS} rounds, taken in turn after ${WARMUP_ROUNDS} warm-up rounds:`);
+console.log(`numeric path (runner, all ${outputs.length} figures): ${pathMs.toFixed(1)} ms (${path!.fastest.toFixed(1)}), ${((pathMs * 1000) / plan.count).toFixed(2)} µs per point`);
+console.log(`model only (inputs made beforehand): ${modelOnly!.median.toFixed(1)} ms (${modelOnly!.fastest.toFixed(1)})`);
+console.log(`bare arithmetic (core figures, see header): ${bareMs.toFixed(2)} ms (${bareLoop!.fastest.toFixed(2)}); agrees with the model to ${bareCheck.toExponential(1)}`);
 console.log(`decimal engine vs numeric path: ${sampled} points sampled (every ${SAMPLE_EVERY}th), largest difference at ${worst || "none"}`);
 if (!Number.isFinite(sink)) console.log("(unexpected non-finite checksum)");
 console.log(

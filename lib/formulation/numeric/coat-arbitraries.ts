@@ -21,7 +21,8 @@ const SUBSTRATES = ["polycarbonate", "soda-lime-glass", "pet", "aluminium-6061",
 /** Alkoxides an acac ligand can modify. */
 const MODIFIABLE = ["ti-isopropoxide", "zr-propoxide-70", "al-sec-butoxide"];
 
-const optional = <T>(arb: fc.Arbitrary<T>): fc.Arbitrary<T | undefined> => fc.option(arb, { nil: undefined });
+/** Absent half the time (fast-check builds the nil value with probability 1 / freq). */
+const optional = <T>(arb: fc.Arbitrary<T>): fc.Arbitrary<T | undefined> => fc.option(arb, { nil: undefined, freq: 2 });
 
 /** A coating: dip, spin or wet film, each with or without a target dry thickness and an area. */
 export const coatingArb: fc.Arbitrary<CoatingSpec> = fc
@@ -101,6 +102,13 @@ export const coatCaseArb: fc.Arbitrary<CoatCase> = fc
     solventMode: fc.oneof(
       fc.record({ fill: fc.constant(false), perAtom: fc.double({ min: 0, max: 20, noNaN: true }), grams: fc.double({ min: 0.1, max: 1000, noNaN: true }) }),
       fc.record({ fill: fc.constant(true), solMassGrams: fc.double({ min: 10, max: 5000, noNaN: true }), solidsFraction: fc.double({ min: 0.01, max: 0.1, noNaN: true }) }),
+      // a gel body: its bulk density gives the porosity (an aerogel-like coat, P near 1)
+      fc.record({
+        fill: fc.constant(true),
+        volumeMl: fc.double({ min: 1, max: 1000, noNaN: true }),
+        bulkDensity: fc.double({ min: 0.01, max: 0.3, noNaN: true }),
+        linearShrinkage: fc.double({ min: 0, max: 0.3, noNaN: true }),
+      }),
     ),
     catalyst: optional(fc.record({ id: fc.constantFrom(...CATALYSTS), ratio: fc.double({ min: 0.001, max: 0.2, noNaN: true }) })),
     coating: optional(coatingArb),
@@ -150,7 +158,11 @@ export const coatCaseArb: fc.Arbitrary<CoatCase> = fc
     const mode = r.solventMode;
     const input: FormulationInput = {
       materials,
-      basis: mode.fill ? { type: "solidsContent", solMassGrams: mode.solMassGrams, solidsFraction: mode.solidsFraction } : { type: "solidMass", grams: mode.grams },
+      basis: !mode.fill
+        ? { type: "solidMass", grams: mode.grams }
+        : "volumeMl" in mode
+          ? { type: "gelBody", volumeMl: mode.volumeMl, bulkDensity: mode.bulkDensity, linearShrinkage: mode.linearShrinkage }
+          : { type: "solidsContent", solMassGrams: mode.solMassGrams, solidsFraction: mode.solidsFraction },
       components: componentIds.map((materialId, i) => ({ materialId, weightFraction: fractions[i] as number })),
       ...(withModifier ? { modifiers: [{ materialId: "acac", precursorId: modified, molPerMetal: r.modifierRatio as number }] } : {}),
       water: { materialId: "water-di", ratio: "R", value: r.R, countCarried: r.countCarried },
@@ -170,16 +182,22 @@ export const coatCaseArb: fc.Arbitrary<CoatCase> = fc
  */
 export const aqueousCaseArb: fc.Arbitrary<FormulationInput> = fc
   .record({
-    colloidal: fc.double({ min: 0.3, max: 1, noNaN: true }),
+    // all colloidal silica, or some TEOS beside it (never a fraction below the schema's 1e-6)
+    colloidal: fc.oneof(fc.constant(1), fc.double({ min: 0.3, max: 0.99, noNaN: true })),
     R: fc.double({ min: 0.5, max: 40, noNaN: true }),
     waterDensity: optional(fc.double({ min: 0.3, max: 1.2, noNaN: true })),
     ethanol: fc.double({ min: 0, max: 3, noNaN: true }),
     coating: optional(coatingArb),
+    // the materials list in a random order: the refusal names the water by its position
+    order: fc.array(fc.double({ min: 0, max: 1, noNaN: true }), { minLength: 4, maxLength: 4 }),
   })
   .map((r) => {
     const water = r.waterDensity === undefined ? edit(ref("water-di"), {}, ["density"]) : edit(ref("water-di"), { density: r.waterDensity });
     return {
-      materials: [ref("colloidal-silica-30"), ref("teos"), ref("ethanol"), water],
+      materials: [ref("colloidal-silica-30"), ref("teos"), ref("ethanol"), water]
+        .map((material, i) => ({ material, key: r.order[i] ?? 0 }))
+        .sort((a, b) => a.key - b.key)
+        .map((entry) => entry.material),
       basis: { type: "solidMass", grams: 10 },
       components: [
         { materialId: "colloidal-silica-30", weightFraction: r.colloidal },

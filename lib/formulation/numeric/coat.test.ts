@@ -8,6 +8,8 @@
  * The engine's own coat step is wrapped (not changed) to capture the
  * decimal context it is given, so that a point the coat step refuses, which
  * leaves no result, can still be handed to numericCoat.
+ *
+ * COAT_RUNS=4000 npx vitest run lib/formulation/numeric/coat.test.ts runs more random formulations (default 300).
  */
 import fc from "fast-check";
 import { describe, expect, it, vi } from "vitest";
@@ -103,11 +105,11 @@ describe("numeric coat figures: the decimal engine's, on random formulations", (
         if (!Number.isNaN(got.costPerM2)) seen.costPerM2 += 1;
         if (input.measuredBulkDensity !== undefined) seen.porous += 1;
       }),
-      { numRuns: 300 },
+      { numRuns: Number(process.env.COAT_RUNS ?? 300) },
     );
     // the random formulations reached every kind of figure, present and absent
     for (const [kind, count] of Object.entries(seen)) expect(count, kind).toBeGreaterThan(0);
-  });
+  }, 120_000);
 
   it("refuses what the engine's VOC figure refuses, with its code and field, and agrees where it does not", () => {
     const seen = { refused: 0, missingDensity: 0, computed: 0 };

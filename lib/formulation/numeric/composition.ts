@@ -7,98 +7,8 @@
  */
 import type { FormulationInput } from "../input-schema";
 import { positionOf, type MaterialTable, type TableMaterial, molarMassOfRow, volumeMl } from "./material-table";
-import type { NumericLine } from "./context";
+import { addLine, addPhase, componentPositions, type PointPhase, type PointState } from "./point-state";
 import { refuse } from "./refusal";
-import type { ThermalProfile } from "./thermal";
-
-/** One phase of the dry composite with what the figures need besides the coat context's fields. */
-export interface PointPhase {
-  materialId: string;
-  residueFormula?: string;
-  weightFraction: number;
-  /** g/cm³ */
-  density: number;
-  /** An organic component's phase (not a residue, not a ligand). */
-  organic: boolean;
-  /** Organic share of the phase (figures.ts organicShares). */
-  share: number;
-}
-
-/**
- * The running state of one point: lines, phases and the sums the water, solvent and sol figures start
- * from. One per model, reset for every point (a model evaluates one point at a time), so that a point
- * allocates only its lines and phases.
- */
-export interface PointState {
-  lines: NumericLine[];
-  /** The table row of each line (same order as lines). */
-  rows: TableMaterial[];
-  phases: PointPhase[];
-  subjects: ThermalProfile[];
-  conversionsC: number[];
-  /** mol of alcohol released per distinct alcohol (table.alcohols), and the slots in order of first release. */
-  alcoholMol: Float64Array;
-  alcoholOrder: number[];
-  /** S, g */
-  solidMass: number;
-  /** Σa, mol */
-  networkAtomMol: number;
-  /** Σg', mol, after ligand exchange */
-  groupMol: number;
-  carriedWaterMol: number;
-  /** Per table position: mol of precursor molecules and of network atoms (NaN when not a component). */
-  precursorMoles: Float64Array;
-  precursorAtoms: Float64Array;
-  /** Scratch: the table position of each component, and the component ids they were found for. */
-  positions: Int32Array;
-  positionIds: string[];
-}
-
-/**
- * A fresh state for a model over `table`.
- *
- * @example
- * ```ts
- * const state = pointState(table);
- * composePoint(input, table, 10, state);
- * ```
- */
-export function pointState(table: MaterialTable): PointState {
-  const count = table.materials.length;
-  return {
-    lines: [],
-    rows: [],
-    phases: [],
-    subjects: [],
-    conversionsC: [],
-    alcoholMol: new Float64Array(table.alcohols.length),
-    alcoholOrder: [],
-    solidMass: 0,
-    networkAtomMol: 0,
-    groupMol: 0,
-    carriedWaterMol: 0,
-    precursorMoles: new Float64Array(count),
-    precursorAtoms: new Float64Array(count),
-    positions: new Int32Array(8),
-    positionIds: [],
-  };
-}
-
-/** Table positions of the components, looked up again only when the component ids change. */
-function componentPositions(input: FormulationInput, table: MaterialTable, state: PointState): Int32Array {
-  const components = input.components;
-  const n = components.length;
-  let same = state.positionIds.length === n;
-  for (let i = 0; same && i < n; i += 1) same = state.positionIds[i] === components[i]!.materialId;
-  if (same) return state.positions;
-  if (state.positions.length < n) state.positions = new Int32Array(n);
-  state.positionIds.length = 0;
-  for (let i = 0; i < n; i += 1) {
-    state.positions[i] = positionOf(table, components[i]!.materialId, `components.${i}.materialId`);
-    state.positionIds.push(components[i]!.materialId);
-  }
-  return state.positions;
-}
 
 const NO_PLANS: readonly Plan[] = [];
 
@@ -203,9 +113,8 @@ export function composePoint(input: FormulationInput, table: MaterialTable, soli
       const atoms = moles * p.networkAtomsPerMolecule;
       const carriedWater = massGrams * row.waterMolPerGram + moles * row.crystalWater;
       const volume = volumeMl(row, massGrams);
-      state.lines.push({ materialId: row.id, role: "precursor", massGrams, volumeMl: volume, moles, residueGrams, carriedSolventGrams: massGrams * row.solventFraction });
-      state.rows.push(row);
-      state.phases.push({ materialId: row.id, residueFormula: p.residueFormula, weightFraction: phaseFraction, density: p.residueDensity, organic: false, share: row.organicShare });
+      addLine(state, row, "precursor", massGrams, volume, moles, residueGrams, massGrams * row.solventFraction);
+      addPhase(state, row.id, p.residueFormula, phaseFraction, p.residueDensity, false, row.organicShare);
       state.networkAtomMol += atoms;
       groups += hydrolysable;
       state.carriedWaterMol += carriedWater;
@@ -222,9 +131,8 @@ export function composePoint(input: FormulationInput, table: MaterialTable, soli
       const volume = volumeMl(row, massGrams);
       if (row.phaseDensityField !== "") refuse("missing_density", row.phaseDensityField);
       const moles = Number.isNaN(row.molarMass) ? 0 : residueGrams / row.molarMass;
-      state.lines.push({ materialId: row.id, role: "organic", massGrams, volumeMl: volume, moles, residueGrams, carriedSolventGrams: massGrams * row.solventFraction });
-      state.rows.push(row);
-      state.phases.push({ materialId: row.id, weightFraction: phaseFraction, density: row.phaseDensity, organic: true, share: row.organicShare });
+      addLine(state, row, "organic", massGrams, volume, moles, residueGrams, massGrams * row.solventFraction);
+      addPhase(state, row.id, undefined, phaseFraction, row.phaseDensity, true, row.organicShare);
       state.carriedWaterMol += massGrams * row.waterMolPerGram;
       if (present && row.thermal) state.subjects.push(row.thermal);
     }
@@ -240,8 +148,7 @@ export function composePoint(input: FormulationInput, table: MaterialTable, soli
     const data = plan.row.material.modifier!;
     const massGrams = moles * molarMassOfRow(plan.row) * plan.row.perAssay;
     const volume = volumeMl(plan.row, massGrams);
-    state.lines.push({ materialId: plan.row.id, role: "modifier", massGrams, volumeMl: volume, moles, residueGrams: 0, carriedSolventGrams: massGrams * plan.row.solventFraction });
-    state.rows.push(plan.row);
+    addLine(state, plan.row, "modifier", massGrams, volume, moles, 0, massGrams * plan.row.solventFraction);
     state.carriedWaterMol += massGrams * plan.row.waterMolPerGram;
     replaced += moles * data.groupsReplacedPerMolecule;
     const bondedGrams = plan.bonded ? moles * data.bondedMolarMass : 0;
@@ -249,7 +156,7 @@ export function composePoint(input: FormulationInput, table: MaterialTable, soli
       let phase: PointPhase | undefined;
       for (let k = firstLigand; k < state.phases.length; k += 1) if (state.phases[k]!.materialId === plan.row.id) phase = state.phases[k];
       if (phase) phase.weightFraction += bondedGrams;
-      else state.phases.push({ materialId: plan.row.id, residueFormula: data.bondedFormula, weightFraction: bondedGrams, density: data.bondedDensity, organic: false, share: 1 });
+      else addPhase(state, plan.row.id, data.bondedFormula, bondedGrams, data.bondedDensity, false, 1);
     }
   }
   // Ligand phases held grams so far: their weight fraction is over the whole dry composite S.

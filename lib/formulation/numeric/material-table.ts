@@ -8,6 +8,7 @@
  * and field the decimal engine throws (lib/formulation/material-index.ts).
  */
 import { WATER_MOLAR_MASS_G_PER_MOL } from "../constants";
+import { isFormulationError } from "../errors";
 import type { Material, PrecursorData } from "../material-schema";
 import { organicShareOfResidue } from "./figures";
 import { refuse } from "./refusal";
@@ -55,6 +56,11 @@ export interface MaterialTable {
   readonly byId: ReadonlyMap<string, Material>;
   /** Distinct leaving alcohols (name and molar mass), as the engine keys them. */
   readonly alcohols: readonly { name: string; molarMass: number }[];
+  /**
+   * The refusal every point gets when a precursor's residue formula "(R)…" cannot be read: the decimal
+   * model reads the organic shares of all materials (figures.ts organicShares) after computing a point.
+   */
+  readonly formulaRefusal: { code: string; field: string } | undefined;
 }
 
 const orNaN = (value: number | undefined): number => (value === undefined ? Number.NaN : value);
@@ -68,9 +74,17 @@ function phaseDensityOf(material: Material, path: string): { value: number; fiel
   return { value: Number.NaN, field: `${path}.phaseDensity` };
 }
 
-function organicShareOf(material: Material): number {
+function organicShareOf(material: Material, refusals: { code: string; field: string }[]): number {
   if (material.kind === "organic" || material.kind === "modifier") return 1;
-  if (material.kind === "precursor" && material.precursor) return organicShareOfResidue(material.precursor.residueFormula);
+  if (material.kind === "precursor" && material.precursor) {
+    try {
+      return organicShareOfResidue(material.precursor.residueFormula);
+    } catch (error) {
+      if (!isFormulationError(error)) throw error;
+      refusals.push({ code: error.code, field: error.field });
+      return Number.NaN;
+    }
+  }
   return 0;
 }
 
@@ -96,6 +110,7 @@ export function materialTable(materials: readonly Material[]): MaterialTable {
   });
   const alcohols: { name: string; molarMass: number }[] = [];
   const alcoholKeys = new Map<string, number>();
+  const refusals: { code: string; field: string }[] = [];
   const table = materials.map((material, index): TableMaterial => {
     const path = `materials.${index}`;
     const p = material.precursor;
@@ -127,11 +142,11 @@ export function materialTable(materials: readonly Material[]): MaterialTable {
       alcoholSlot,
       phaseDensity: phase.value,
       phaseDensityField: phase.field,
-      organicShare: organicShareOf(material),
+      organicShare: organicShareOf(material, refusals),
       thermal: material.kind === "organic" || material.kind === "substrate" ? thermalProfile(material) : undefined,
     };
   });
-  return { materials: table, indexOf, byId, alcohols };
+  return { materials: table, indexOf, byId, alcohols, formulaRefusal: refusals[0] };
 }
 
 /**

@@ -233,7 +233,7 @@ describe("numeric path: worked examples", () => {
     expect(figures(input(650)).thermalStatus).toBe("clear");
   });
 
-  it("refuses like the engine: a missing density, too much modifier, a sol too small for its reagents, h without alkoxy groups", () => {
+  it("refuses like the engine: a missing density, too much modifier, a sol too small for its reagents, h without alkoxy groups, an unreadable residue formula", () => {
     const noDensity = { ...ref("teos") };
     delete noDensity.density;
     expect(outcome(teosInput({ materials: [noDensity, ref("water-di")] }))).toEqual({ ok: false, code: "missing_density", field: "materials.0.density" });
@@ -253,5 +253,7 @@ describe("numeric path: worked examples", () => {
     expect(
       outcome({ ...teosInput(), materials: [ref("colloidal-silica-30"), ref("water-di")], components: [{ materialId: "colloidal-silica-30", weightFraction: 1 }], water: { materialId: "water-di", ratio: "h", value: 1 } }),
     ).toEqual({ ok: false, code: "no_hydrolysable_groups", field: "water.ratio" });
+    const unreadable = { ...ref("gptms"), precursor: { ...ref("gptms").precursor!, residueFormula: "(C6H11Q2)SiO1.5" } };
+    expect(outcome({ ...teosInput(), materials: [ref("teos"), unreadable, ref("water-di")] })).toEqual({ ok: false, code: "invalid_formula", field: "formula" });
   });
 });

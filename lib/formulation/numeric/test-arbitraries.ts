@@ -127,7 +127,8 @@ export const formulationInputs: fc.Arbitrary<FormulationInput> = fc
     organics: fc.uniqueArray(fc.constantFrom(...ORGANICS), { minLength: 0, maxLength: 2 }),
     weights: fc.array(double(0.02, 1), { minLength: 5, maxLength: 5 }),
     scaled: fc.boolean(),
-    modifier: fc.option(fc.record({ id: fc.constantFrom(...MODIFIERS), x: double(0, 2.5) }), { nil: undefined }),
+    // 0–2 modifier lines on the first metal alkoxide: two of one ligand share its bonded phase.
+    modifiers: fc.array(fc.record({ id: fc.constantFrom(...MODIFIERS), x: double(0, 2.5) }), { minLength: 0, maxLength: 2 }),
     basis,
     water: fc.record({
       ratio: fc.constantFrom("R" as const, "h" as const, "perPrecursor" as const),
@@ -156,7 +157,7 @@ export const formulationInputs: fc.Arbitrary<FormulationInput> = fc
     if (!r.scaled) fractions[0] = 1 - fractions.slice(1).reduce((a, b) => a + b, 0);
     const metal = r.precursors.find((id) => METAL_ALKOXIDES.includes(id));
     const wanted = new Set<string>([...ids, "water-di"]);
-    if (r.modifier && metal) wanted.add(r.modifier.id);
+    if (metal) for (const modifier of r.modifiers) wanted.add(modifier.id);
     if (r.solvent) wanted.add(r.solvent.id);
     if (r.catalyst) wanted.add(r.catalyst.id);
     if (r.substrate) wanted.add(r.substrate);
@@ -186,7 +187,7 @@ export const formulationInputs: fc.Arbitrary<FormulationInput> = fc
       },
       ...(r.solvent ? { solvent: fill ? { materialId: r.solvent.id, mode: "fill" as const } : { materialId: r.solvent.id, mode: "molPerNetworkAtom" as const, value: r.solvent.value } } : {}),
       ...(r.catalyst ? { catalyst: { materialId: r.catalyst.id, molPerNetworkAtom: r.catalyst.ratio } } : {}),
-      ...(r.modifier && metal ? { modifiers: [{ materialId: r.modifier.id, precursorId: metal, molPerMetal: r.modifier.x }] } : {}),
+      ...(metal && r.modifiers.length > 0 ? { modifiers: r.modifiers.map((m) => ({ materialId: m.id, precursorId: metal, molPerMetal: m.x })) } : {}),
       ...(r.substrate ? { substrateId: r.substrate } : {}),
       steps: r.steps,
       ...(r.marginC === undefined ? {} : { marginC: r.marginC }),
