@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { crossings, lineRows, unitGroups } from "@/components/explore/plots/line-data";
+import { crossings, lineRows, thinRows, unitGroups } from "@/components/explore/plots/line-data";
 import { pointColumns, sortedPoints, tableCaption } from "@/components/explore/plots/points-columns";
 import { lineSummary, mapSummary, pointReadout, shownRange, ternarySummary } from "@/components/explore/plots/summaries";
 import { axisFactor, statusCounts } from "@/components/explore/plots/display";
@@ -130,5 +130,34 @@ describe("axis factor", () => {
     expect(axisFactor(temperatureAxis([100, 120]))).toBe(1);
     expect(axisFactor({ ...titaniaAxis([0, 0.1]), percent: false } as ReturnType<typeof titaniaAxis>)).toBe(1);
     expect(axisFactor({ ...temperatureAxis([0, 1]), percent: true } as ReturnType<typeof titaniaAxis>)).toBe(100);
+  });
+});
+
+describe("thinned line rows", () => {
+  const long = (n: number, gapAt: number[] = []) =>
+    Array.from({ length: n }, (_, p) => ({ x: p, p, y0: gapAt.includes(p) ? null : Math.sin(p / 50) + (p === 4321 ? 5 : 0) }));
+
+  it("returns the rows unchanged when there are few", () => {
+    const rows = long(100);
+    expect(thinRows(rows, 1, 1600)).toBe(rows);
+  });
+
+  it("returns at most about maxRows rows, keeping the ends and every spike", () => {
+    const thin = thinRows(long(20_000), 1, 1600);
+    expect(thin.length).toBeLessThanOrEqual(1600);
+    expect(thin[0]!.p).toBe(0);
+    expect(thin.at(-1)!.p).toBe(19_999);
+    expect(thin.some((r) => r.p === 4321)).toBe(true);
+    // rows stay in order
+    expect(thin.every((r, i) => i === 0 || r.p > thin[i - 1]!.p)).toBe(true);
+  });
+
+  it("keeps both edges of a gap, so the line still breaks there", () => {
+    const thin = thinRows(long(20_000, [7000, 7001, 7002]), 1, 1600);
+    const ps = thin.map((r) => r.p);
+    expect(ps).toContain(6999);
+    expect(ps).toContain(7000);
+    expect(ps).toContain(7002);
+    expect(ps).toContain(7003);
   });
 });

@@ -1,12 +1,13 @@
 /**
  * Draws a ternary map on a canvas: a hexagonal cell around each point (the
  * cells of a triangular grid tile the triangle), coloured from the scale in
- * 256 batches, refused cells dotted grey, caution and fail hatched. Browser
+ * 256 batches, refused cells dotted grey, caution and fail hatched and
+ * outlined (dashed, solid). Browser
  * only (canvas).
  */
 import { scalePosition, SCALE_STEPS, type FigureRange } from "./colour-scale";
-import { overlayPattern } from "./overlay-patterns";
-import { CORNERS, hexCell, TRIANGLE_HEIGHT } from "./ternary";
+import { OVERLAY_DARK, OVERLAY_LIGHT, overlayPattern } from "./overlay-patterns";
+import { CORNERS, hexCell, ternaryToXY, TRIANGLE_HEIGHT } from "./ternary";
 
 /** Where the triangle of side 1 sits on the canvas: px = left + x·side, py = top + (h − y)·side. */
 export interface TernaryLayout {
@@ -30,16 +31,61 @@ function hexPath(path: Path2D, layout: TernaryLayout, x: number, y: number, d: n
   path.closePath();
 }
 
+/** Lattice steps to the six neighbours of a point, in (share 0, share 1) steps; share 2 takes the rest. */
+const NEIGHBOURS: readonly (readonly [number, number])[] = [
+  [1, 0],
+  [-1, 0],
+  [0, 1],
+  [0, -1],
+  [1, -1],
+  [-1, 1],
+];
+
+/**
+ * Edges of the cells of status `code` that face a neighbour of another status
+ * (or the triangle's edge): the outline of a caution or fail region.
+ */
+function outlinePath(layout: TernaryLayout, shares: Float64Array, status: Uint8Array, d: number, code: number): Path2D | null {
+  const n = Math.round(1 / d);
+  const count = status.length;
+  const at = new Map<number, number>();
+  const key = (a: number, b: number) => a * (n + 1) + b;
+  for (let p = 0; p < count; p++) at.set(key(Math.round(shares[3 * p]! * n), Math.round(shares[3 * p + 1]! * n)), p);
+  const path = new Path2D();
+  let any = false;
+  const r = d / Math.sqrt(3);
+  for (let p = 0; p < count; p++) {
+    if (status[p] !== code) continue;
+    const a = Math.round(shares[3 * p]! * n);
+    const b = Math.round(shares[3 * p + 1]! * n);
+    const [x, y] = ternaryToXY(a, b, n - a - b);
+    for (const [da, db] of NEIGHBOURS) {
+      const q = a + da >= 0 && b + db >= 0 && a + da + b + db <= n ? at.get(key(a + da, b + db)) : undefined;
+      if (q !== undefined && status[q] === code) continue;
+      const [nx, ny] = ternaryToXY(a + da, b + db, n - a - b - da - db);
+      const angle = Math.atan2(ny - y, nx - x);
+      const [x1, y1] = ternaryPixel(layout, x + r * Math.cos(angle - Math.PI / 6), y + r * Math.sin(angle - Math.PI / 6));
+      const [x2, y2] = ternaryPixel(layout, x + r * Math.cos(angle + Math.PI / 6), y + r * Math.sin(angle + Math.PI / 6));
+      path.moveTo(x1, y1);
+      path.lineTo(x2, y2);
+      any = true;
+    }
+  }
+  return any ? path : null;
+}
+
 /**
  * Draws the map (ctx scaled to CSS px) and returns the time it took, ms.
- * xs, ys: each point's place on the triangle of side 1; d: spacing of the grid (the step).
- * @example drawTernary(ctx, layout, xs, ys, 0.05, values, range, run.status, scaleTable())
+ * xs, ys: each point's place on the triangle of side 1; shares: the plan's shares (3 a point);
+ * d: spacing of the grid (the step, a whole fraction of 1).
+ * @example drawTernary(ctx, layout, xs, ys, plan.ternary.shares, 0.05, values, range, run.status, scaleTable())
  */
 export function drawTernary(
   ctx: CanvasRenderingContext2D,
   layout: TernaryLayout,
   xs: Float64Array,
   ys: Float64Array,
+  shares: Float64Array,
   d: number,
   values: Float64Array,
   range: FigureRange | null,
@@ -106,6 +152,21 @@ export function drawTernary(
     ctx.fillStyle = overlayPattern(ctx, "fail");
     ctx.fill(fail);
   }
+  for (const [code, dash] of [
+    [1, [5, 3]],
+    [2, []],
+  ] as const) {
+    const outline = outlinePath(layout, shares, status, d, code);
+    if (!outline) continue;
+    ctx.setLineDash(dash);
+    ctx.lineWidth = 2.5;
+    ctx.strokeStyle = OVERLAY_DARK;
+    ctx.stroke(outline);
+    ctx.lineWidth = 1;
+    ctx.strokeStyle = OVERLAY_LIGHT;
+    ctx.stroke(outline);
+  }
+  ctx.setLineDash([]);
   ctx.restore();
   ctx.strokeStyle = "#22262a";
   ctx.lineWidth = 1.25;

@@ -4,7 +4,7 @@ import { useId, useMemo, useState, type KeyboardEvent } from "react";
 import { CartesianGrid, Label, Line, LineChart, ReferenceArea, ReferenceLine, ResponsiveContainer, XAxis, YAxis } from "recharts";
 import type { ExplorationRun, OutputInfo } from "@/lib/explore/types";
 import { axisFactor, placeText, STATUS_WORDS, valueText, withUnit } from "./display";
-import { crossings, lineRows, unitGroups } from "./line-data";
+import { crossings, lineRows, thinRows, unitGroups } from "./line-data";
 import { BandPatterns, SERIES, SeriesKey } from "./line-parts";
 import { lineSummary, pointReadout, shownRange } from "./summaries";
 import { thermalBands } from "./thermal-bands";
@@ -21,6 +21,9 @@ const INK = "#22262a";
 const MUTED = "#5d6268";
 const ACCENT = "#8c4a1f";
 /** Words inside a band: the full words when they fit, else the short ones, else none (the key below names every band). */
+/** Most rows a panel draws (a few per pixel of a wide plot). */
+const MAX_DRAWN = 1600;
+
 const BAND_WORDS: Record<string, [string, string]> = { caution: ["caution", "caution"], fail: ["fails the thermal check", "fails"], refused: ["refused", "refused"] };
 
 function bandLabel(status: string) {
@@ -52,6 +55,8 @@ export function LinePlot({ run, outputs, reference }: LinePlotProps) {
   const axis = run.plan.axes[0];
   const rows = useMemo(() => lineRows(run, outputs), [run, outputs]);
   const xs = useMemo(() => rows.map((r) => r.x), [rows]);
+  // A long sweep draws a thinned copy (same shape, gaps kept); readouts use every point.
+  const drawn = useMemo(() => thinRows(rows, outputs.length, MAX_DRAWN), [rows, outputs.length]);
   const bands = useMemo(() => thermalBands(xs, run.status, ["caution", "fail", "refused"]), [xs, run.status]);
   if (!axis || rows.length === 0 || outputs.length === 0) {
     return (
@@ -64,6 +69,8 @@ export function LinePlot({ run, outputs, reference }: LinePlotProps) {
   const xLow = Math.min(...xs);
   const xHigh = Math.max(...xs);
   const xt = niceTicks(xLow, xHigh, 6);
+  // Half the narrowest band drawn (about 2 px on a wide plot), so a lone point's verdict stays visible.
+  const minBand = (xHigh - xLow) / 800;
   const baseX = run.plan.base?.[0] !== undefined ? run.plan.base[0] * fx : undefined;
   const groups = unitGroups(outputs);
   const ranges = outputs.map((o) => ({ key: o.key, unit: o.unit, ...(shownRange(run, o) ?? { min: null, max: null }) }));
@@ -124,12 +131,12 @@ export function LinePlot({ run, outputs, reference }: LinePlotProps) {
             <div key={g.unit || "plain"} className={last ? "h-64 w-full" : "h-52 w-full"} data-testid="line-plot-panel">
               <ResponsiveContainer width="100%" height="100%">
                 <LineChart
-                  data={rows}
+                  data={drawn}
                   margin={{ top: 14, right: 16, left: 4, bottom: last ? 20 : 4 }}
                   accessibilityLayer={false}
                   onMouseMove={(state) => {
                     const i = state?.activeTooltipIndex;
-                    setCursor(i === undefined || i === null ? null : Number(i));
+                    setCursor(i === undefined || i === null ? null : (drawn[Number(i)]?.p ?? null));
                   }}
                 >
                   <CartesianGrid stroke="#d9d6cc" strokeDasharray="2 3" />
@@ -151,8 +158,8 @@ export function LinePlot({ run, outputs, reference }: LinePlotProps) {
                   {bands.map((b) => (
                     <ReferenceArea
                       key={`${b.status}-${b.first}`}
-                      x1={b.from === b.to ? b.from - (xHigh - xLow) / 400 : b.from}
-                      x2={b.from === b.to ? b.to + (xHigh - xLow) / 400 : b.to}
+                      x1={Math.min(b.from, (b.from + b.to) / 2 - minBand)}
+                      x2={Math.max(b.to, (b.from + b.to) / 2 + minBand)}
                       fill={`url(#${id}-${b.status})`}
                       fillOpacity={1}
                       ifOverflow="hidden"

@@ -38,7 +38,7 @@ export function pointColumns(run: ExplorationRun, outputs: OutputInfo[]): PointC
       const index = (p: number) => (plan.axes.length === 2 ? (k === 0 ? Math.floor(p / n1) : p % n1) : p);
       const v = (p: number) => (axis.values[index(p)] ?? NaN) * f;
       // One number of decimals down the column, enough for every value of the axis.
-      const decimals = Math.min(6, Math.max(0, ...axis.values.map((x) => stepDecimals(Math.abs(x * f)))));
+      const decimals = Math.min(4, Math.max(0, ...axis.values.map((x) => stepDecimals(Math.abs(x * f)))));
       const text = (p: number) => (Number.isFinite(v(p)) ? v(p).toFixed(decimals).replace("-", "−") : "–");
       cols.push({ id: `axis${k}`, header: withUnit(axis.label, axis.unit), numeric: true, text, sortValue: v });
     });

@@ -61,13 +61,13 @@ export function TernaryMap({ run, output }: TernaryMapProps) {
 
   useEffect(() => {
     const canvas = canvasRef.current;
-    if (!canvas || !layout || !values || !TABLE) return;
+    if (!canvas || !layout || !values || !TABLE || !t) return;
     const ctx = prepareCanvas(canvas, width, height);
     if (!ctx) return;
-    setDrawMs(drawTernary(ctx, layout, places.xs, places.ys, spacing, values, range, run.status, TABLE));
+    setDrawMs(drawTernary(ctx, layout, places.xs, places.ys, t.shares, spacing, values, range, run.status, TABLE));
     // layout is rebuilt each render; its parts are the dependencies.
     // eslint-disable-next-line react-hooks/exhaustive-deps
-  }, [width, height, side, places, spacing, values, range, run.status]);
+  }, [width, height, side, places, t, spacing, values, range, run.status]);
 
   if (!t || !values) {
     return (
@@ -152,7 +152,7 @@ export function TernaryMap({ run, output }: TernaryMapProps) {
       <p id={readoutId} className="num mt-1 min-h-5 text-xs text-ink" aria-live="polite" data-testid="ternary-map-readout">
         {cursor !== null ? pointReadout(run, cursor, [output]) : "Point at a cell, or focus the map and use the arrow keys, to read a point."}
       </p>
-      <MapLegend label={output.label} unit={output.unit} range={shown} counts={statusCounts(run)} revision={Boolean(basePx)} />
+      <MapLegend label={output.label} unit={output.unit} range={shown} counts={statusCounts(run)} revision={Boolean(basePx)} outlines />
     </figure>
   );
 }
