@@ -82,12 +82,17 @@ export function constraintWords(c: Constraint, words: OutputWords): string {
   return `${info.label} ≤ ${figureWords(c.max!, info)}`;
 }
 
+/** A label inside a sentence: its first letter lowered unless it starts an abbreviation ("VOC", "n_D" stay). */
+function inSentence(label: string): string {
+  return /^[A-Z][a-z]/.test(label) ? label.charAt(0).toLowerCase() + label.slice(1) : label;
+}
+
 /** The aim of a search in words: "lowest …", "highest …", "… closest to 1.586". */
 export function objectiveWords(o: Objective, words: OutputWords): string {
   const info = words(o.output);
-  if (o.goal === "min") return `lowest ${info.label.toLowerCase()}`;
-  if (o.goal === "max") return `highest ${info.label.toLowerCase()}`;
-  return `${info.label.toLowerCase()} closest to ${figureWords(o.value, info)}`;
+  if (o.goal === "min") return `lowest ${inSentence(info.label)}`;
+  if (o.goal === "max") return `highest ${inSentence(info.label)}`;
+  return `${inSentence(info.label)} closest to ${figureWords(o.value, info)}`;
 }
 
 /** The thermal condition of a search in words. */

@@ -38,7 +38,8 @@ describe("exploration words", () => {
     expect(constraintWords({ output: "vocGramsPerLitre", max: 420 }, words)).toBe("VOC ≤ 420 g/L");
     expect(constraintWords({ output: "refractiveIndex", min: 1.5, max: 1.6 }, words)).toBe("Refractive index from 1.5 to 1.6");
     expect(objectiveWords({ goal: "closest", output: "refractiveIndex", value: 1.586 }, words)).toBe("refractive index closest to 1.586");
-    expect(objectiveWords({ goal: "min", output: "vocGramsPerLitre" }, words)).toBe("lowest voc");
+    expect(objectiveWords({ goal: "min", output: "vocGramsPerLitre" }, words)).toBe("lowest VOC");
+    expect(objectiveWords({ goal: "max", output: "x" }, () => ({ key: "x", label: "Refractive index of the coat (n_D)", unit: "" }))).toBe("highest refractive index of the coat (n_D)");
     expect(thermalWords({ constraints: [], thermal: "caution", objective: { goal: "max", output: "x" } })).toBe("thermal check clear or caution");
   });
 
