@@ -3,7 +3,7 @@
  * of 20,000 rows takes seconds to write) runs in a worker thread of its
  * own, never in the thread that serves requests: one worker per export,
  * capped in memory, stopped after EXPORT_LIMITS.ms, and at most
- * EXPORT_LIMITS.concurrent at once (more answer 503 with Retry-After).
+ * EXPORT_LIMITS.concurrent at once (more answer 503).
  */
 import { startTypeScriptWorker } from "@/lib/worker-threads";
 import { ApiError } from "@/lib/http/errors";
