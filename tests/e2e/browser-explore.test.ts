@@ -93,6 +93,15 @@ describe("the design explorer", () => {
 
   afterAll(async () => {
     await session?.close();
+    // The candidate's draft stays open, but with the released recipe again, so that other tests editing HC-3's draft find the recipe they expect.
+    const api = await signIn(demo.formulator);
+    const f = (await (await api.fetch(`/api/formulations/${ids.formulationId}`)).json()) as { revisions: { id: string; state: string }[] };
+    const draft = f.revisions.find((r) => r.state === "draft");
+    if (!draft) return;
+    const released = (await (await api.fetch(`/api/revisions/${ids.releasedId}`)).json()) as { input: unknown };
+    const current = (await (await api.fetch(`/api/revisions/${draft.id}`)).json()) as { version: number };
+    const res = await api.fetch(`/api/revisions/${draft.id}`, { method: "PUT", json: { input: released.input, version: current.version } });
+    if (res.status !== 200) throw new Error(`could not restore HC-3's draft (${res.status})`);
   });
 
   it("opens from the formulation page and sweeps the titania fraction 0–20 % against the polycarbonate's index", async () => {
