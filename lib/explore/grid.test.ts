@@ -74,6 +74,10 @@ describe("planGrid", () => {
     expect(h.axes[0]!.label).toContain("Water ratio h");
   });
 
+  it("starts exactly at `from`, a −0 included (the property's counterexample of 2026-12-03)", () => {
+    expect(Object.is(rangeValues(-0, 0.000999999999, 0.001)[0], -0)).toBe(true);
+  });
+
   it("never passes `to`, steps by `step`, and counts what it lists (property)", () => {
     fc.assert(
       fc.property(fc.double({ min: -200, max: 4000, noNaN: true }), fc.double({ min: -200, max: 4000, noNaN: true }), fc.double({ min: 1e-3, max: 5000, noNaN: true }), (from, to, step) => {

@@ -56,7 +56,8 @@ export function rangeValues(from: number, to: number, step: number): number[] {
   const dir = to >= from ? 1 : -1;
   const values = new Array<number>(n);
   for (let i = 0; i < n; i++) {
-    const v = from + dir * i * step;
+    // The first value is `from` itself (−0 + 0 would turn a −0 into +0).
+    const v = i === 0 ? from : from + dir * i * step;
     values[i] = Math.abs(v - to) <= STEP_TOLERANCE * step || dir * (v - to) > 0 ? to : v;
   }
   return values;
