@@ -114,8 +114,8 @@ export async function listExplorations(teamId: string, formulationId: string, op
   return rows.map(withNames);
 }
 
-/** One exploration with its formulation's name and its revision's number; null when not in this team. */
-export async function getExploration(teamId: string, id: string, opts: { releasedOnly?: boolean } = {}) {
+/** The team's exploration `id` with its formulation's name and its revision's number and input, or undefined. */
+async function findExploration(teamId: string, id: string) {
   const [row] = await db
     .select({ ...listColumns, formulationName: formulations.name })
     .from(explorations)
@@ -124,6 +124,12 @@ export async function getExploration(teamId: string, id: string, opts: { release
     .leftJoin(user, eq(user.id, explorations.createdBy))
     .where(and(eq(explorations.teamId, teamId), eq(explorations.id, id)))
     .limit(1);
+  return row;
+}
+
+/** One exploration with its formulation's name and its revision's number; null when not in this team. */
+export async function getExploration(teamId: string, id: string, opts: { releasedOnly?: boolean } = {}) {
+  const row = await findExploration(teamId, id);
   if (!row) return null;
   if (opts.releasedOnly && row.revisionState !== "released") return null;
   return withNames(row);
@@ -134,15 +140,7 @@ export async function getExploration(teamId: string, id: string, opts: { release
  * computes the points again); null when not in this team.
  */
 export async function getExplorationWithInput(teamId: string, id: string) {
-  const [row] = await db
-    .select({ ...listColumns, formulationName: formulations.name })
-    .from(explorations)
-    .innerJoin(revisions, eq(revisions.id, explorations.revisionId))
-    .innerJoin(formulations, eq(formulations.id, explorations.formulationId))
-    .leftJoin(user, eq(user.id, explorations.createdBy))
-    .where(and(eq(explorations.teamId, teamId), eq(explorations.id, id)))
-    .limit(1);
-  return row ?? null;
+  return (await findExploration(teamId, id)) ?? null;
 }
 
 /**

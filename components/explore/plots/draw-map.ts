@@ -6,7 +6,7 @@
  */
 import type { FigureRange } from "./colour-scale";
 import { cellRect, mapImage, type MapLayout } from "./map-layout";
-import { OVERLAY_DARK, OVERLAY_LIGHT, overlayPattern } from "./overlay-patterns";
+import { overlayPattern, strokeRegionOutline } from "./overlay-patterns";
 
 /** Status codes (indexes into POINT_STATUSES). */
 const CAUTION = 1;
@@ -85,15 +85,7 @@ export function drawMap(ctx: CanvasRenderingContext2D, layout: MapLayout, values
     ctx.fillStyle = overlayPattern(ctx, kind);
     ctx.fill(cells);
     const outline = outlinePath(layout, status, code);
-    if (!outline) continue;
-    ctx.setLineDash(code === CAUTION ? [5, 3] : []);
-    ctx.lineWidth = 2.5;
-    ctx.strokeStyle = OVERLAY_DARK;
-    ctx.stroke(outline);
-    ctx.lineWidth = 1;
-    ctx.strokeStyle = OVERLAY_LIGHT;
-    ctx.stroke(outline);
-    ctx.setLineDash([]);
+    if (outline) strokeRegionOutline(ctx, outline, kind);
   }
 
   ctx.lineWidth = 1;

@@ -6,7 +6,7 @@
  * only (canvas).
  */
 import { scalePosition, SCALE_STEPS, type FigureRange } from "./colour-scale";
-import { OVERLAY_DARK, OVERLAY_LIGHT, overlayPattern } from "./overlay-patterns";
+import { overlayPattern, strokeRegionOutline } from "./overlay-patterns";
 import { CORNERS, hexCell, ternaryToXY, TRIANGLE_HEIGHT } from "./ternary";
 
 /** Where the triangle of side 1 sits on the canvas: px = left + x·side, py = top + (h − y)·side. */
@@ -152,21 +152,13 @@ export function drawTernary(
     ctx.fillStyle = overlayPattern(ctx, "fail");
     ctx.fill(fail);
   }
-  for (const [code, dash] of [
-    [1, [5, 3]],
-    [2, []],
+  for (const [code, verdict] of [
+    [1, "caution"],
+    [2, "fail"],
   ] as const) {
     const outline = outlinePath(layout, shares, status, d, code);
-    if (!outline) continue;
-    ctx.setLineDash(dash);
-    ctx.lineWidth = 2.5;
-    ctx.strokeStyle = OVERLAY_DARK;
-    ctx.stroke(outline);
-    ctx.lineWidth = 1;
-    ctx.strokeStyle = OVERLAY_LIGHT;
-    ctx.stroke(outline);
+    if (outline) strokeRegionOutline(ctx, outline, verdict);
   }
-  ctx.setLineDash([]);
   ctx.restore();
   ctx.strokeStyle = "#22262a";
   ctx.lineWidth = 1.25;

@@ -88,3 +88,23 @@ export function prepareCanvas(canvas: HTMLCanvasElement, width: number, height: 
   ctx.clearRect(0, 0, width, height);
   return ctx;
 }
+
+/**
+ * Outlines a caution or fail region so it reads on any colour: a wide dark
+ * stroke under a thin light one; caution dashed, fail solid.
+ *
+ * @example
+ * ```ts
+ * strokeRegionOutline(ctx, outline, "caution");
+ * ```
+ */
+export function strokeRegionOutline(ctx: CanvasRenderingContext2D, outline: Path2D, verdict: "caution" | "fail"): void {
+  ctx.setLineDash(verdict === "caution" ? [5, 3] : []);
+  ctx.lineWidth = 2.5;
+  ctx.strokeStyle = OVERLAY_DARK;
+  ctx.stroke(outline);
+  ctx.lineWidth = 1;
+  ctx.strokeStyle = OVERLAY_LIGHT;
+  ctx.stroke(outline);
+  ctx.setLineDash([]);
+}

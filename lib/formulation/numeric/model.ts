@@ -9,33 +9,14 @@
 import { DEFAULT_THERMAL_MARGIN_C, ML_PER_L } from "../constants";
 import type { FormulationInput } from "../input-schema";
 import type { Material } from "../material-schema";
-import { numericCoatHook, type CoatHook } from "./coat-hook";
+import { numericCoat } from "./coat";
 import { composePoint } from "./composition";
-import type { NumericCoatFigures } from "./context";
 import type { NumericFigures, NumericModel, NumericOutcome, NumericPhase } from "./figures";
 import { liquids } from "./liquids";
 import { materialTable, positionOf, type MaterialTable } from "./material-table";
 import { pointState, type PointState } from "./point-state";
 import { NumericRefusal, refuse } from "./refusal";
 import { thermalVerdict } from "./thermal";
-
-/** The coat figures when the coat function is unplugged (coat-hook.ts): all NaN. */
-const NO_COAT: NumericCoatFigures = {
-  wetThicknessUm: Number.NaN,
-  dryThicknessNm: Number.NaN,
-  coverageM2PerL: Number.NaN,
-  capillaryNumber: Number.NaN,
-  refractiveIndex: Number.NaN,
-  indexMismatch: Number.NaN,
-  vocMassGrams: Number.NaN,
-  vocGramsPerLitre: Number.NaN,
-  vocGramsPerLitreLessWater: Number.NaN,
-  cureRatio: Number.NaN,
-  costTotal: Number.NaN,
-  costPerKgDry: Number.NaN,
-  costPerLitreSol: Number.NaN,
-  costPerM2: Number.NaN,
-};
 
 /** S, g of dry composite, from the basis (basis.ts). */
 function solidMassOf(basis: FormulationInput["basis"]): number {
@@ -56,7 +37,7 @@ function shrinkageOf(ratio: number): { linear: number; volumetric: number } {
   return { volumetric: 1 - ratio, linear: 1 - Math.cbrt(ratio) };
 }
 
-function evaluatePoint(input: FormulationInput, table: MaterialTable, state: PointState, coat: CoatHook | undefined): NumericFigures {
+function evaluatePoint(input: FormulationInput, table: MaterialTable, state: PointState): NumericFigures {
   const solidMass = solidMassOf(input.basis);
   composePoint(input, table, solidMass, state);
   const l = liquids(input, table, state);
@@ -94,26 +75,22 @@ function evaluatePoint(input: FormulationInput, table: MaterialTable, state: Poi
   }
   const thermal = thermalVerdict(state.subjects, state.conversionsC, input.steps, input.marginC ?? DEFAULT_THERMAL_MARGIN_C);
 
-  let coatFigures = NO_COAT;
-  if (coat) {
-    const alcohols = state.alcoholOrder.map((slot) => ({ mol: state.alcoholMol[slot]!, molarMass: table.alcohols[slot]!.molarMass }));
-    const outcome = coat({
-      input,
-      byId: table.byId,
-      lines: state.lines,
-      phases: state.phases,
-      solidMass,
-      solMass,
-      solVolume,
-      totalWaterMol: l.totalWaterMol,
-      waterMaterial: l.waterRow.material,
-      alcohols,
-      theoreticalDensity,
-      porosity: Number.isNaN(porosity) ? 0 : porosity,
-    });
-    if ("ok" in outcome) throw new NumericRefusal(outcome.code, outcome.field);
-    coatFigures = outcome;
-  }
+  const alcohols = state.alcoholOrder.map((slot) => ({ mol: state.alcoholMol[slot]!, molarMass: table.alcohols[slot]!.molarMass }));
+  const coatFigures = numericCoat({
+    input,
+    byId: table.byId,
+    lines: state.lines,
+    phases: state.phases,
+    solidMass,
+    solMass,
+    solVolume,
+    totalWaterMol: l.totalWaterMol,
+    waterMaterial: l.waterRow.material,
+    alcohols,
+    theoreticalDensity,
+    porosity: Number.isNaN(porosity) ? 0 : porosity,
+  });
+  if ("ok" in coatFigures) throw new NumericRefusal(coatFigures.code, coatFigures.field);
 
   if (table.formulaRefusal) throw new NumericRefusal(table.formulaRefusal.code, table.formulaRefusal.field);
   return {
@@ -170,13 +147,12 @@ function evaluatePoint(input: FormulationInput, table: MaterialTable, state: Poi
  * ```
  */
 export function numericModel(materials: readonly Material[]): NumericModel {
-  const coat = numericCoatHook;
   const table = materialTable(materials);
   const state = pointState(table);
   return {
     evaluate(input: FormulationInput): NumericOutcome {
       try {
-        return { ok: true, figures: evaluatePoint(input, table, state, coat) };
+        return { ok: true, figures: evaluatePoint(input, table, state) };
       } catch (error) {
         if (error instanceof NumericRefusal) return error.toFailure();
         throw error;

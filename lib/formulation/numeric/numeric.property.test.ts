@@ -16,12 +16,10 @@ import { figuresDifference, SCALAR_FIGURES, type ScalarFigure } from "./compare"
 import { decimalModel, type NumericFigures, type NumericOutcome } from "./figures";
 import { numericModel } from "./model";
 import { allMaterials, formulationInputs } from "./test-arbitraries";
-import { COAT_FIGURES, numericCoatHook } from "./coat-hook";
 
 const TOLERANCE = 1e-9;
 
 /** The figures compared: all, or all but the coat figures while the coat path is not wired in. */
-const COMPARED: readonly ScalarFigure[] = numericCoatHook ? SCALAR_FIGURES : SCALAR_FIGURES.filter((key) => !COAT_FIGURES.includes(key));
 
 /** True when the input schema accepts the input (the numeric path takes valid inputs only). */
 function isValid(input: FormulationInput): boolean {
@@ -46,7 +44,7 @@ function agree(input: FormulationInput): { numeric: NumericOutcome; decimal: Num
   } else {
     expect(numeric.ok ? "figures" : `refused ${numeric.code} on ${numeric.field}`, describeInput(input)).toBe("figures");
     if (numeric.ok) {
-      const difference = figuresDifference(numeric.figures, decimal.figures, COMPARED);
+      const difference = figuresDifference(numeric.figures, decimal.figures, SCALAR_FIGURES);
       const show = (figures: NumericFigures): string => JSON.stringify(difference.figure.startsWith("phases") ? figures.phases : figures[difference.figure as ScalarFigure]);
       expect(difference.max, `${difference.figure}: numeric ${show(numeric.figures)}, decimal ${show(decimal.figures)}; ${describeInput(input)}`).toBeLessThanOrEqual(TOLERANCE);
     }
