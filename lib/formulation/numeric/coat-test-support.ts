@@ -9,26 +9,9 @@ import { type Dec, toNumber } from "../decimal";
 import type { FormulationInput } from "../input-schema";
 import type { Material } from "../material-schema";
 import type { FormulationResult } from "../result-types";
-import type { NumericCoatContext, NumericCoatFigures } from "./context";
+import { COAT_KEYS, type NumericCoatContext, type NumericCoatFigures } from "./context";
 import { figuresFromResult } from "./figures";
 
-/** Every coat figure, in the order of NumericCoatFigures. */
-export const COAT_KEYS = [
-  "wetThicknessUm",
-  "dryThicknessNm",
-  "coverageM2PerL",
-  "capillaryNumber",
-  "refractiveIndex",
-  "indexMismatch",
-  "vocMassGrams",
-  "vocGramsPerLitre",
-  "vocGramsPerLitreLessWater",
-  "cureRatio",
-  "costTotal",
-  "costPerKgDry",
-  "costPerLitreSol",
-  "costPerM2",
-] as const satisfies readonly (keyof NumericCoatFigures)[];
 
 /**
  * Density of the dry phase a material leaves in the composite, g/cm³, from

@@ -7,6 +7,7 @@
 import type { FormulationInput } from "../input-schema";
 import type { Material } from "../material-schema";
 import type { LineRole } from "../result-types";
+import type { NumericFigures } from "./figures";
 
 /** One dispensed line, plain numbers (0 where the decimal line has no value). */
 export interface NumericLine {
@@ -57,20 +58,23 @@ export interface NumericCoatContext {
   porosity: number;
 }
 
+/** Every coat figure, in the order of NumericFigures. */
+export const COAT_KEYS = [
+  "wetThicknessUm",
+  "dryThicknessNm",
+  "coverageM2PerL",
+  "capillaryNumber",
+  "refractiveIndex",
+  "indexMismatch",
+  "vocMassGrams",
+  "vocGramsPerLitre",
+  "vocGramsPerLitreLessWater",
+  "cureRatio",
+  "costTotal",
+  "costPerKgDry",
+  "costPerLitreSol",
+  "costPerM2",
+] as const satisfies readonly (keyof NumericFigures)[];
+
 /** The coat figures, NaN where the decimal engine leaves the field out. */
-export interface NumericCoatFigures {
-  wetThicknessUm: number;
-  dryThicknessNm: number;
-  coverageM2PerL: number;
-  capillaryNumber: number;
-  refractiveIndex: number;
-  indexMismatch: number;
-  vocMassGrams: number;
-  vocGramsPerLitre: number;
-  vocGramsPerLitreLessWater: number;
-  cureRatio: number;
-  costTotal: number;
-  costPerKgDry: number;
-  costPerLitreSol: number;
-  costPerM2: number;
-}
+export type NumericCoatFigures = Pick<NumericFigures, (typeof COAT_KEYS)[number]>;
