@@ -83,7 +83,8 @@ export type DispositionStatus = NonNullable<Awaited<ReturnType<typeof dispositio
  * every out-of-specification result acknowledged and a note for every
  * weighing deviation; under deviation also a justification. In one
  * transaction it locks the batch, then each used lot in lot-id order,
- * checks each has enough on hand, takes the amount off and records it; a
+ * checks each has enough on hand, takes the amount off and records it (with
+ * the lot's measured assay at that moment); a
  * lot that would go below zero is a 409 and nothing changes. A rejection
  * takes nothing.
  */
@@ -150,13 +151,13 @@ export async function disposeBatch(actor: Actor, batchId: string, input: Dispose
       const lots = locked.map((lot) => ({ lot, density: densities.get(lot.materialId) }));
       const byId = new Map(lots.map((l) => [l.lot.id, l]));
       const need = new Map<string, Dec>();
-      const perUse: { useId: string; amount: number }[] = [];
+      const perUse: { useId: string; amount: number; assay: number | null }[] = [];
       for (const u of uses) {
         const l = byId.get(u.lotId)!;
         const line = batch.lines[u.lineIndex];
         if (!line) continue;
         const amount = lineAmountInLotUnit(line, u.lineIndex, l.lot.unit, l.density);
-        perUse.push({ useId: u.id, amount });
+        perUse.push({ useId: u.id, amount, assay: l.lot.measuredAssay });
         need.set(u.lotId, (need.get(u.lotId) ?? new Dec(0)).plus(amount));
       }
       for (const id of lotIds) {
@@ -173,7 +174,8 @@ export async function disposeBatch(actor: Actor, batchId: string, input: Dispose
         await tx.update(materialLots).set({ quantityOnHand: after }).where(eq(materialLots.id, id));
         taken.push({ lotId: id, supplierLot: l.supplierLot, quantity: toNumber(amount), unit: l.unit, onHandAfter: after });
       }
-      for (const p of perUse) await tx.update(batchLotUses).set({ quantityUsed: p.amount }).where(eq(batchLotUses.id, p.useId));
+      // The assay is kept with the use, so a later correction of the lot's assay leaves this release as it was.
+      for (const p of perUse) await tx.update(batchLotUses).set({ quantityUsed: p.amount, measuredAssayUsed: p.assay }).where(eq(batchLotUses.id, p.useId));
     }
     const acknowledged = released ? [...notes].filter(([i]) => batch.lines[i]).map(([lineIndex, note]) => ({ lineIndex, note })) : [];
     await tx.insert(batchDispositions).values({

@@ -31,6 +31,8 @@ export const materialLots = mysqlTable(
     /** Measured mass fraction of the active compound (0–1), overriding the material's nominal assay. */
     measuredAssay: double("measured_assay"),
     notes: text("notes"),
+    /** Raised by every correction of the lot (PATCH /api/lots/:id); a correction names the version it edits. */
+    version: int("version").notNull().default(1),
     receivedBy: userRef("received_by").references(() => user.id, { onDelete: "set null" }),
     createdAt: createdAt(),
     updatedAt: updatedAt(),
@@ -57,6 +59,11 @@ export const batchLotUses = mysqlTable(
       .references(() => materialLots.id, { onDelete: "restrict" }),
     /** Amount taken from the lot, in the lot's unit; set when the batch is released. */
     quantityUsed: double("quantity_used"),
+    /**
+     * The lot's measured assay when the batch was released (null: none was measured), so
+     * a later correction of the lot's assay never changes what a released batch shows.
+     */
+    measuredAssayUsed: double("measured_assay_used"),
     createdAt: createdAt(),
   },
   (t) => [
