@@ -9,7 +9,7 @@ import { batchDispositions, batchLotUses, batchRecords, formulations, materialLo
 import { ConflictError, NotFoundError, RuleError } from "@/lib/errors";
 import type { LotUnit } from "@/lib/enums";
 import { correctedGrams, gramsInLotUnit } from "@/lib/quality/lot-amount";
-import type { ReceiveLotInput } from "@/lib/validations/lots";
+import { LOT_CORRECTION_FIELDS, type CorrectLotInput, type ReceiveLotInput } from "@/lib/validations/lots";
 import { recordEvent } from "./audit";
 
 export interface Actor {
@@ -35,6 +35,7 @@ const lotColumns = {
   expiresOn: materialLots.expiresOn,
   measuredAssay: materialLots.measuredAssay,
   notes: materialLots.notes,
+  version: materialLots.version,
   receivedBy: materialLots.receivedBy,
   receivedByName: user.name,
   createdAt: materialLots.createdAt,
@@ -78,6 +79,76 @@ export async function receiveLot(actor: Actor, input: ReceiveLotInput) {
     });
   });
   return (await getLot(actor.teamId, id))!;
+}
+
+type CorrectionField = (typeof LOT_CORRECTION_FIELDS)[number];
+
+/**
+ * Corrects a received lot (supplier, supplier lot number, expiry date,
+ * measured assay, notes; never the quantities, which change only through
+ * releases). `version` is the lot's counter the client read: when someone
+ * corrected the lot in between, nothing is written (409). The lot row is
+ * locked for the transaction, so a release taking from the lot at the same
+ * moment waits (or is waited for) and neither change is lost. A supplier lot
+ * number the material already has is a 409 naming supplierLot. The audit
+ * event `lot.updated` carries the changed fields only, before and after.
+ * Batches already released keep the assay they were released with
+ * (`batch_lot_uses.measured_assay_used`).
+ */
+export async function correctLot(actor: Actor, lotId: string, input: CorrectLotInput) {
+  await db.transaction(async (tx) => {
+    const [current] = await tx
+      .select({ lot: materialLots, materialName: materials.name })
+      .from(materialLots)
+      .innerJoin(materials, eq(materials.id, materialLots.materialId))
+      .where(and(eq(materialLots.teamId, actor.teamId), eq(materialLots.id, lotId)))
+      .for("update")
+      .limit(1);
+    if (!current) throw new NotFoundError("material lot");
+    const lot = current.lot;
+    if (lot.version !== input.version) {
+      throw new ConflictError(
+        "conflict",
+        `Someone corrected this lot after you opened it (your copy is version ${input.version}, the saved one is ${lot.version}). Nothing was overwritten: reload to see their changes, then apply yours again.`,
+        "version",
+      );
+    }
+    const wanted: Record<CorrectionField, string | number | null | undefined> = {
+      supplier: input.supplier,
+      supplierLot: input.supplierLot,
+      expiresOn: input.expiresOn,
+      measuredAssay: input.measuredAssay,
+      notes: input.notes === undefined ? undefined : input.notes?.trim() || null,
+    };
+    const before: Record<string, unknown> = {};
+    const after: Record<string, unknown> = {};
+    for (const field of LOT_CORRECTION_FIELDS) {
+      const value = wanted[field];
+      if (value === undefined || value === lot[field]) continue;
+      before[field] = lot[field];
+      after[field] = value;
+    }
+    const expiresOn = "expiresOn" in after ? (after.expiresOn as string | null) : lot.expiresOn;
+    if (expiresOn !== null && expiresOn < lot.receivedOn) {
+      throw new RuleError("expiry_before_received", `The expiry date must not be before the received date (${lot.receivedOn}).`, "expiresOn");
+    }
+    if (Object.keys(after).length === 0) return;
+    const res = await tx
+      .update(materialLots)
+      .set({ ...after, version: lot.version + 1 })
+      .where(and(eq(materialLots.id, lotId), eq(materialLots.version, input.version)))
+      .catch(onDuplicate("lots_team_material_lot_uq", `${current.materialName} already has a lot "${input.supplierLot}" received.`));
+    if (res[0].affectedRows !== 1) throw new ConflictError("conflict", "This lot changed while saving; reload and try again.", "version");
+    await recordEvent(tx, {
+      teamId: actor.teamId,
+      actorId: actor.userId,
+      action: "lot.updated",
+      entityType: "lot",
+      entityId: lotId,
+      summary: { before: { ...before, version: lot.version }, after: { ...after, version: lot.version + 1 } },
+    });
+  });
+  return (await getLot(actor.teamId, lotId))!;
 }
 
 /**
@@ -231,7 +302,8 @@ const fmt = (n: number) => String(Number(n.toPrecision(6)));
 
 /**
  * The lots in a batch, line by line (traceability: batch → lots), each with
- * the corrected mass when its lot has a measured assay.
+ * the corrected mass when its lot has a measured assay (for a released
+ * batch, the assay its lot had at release).
  */
 export async function batchLots(teamId: string, batchId: string) {
   const [b] = await db
@@ -250,7 +322,8 @@ export async function batchLots(teamId: string, batchId: string) {
       unit: materialLots.unit,
       quantityOnHand: materialLots.quantityOnHand,
       expiresOn: materialLots.expiresOn,
-      measuredAssay: materialLots.measuredAssay,
+      lotAssay: materialLots.measuredAssay,
+      measuredAssayUsed: batchLotUses.measuredAssayUsed,
       materialName: materials.name,
       materialData: materials.data,
     })
@@ -261,7 +334,9 @@ export async function batchLots(teamId: string, batchId: string) {
     .orderBy(asc(batchLotUses.lineIndex));
   return {
     batchId,
-    rows: uses.map(({ materialData, ...u }) => {
+    rows: uses.map(({ materialData, lotAssay, measuredAssayUsed, ...rest }) => {
+      // A released use keeps the assay it was released with; a later correction of the lot shows only on open batches.
+      const u = { ...rest, measuredAssay: rest.quantityUsed !== null ? measuredAssayUsed : lotAssay };
       const line = b.lines[u.lineIndex];
       const grams = line ? lineGrams(line) : null;
       const nominal = materialData.assay ?? 1;

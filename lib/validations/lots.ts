@@ -10,24 +10,30 @@ const isoDate = (label: string) =>
     .regex(/^\d{4}-\d{2}-\d{2}$/, `${label} must be a date (YYYY-MM-DD)`)
     .refine((s) => !Number.isNaN(Date.parse(`${s}T00:00:00Z`)) && new Date(`${s}T00:00:00Z`).toISOString().startsWith(s), `${label} is not a real date`);
 
+const supplierField = () => nameField(200, "Supplier");
+const supplierLotField = () => nameField(100, "Supplier lot number");
+const expiresOnField = () => isoDate("The expiry date").nullable().optional();
+const measuredAssayField = () =>
+  z
+    .number({ error: "The measured assay must be a number (a mass fraction, 0–1)" })
+    .gt(0, "The measured assay must be greater than 0")
+    .max(1, "The measured assay is a mass fraction: at most 1")
+    .nullable()
+    .optional();
+
 export const receiveLotSchema = z
   .strictObject({
     materialId: id("Material"),
-    supplier: nameField(200, "Supplier"),
-    supplierLot: nameField(100, "Supplier lot number"),
+    supplier: supplierField(),
+    supplierLot: supplierLotField(),
     quantity: z
       .number({ error: "The quantity must be a number" })
       .positive("The quantity must be greater than 0")
       .max(1e9, "The quantity is too large"),
     unit: z.enum(LOT_UNITS, { error: 'The unit must be "g", "kg", "mL" or "L"' }),
     receivedOn: isoDate("The received date"),
-    expiresOn: isoDate("The expiry date").nullable().optional(),
-    measuredAssay: z
-      .number({ error: "The measured assay must be a number (a mass fraction, 0–1)" })
-      .gt(0, "The measured assay must be greater than 0")
-      .max(1, "The measured assay is a mass fraction: at most 1")
-      .nullable()
-      .optional(),
+    expiresOn: expiresOnField(),
+    measuredAssay: measuredAssayField(),
     notes: notesField(5000).optional(),
   })
   .superRefine((v, ctx) => {
@@ -36,6 +42,36 @@ export const receiveLotSchema = z
     }
   });
 export type ReceiveLotInput = z.infer<typeof receiveLotSchema>;
+
+/** The fields of a lot that a correction may change: never the material, the quantities or the received date. */
+export const LOT_CORRECTION_FIELDS = ["supplier", "supplierLot", "expiresOn", "measuredAssay", "notes"] as const;
+
+/**
+ * A correction of a received lot (PATCH /api/lots/:id): the same rules and
+ * messages as receiving, every field optional but at least one, and the
+ * lot's `version` as read (a stale one is a 409). null clears the expiry
+ * date, the measured assay or the notes. The expiry date against the
+ * received date is checked with the stored lot.
+ */
+export const correctLotSchema = z
+  .strictObject({
+    version: z
+      .number({ error: "The version must be a number (the lot's version as you read it)" })
+      .int("The version must be a whole number")
+      .min(1, "The version must be at least 1")
+      .max(2_147_483_647, "The version is too large"),
+    supplier: supplierField().optional(),
+    supplierLot: supplierLotField().optional(),
+    expiresOn: expiresOnField(),
+    measuredAssay: measuredAssayField(),
+    notes: notesField(5000).optional(),
+  })
+  .superRefine((v, ctx) => {
+    if (LOT_CORRECTION_FIELDS.every((f) => v[f] === undefined)) {
+      ctx.addIssue({ code: "custom", message: `Nothing to correct: send at least one of ${LOT_CORRECTION_FIELDS.join(", ")}` });
+    }
+  });
+export type CorrectLotInput = z.infer<typeof correctLotSchema>;
 
 export const lotListQuerySchema = z.object({
   materialId: z.string().max(36, "At most 36 characters").optional(),
