@@ -12,14 +12,13 @@ const isoDate = (label: string) =>
 
 const supplierField = () => nameField(200, "Supplier");
 const supplierLotField = () => nameField(100, "Supplier lot number");
-const expiresOnField = () => isoDate("The expiry date").nullable().optional();
+const expiresOnField = () => isoDate("The expiry date").nullable();
 const measuredAssayField = () =>
   z
     .number({ error: "The measured assay must be a number (a mass fraction, 0–1)" })
     .gt(0, "The measured assay must be greater than 0")
     .max(1, "The measured assay is a mass fraction: at most 1")
-    .nullable()
-    .optional();
+    .nullable();
 
 export const receiveLotSchema = z
   .strictObject({
@@ -32,8 +31,8 @@ export const receiveLotSchema = z
       .max(1e9, "The quantity is too large"),
     unit: z.enum(LOT_UNITS, { error: 'The unit must be "g", "kg", "mL" or "L"' }),
     receivedOn: isoDate("The received date"),
-    expiresOn: expiresOnField(),
-    measuredAssay: measuredAssayField(),
+    expiresOn: expiresOnField().optional(),
+    measuredAssay: measuredAssayField().optional(),
     notes: notesField(5000).optional(),
   })
   .superRefine((v, ctx) => {
@@ -62,8 +61,8 @@ export const correctLotSchema = z
       .max(2_147_483_647, "The version is too large"),
     supplier: supplierField().optional(),
     supplierLot: supplierLotField().optional(),
-    expiresOn: expiresOnField(),
-    measuredAssay: measuredAssayField(),
+    expiresOn: expiresOnField().optional(),
+    measuredAssay: measuredAssayField().optional(),
     notes: notesField(5000).optional(),
   })
   .superRefine((v, ctx) => {
@@ -72,6 +71,25 @@ export const correctLotSchema = z
     }
   });
 export type CorrectLotInput = z.infer<typeof correctLotSchema>;
+
+const blankIsNull = (s: string) => (s.trim() === "" ? null : s.trim());
+
+/**
+ * The lot correction form's fields as typed (text; an empty date, assay or
+ * notes clears it), checked with the rules and messages of the route.
+ */
+export const lotCorrectionFormSchema = z.object({
+  supplier: supplierField(),
+  supplierLot: supplierLotField(),
+  expiresOn: z.string().transform(blankIsNull).pipe(expiresOnField()),
+  measuredAssay: z
+    .string()
+    .transform((s) => (s.trim() === "" ? null : Number(s.trim().replace(",", "."))))
+    .pipe(measuredAssayField()),
+  notes: z.string().transform(blankIsNull).pipe(notesField(5000)),
+});
+export type LotCorrectionFormInput = z.input<typeof lotCorrectionFormSchema>;
+export type LotCorrectionFormValues = z.output<typeof lotCorrectionFormSchema>;
 
 export const lotListQuerySchema = z.object({
   materialId: z.string().max(36, "At most 36 characters").optional(),

@@ -4,6 +4,7 @@ import { notFound } from "next/navigation";
 import { getLot } from "@/db/queries/lots";
 import { pageContext } from "@/components/layout/page-context";
 import { LotAttachments } from "@/components/quality/lot-attachments";
+import { LotCorrectionForm } from "@/components/quality/lot-correction-form";
 import { DownloadLinks } from "@/components/exports/download-links";
 import { NotAllowed, PageHeader, Panel } from "@/components/ui/panel";
 import { TD, TDN, TH, THN } from "@/components/ui/table-head";
@@ -58,6 +59,12 @@ export default async function LotPage({ params }: { params: Promise<{ id: string
               </>
             ) : null}
           </dl>
+          {can(ctx.role, "lot:update") ? (
+            <LotCorrectionForm
+              key={lot.version}
+              lot={{ id: lot.id, version: lot.version, supplier: lot.supplier, supplierLot: lot.supplierLot, expiresOn: lot.expiresOn, measuredAssay: lot.measuredAssay, notes: lot.notes }}
+            />
+          ) : null}
         </Panel>
         <LotAttachments lotId={lot.id} canChange={can(ctx.role, "lot:update")} />
         <Panel title="Batches that used this lot" id="uses">
