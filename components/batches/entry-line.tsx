@@ -6,7 +6,7 @@ import type { Batch, BatchLine } from "@/lib/client/batches";
 import { fmtDateTime, fmtMass, fmtVolume } from "@/lib/format";
 import { deviationWords } from "./batch-deviation";
 import { ToleranceBadge } from "./batch-words";
-import { isDirty, lineName, shownDeviation, type Draft, type LineProblem } from "./line-draft";
+import { isDirty, lineName, lotPicked, shownDeviation, shownLot, type Draft, type LineProblem } from "./line-draft";
 import type { BatchEntryState } from "./use-batch-entry";
 import type { EntryKeys } from "./use-entry-keys";
 
@@ -69,7 +69,8 @@ export function EntryLine({ index: i, line, draft, problem, saving, batch, entry
         index={i}
         label="Lot number"
         name={name}
-        value={draft.lot}
+        value={shownLot(draft, line)}
+        readOnly={lotPicked(line)}
         invalid={problem?.field === "lot"}
         placeholder={line.role === "water" ? "not needed" : ""}
         entry={entry}
@@ -96,6 +97,8 @@ interface LineInputProps {
   /** The line's material, for the label screen readers hear. */
   name: string;
   value: string;
+  /** The lot number of a picked lot: shown, not typed (choose "no lot" to type one). */
+  readOnly?: boolean;
   invalid: boolean;
   placeholder: string;
   entry: Pick<BatchEntryState, "setDraft" | "saveIfChanged">;
@@ -103,7 +106,7 @@ interface LineInputProps {
 }
 
 /** The mass or lot-number field of a line: saved when left, moved through with the keys. */
-function LineInput({ field, index: i, label, name, value, invalid, placeholder, entry, keys }: LineInputProps) {
+function LineInput({ field, index: i, label, name, value, readOnly = false, invalid, placeholder, entry, keys }: LineInputProps) {
   const mass = field === "mass";
   return (
     <div className="flex flex-col gap-1">
@@ -111,6 +114,7 @@ function LineInput({ field, index: i, label, name, value, invalid, placeholder, 
         {label}
         <span className="sr-only">
           , line {i + 1}: {name}
+          {readOnly ? ", from the picked lot" : ""}
         </span>
       </label>
       <input
@@ -121,8 +125,10 @@ function LineInput({ field, index: i, label, name, value, invalid, placeholder, 
         autoComplete="off"
         enterKeyHint="next"
         maxLength={mass ? undefined : 100}
-        className={inputClass(invalid, mass ? "num text-right" : "font-mono")}
+        className={inputClass(invalid, mass ? "num text-right" : readOnly ? "font-mono bg-paper text-muted" : "font-mono")}
         value={value}
+        readOnly={readOnly}
+        title={readOnly ? "From the picked lot; to type a lot number, set the line's lot to “no lot”." : undefined}
         placeholder={placeholder}
         aria-invalid={invalid ? true : undefined}
         aria-describedby={mass ? `line-${i}-error entry-help` : `line-${i}-error`}

@@ -1,7 +1,7 @@
 import type { Batch, BatchLine, LineDeviation } from "@/lib/client/batches";
 import { liveDeviation } from "./batch-deviation";
 
-/** What is typed into one line, not yet saved: the mass as text and the lot number. */
+/** What is typed into one line, not yet saved: the mass as text and the lot number (typed only when no lot is picked). */
 export interface Draft {
   mass: string;
   lot: string;
@@ -36,11 +36,21 @@ export function draftOf(line: BatchLine): Draft {
   return { mass: line.actualGrams === null ? "" : String(line.actualGrams), lot: line.lotNumber ?? "" };
 }
 
-/** True when the draft differs from the saved line (a mass that cannot be read counts as a change). */
+/** True when a lot is picked for the line: its lot number then comes from the lot and is not typed. */
+export function lotPicked(line: BatchLine): boolean {
+  return !!line.lotId;
+}
+
+/** The lot number to show for a line: the picked lot's (as saved), else what is typed. */
+export function shownLot(draft: Draft, line: BatchLine): string {
+  return lotPicked(line) ? (line.lotNumber ?? "") : draft.lot;
+}
+
+/** True when the draft differs from the saved line (a mass that cannot be read counts as a change; a picked lot's number never does). */
 export function isDirty(draft: Draft, line: BatchLine): boolean {
   const parsed = parseMass(draft.mass);
   if (parsed.error) return true;
-  return parsed.value !== line.actualGrams || (draft.lot.trim() || null) !== line.lotNumber;
+  return parsed.value !== line.actualGrams || (!lotPicked(line) && (draft.lot.trim() || null) !== line.lotNumber);
 }
 
 /** The line's material name, or its id when the name was not kept. */
@@ -63,7 +73,8 @@ export function lineChanges(
   const body: { actualGrams?: number | null; lotNumber?: string | null } = {};
   if (parsed.value !== line.actualGrams) body.actualGrams = parsed.value;
   const lot = draft.lot.trim() || null;
-  if (lot !== line.lotNumber) body.lotNumber = lot;
+  // A picked lot's number comes from the lot: the draft's text is never sent over it.
+  if (!lotPicked(line) && lot !== line.lotNumber) body.lotNumber = lot;
   return { body: Object.keys(body).length ? body : null };
 }
 
@@ -105,7 +116,7 @@ export function entryCounts(batch: Batch, drafts: readonly Draft[]): { weighed: 
     const draft = drafts[i] ?? draftOf(line);
     if (parseMass(draft.mass).value !== null) weighed += 1;
     if (shownDeviation(line, draft, batch).deviation?.outside) outside += 1;
-    if (line.role !== "water" && !draft.lot.trim()) missingLot += 1;
+    if (line.role !== "water" && !shownLot(draft, line).trim()) missingLot += 1;
   });
   return { weighed, outside, missingLot };
 }

@@ -1,6 +1,7 @@
 import { and, desc, eq, type SQL } from "drizzle-orm";
 import { db } from "@/db";
-import { batchRecords, batchSettings, formulations, revisions, user, type BatchLine, type BatchRecordRow } from "@/db/schema";
+import type { DbOrTx } from "@/db/client";
+import { batchLotUses, batchRecords, batchSettings, formulations, materialLots, revisions, user, type BatchLine, type BatchRecordRow } from "@/db/schema";
 import { ConflictError, NotFoundError, RuleError } from "@/lib/errors";
 import type { FormulationInput, FormulationResult } from "@/lib/formulation";
 import {
@@ -80,13 +81,42 @@ async function userName(id: string | null): Promise<string | null> {
 }
 
 /** A batch record with each line's deviation and the composition made (once every line is weighed). */
+/**
+ * The lots picked for a batch's lines, with each lot's supplier lot number
+ * as it stands (a lot may be corrected after it was picked). `lock` reads
+ * them with a locking read (MariaDB 10.11 has no FOR SHARE), inside a
+ * transaction that holds the batch row: batch first, then lots, the order
+ * every change of lots keeps.
+ */
+function pickedLots(tx: DbOrTx, teamId: string, batchId: string, lock = false) {
+  const q = tx
+    .select({ lineIndex: batchLotUses.lineIndex, lotId: batchLotUses.lotId, supplierLot: materialLots.supplierLot })
+    .from(batchLotUses)
+    .innerJoin(materialLots, eq(materialLots.id, batchLotUses.lotId))
+    .where(and(eq(batchLotUses.teamId, teamId), eq(batchLotUses.batchId, batchId)))
+    .orderBy(batchLotUses.lotId);
+  return lock ? q.for("update") : q;
+}
+
+/** A batch's lines with the lot number of each picked lot as it stands now (what an open batch shows and closes with). */
+function withPickedLotNumbers(lines: BatchLine[], picked: { lineIndex: number; supplierLot: string }[]): BatchLine[] {
+  const byLine = new Map(picked.map((p) => [p.lineIndex, p.supplierLot]));
+  return lines.map((l, i) => (byLine.has(i) ? { ...l, lotNumber: byLine.get(i)! } : l));
+}
+
 export async function getBatch(teamId: string, id: string) {
   const row = await loadBatch(teamId, id);
   if (!row) return null;
   const b = row.batch;
-  const lines = b.lines.map((line, index) => ({
+  const uses = await pickedLots(db, teamId, id);
+  const picked = new Map(uses.map((u) => [u.lineIndex, u.lotId]));
+  // An open batch shows a picked lot's number as the lot has it now; a closed one as it was closed.
+  const recorded = b.state === "open" ? withPickedLotNumbers(b.lines, uses) : b.lines;
+  const lines = recorded.map((line, index) => ({
     index,
     ...line,
+    /** The lot picked for the line (its lot number text then comes from the lot), or null. */
+    lotId: picked.get(index) ?? null,
     deviation:
       line.actualGrams !== null && line.targetGrams !== undefined
         ? lineDeviation(line.targetGrams, line.actualGrams, b.toleranceFraction, b.balanceResolutionGrams)
@@ -235,6 +265,16 @@ export async function recordLine(
     const row = await lockOpenBatch(tx, actor.teamId, id);
     const line = row.lines[index];
     if (!line) throw new NotFoundError("line", `This batch has no line ${index + 1}.`);
+    if (values.lotNumber !== undefined) {
+      const [use] = (await pickedLots(tx, actor.teamId, id, true)).filter((u) => u.lineIndex === index);
+      if (use && (values.lotNumber?.trim() || null) !== use.supplierLot) {
+        throw new RuleError(
+          "lot_picked",
+          `Line ${index + 1} (${line.name ?? line.materialId}): the lot number comes from the picked lot (${use.supplierLot}). To type one by hand, first clear the line's lot choice.`,
+          "lotNumber",
+        );
+      }
+    }
     const next: BatchLine = {
       ...line,
       actualGrams: values.actualGrams !== undefined ? values.actualGrams : line.actualGrams,
@@ -288,8 +328,10 @@ export async function saveBatchNotes(actor: Actor, id: string, notes: string | n
 export async function closeBatch(actor: Actor, id: string) {
   await db.transaction(async (tx) => {
     const row = await lockOpenBatch(tx, actor.teamId, id);
+    // The record closes with each picked lot's number as the lot has it now (it may have been corrected since it was picked).
+    const lines = withPickedLotNumbers(row.lines, await pickedLots(tx, actor.teamId, id, true));
     const missing: { field: string; message: string }[] = [];
-    row.lines.forEach((line, i) => {
+    lines.forEach((line, i) => {
       const label = `Line ${i + 1} (${line.name ?? line.materialId})`;
       if (line.actualGrams === null) missing.push({ field: `lines.${i}.actualGrams`, message: `${label} has no actual mass.` });
       else if (!line.lotNumber && line.role !== "water") missing.push({ field: `lines.${i}.lotNumber`, message: `${label} has no lot number.` });
@@ -298,7 +340,7 @@ export async function closeBatch(actor: Actor, id: string) {
       throw new RuleError("incomplete", `The batch cannot be closed yet: ${missing.map((m) => m.message).join(" ")}`, undefined, missing);
     }
     const now = new Date();
-    await tx.update(batchRecords).set({ state: "closed", closedAt: now, closedBy: actor.userId }).where(eq(batchRecords.id, id));
+    await tx.update(batchRecords).set({ state: "closed", closedAt: now, closedBy: actor.userId, lines }).where(eq(batchRecords.id, id));
     await recordEvent(tx, {
       teamId: actor.teamId,
       actorId: actor.userId,

@@ -193,6 +193,44 @@ describe("correctLot", () => {
   });
 });
 
+describe("a batch line's lot number once a lot is picked", () => {
+  it("comes from the lot: typing another is refused naming lotNumber, and a corrected lot number follows until the batch closes", async () => {
+    const batch = await bq.startBatch(prod, releasedId);
+    const line = batch.lines.find((l) => l.role !== "water")!;
+    await bq.recordLine(prod, batch.id, line.index, { actualGrams: line.targetGrams!, lotNumber: "typed before" });
+    const lot = await lq.receiveLot(prod, lotInput(line.materialId, 10_000));
+    await lq.chooseLot(prod, batch.id, line.index, lot.id);
+    const picked = (await bq.getBatch(teamId, batch.id))!.lines[line.index]!;
+    expect(picked).toMatchObject({ lotId: lot.id, lotNumber: lot.supplierLot });
+
+    const err = await bq.recordLine(prod, batch.id, line.index, { lotNumber: "overwritten by hand" }).catch((e: unknown) => e);
+    expect(err).toBeInstanceOf(RuleError);
+    expect((err as RuleError).code).toBe("lot_picked");
+    expect((err as RuleError).fields).toHaveProperty("lotNumber");
+    // The same number as the lot's, or a mass alone, still saves.
+    await bq.recordLine(prod, batch.id, line.index, { actualGrams: line.targetGrams! + 0.01, lotNumber: lot.supplierLot });
+
+    await lq.correctLot(prod, lot.id, { version: 1, supplierLot: `${lot.supplierLot}-FIXED` });
+    expect((await bq.getBatch(teamId, batch.id))!.lines[line.index]!.lotNumber).toBe(`${lot.supplierLot}-FIXED`);
+
+    // Cleared, the line takes typed text again.
+    await lq.chooseLot(prod, batch.id, line.index, null);
+    const typed = await bq.recordLine(prod, batch.id, line.index, { lotNumber: "by hand" });
+    expect(typed.lines[line.index]).toMatchObject({ lotId: null, lotNumber: "by hand" });
+  });
+
+  it("closes with the picked lot's number as corrected, and keeps it after the lot changes again", async () => {
+    const materialId = (await bq.startBatch(prod, releasedId)).lines[0]!.materialId;
+    const lot = await lq.receiveLot(prod, lotInput(materialId, 10_000));
+    const batch = await closedBatch(lot.id);
+    const closed = (await bq.getBatch(teamId, batch.id))!;
+    expect(closed.lines[0]!.lotNumber).toBe(lot.supplierLot);
+    await lq.correctLot(prod, lot.id, { version: 1, supplierLot: `${lot.supplierLot}-LATER` });
+    // A closed record does not change; traceability follows the lot id.
+    expect((await bq.getBatch(teamId, batch.id))!.lines[0]!.lotNumber).toBe(lot.supplierLot);
+  });
+});
+
 describe("a correction and a release taking from the same lot at the same moment", () => {
   it("keeps both: the corrected fields and the amount taken, every round", async () => {
     for (let round = 0; round < ROUNDS; round++) {

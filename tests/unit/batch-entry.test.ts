@@ -8,13 +8,13 @@
  */
 import { describe, expect, it } from "vitest";
 import { deviationWords, liveDeviation, toleranceWords } from "@/components/batches/batch-deviation";
-import { closeProblems, draftOf, entryCounts, isDirty, lineChanges, massProblem, parseMass, shownDeviation } from "@/components/batches/line-draft";
+import { closeProblems, draftOf, entryCounts, isDirty, lineChanges, massProblem, parseMass, shownDeviation, shownLot } from "@/components/batches/line-draft";
 import { batchUrls, type Batch, type BatchLine } from "@/lib/client/batches";
 
 const NBSP = "\u00a0";
 
 function line(values: Partial<BatchLine> = {}): BatchLine {
-  return { index: 0, materialId: "teos", name: "TEOS", role: "precursor", targetGrams: 100, actualGrams: null, lotNumber: null, deviation: null, ...values };
+  return { index: 0, materialId: "teos", name: "TEOS", role: "precursor", targetGrams: 100, actualGrams: null, lotNumber: null, lotId: null, deviation: null, ...values };
 }
 
 const settings = { toleranceFraction: 0.01, balanceResolutionGrams: 0.01 };
@@ -64,6 +64,16 @@ describe("lineChanges", () => {
     expect(isDirty(draftOf(saved), saved)).toBe(false);
     expect(lineChanges(4, { mass: "fifty", lot: "L-1" }, saved).problem?.message).toMatch(/^Line 5, actual mass:/);
     expect(isDirty({ mass: "fifty", lot: "L-1" }, saved)).toBe(true);
+  });
+
+  it("never sends a typed lot number over a picked lot's, and shows the lot's number", () => {
+    const picked = line({ actualGrams: 50, lotNumber: "SUP-7", lotId: "lot-1" });
+    // Text typed before the lot was picked (or changed by hand since) is neither saved nor shown.
+    expect(lineChanges(0, { mass: "50", lot: "typed by hand" }, picked)).toEqual({ body: null });
+    expect(lineChanges(0, { mass: "52", lot: "" }, picked)).toEqual({ body: { actualGrams: 52 } });
+    expect(isDirty({ mass: "50", lot: "typed by hand" }, picked)).toBe(false);
+    expect(shownLot({ mass: "50", lot: "typed by hand" }, picked)).toBe("SUP-7");
+    expect(shownLot({ mass: "50", lot: "typed" }, line({ lotNumber: "SUP-7" }))).toBe("typed");
   });
 });
 
@@ -133,6 +143,11 @@ describe("entryCounts", () => {
       { mass: "", lot: "" },
     ]);
     expect(counts).toEqual({ weighed: 2, outside: 1, missingLot: 1 });
+  });
+
+  it("counts a line with a picked lot as having its lot number, whatever its draft says", () => {
+    const batch = batchOf([line({ lotNumber: "SUP-7", lotId: "lot-1" })]);
+    expect(entryCounts(batch, [{ mass: "", lot: "" }]).missingLot).toBe(0);
   });
 });
 
