@@ -16,7 +16,7 @@ import { anonymous, demo, signIn, signUp, type Client } from "./http";
 type Role = "admin" | "formulator" | "reviewer" | "production";
 const clients = {} as Record<Role, Client>;
 let lib: Map<string, LibraryMaterial>;
-let ids: { formulation: string; draft: string; released: string; material: string; member: string; exploration: string };
+let ids: { formulation: string; draft: string; released: string; material: string; member: string; exploration: string; lot: string };
 const stamp = Date.now().toString(36);
 
 beforeAll(async () => {
@@ -39,7 +39,10 @@ beforeAll(async () => {
     material: lib.get("ethanol")!.id,
     member: members.rows.find((x) => x.email === demo.production)!.id,
     exploration: "",
+    lot: "",
   };
+  // A lot of the demo data: the table only reads it or sends corrections that are refused.
+  ids.lot = ((await (await clients.production.fetch("/api/lots")).json()) as { rows: { id: string }[] }).rows[0]!.id;
   // A saved exploration of the released revision (issue 16): the table only reads it.
   const firstComponent = ((await (await clients.formulator.fetch(`/api/revisions/${ids.released}`)).json()) as { input: { components: { materialId: string }[] } }).input.components[0]!.materialId;
   ids.exploration = await saveExploration(clients.formulator, hc3.id, explorationBody(ids.released, firstComponent, `Access table ${stamp}`));
@@ -147,6 +150,9 @@ const cases: Case[] = [
   { route: "/api/lots", name: "list lots", method: "GET", path: () => "/api/lots", allowed: 200 },
   { route: "/api/lots", name: "receive lot (invalid body)", method: "POST", path: () => "/api/lots", body: () => ({ quantity: -1 }), allowed: 422 },
   { route: "/api/lots/[id]", name: "get lot (missing)", method: "GET", path: () => "/api/lots/missing", allowed: 404 },
+  { route: "/api/lots/[id]", name: "correct lot (invalid body)", method: "PATCH", path: () => `/api/lots/${ids.lot}`, body: () => ({ version: 1 }), allowed: 422 },
+  { route: "/api/lots/[id]", name: "correct lot (missing)", method: "PATCH", path: () => "/api/lots/missing", body: () => ({ version: 1, notes: "x" }), allowed: 404 },
+  { route: "/api/lots/[id]", name: "correct lot (stale version)", method: "PATCH", path: () => `/api/lots/${ids.lot}`, body: () => ({ version: 999_999, notes: "never saved" }), allowed: 409 },
   { route: "/api/lots/[id]/export", name: "export lot trace (missing)", method: "GET", path: () => "/api/lots/missing/export?format=csv", allowed: 404 },
   { route: "/api/attachments", name: "list a lot's attachments (missing lot)", method: "GET", path: () => "/api/attachments?ownerType=lot&ownerId=missing", kind: "lot", allowed: 404 },
   { route: "/api/batches/[id]/lots", name: "lots of a batch (missing)", method: "GET", path: () => "/api/batches/missing/lots", allowed: 404 },
@@ -182,6 +188,8 @@ describe("role × route", () => {
     expect(all.filter((e) => ROLES.every((r) => e[r] !== 403)).length).toBeGreaterThan(10);
     // production lacks formulation:create (lib/permissions.ts), so it is refused a new formulation.
     expect(expected(cases[1]!)).toEqual({ admin: 422, formulator: 422, reviewer: 403, production: 403 });
+    // lot:update is production's and admins' (lib/permissions.ts): a lot correction refuses formulators and reviewers.
+    expect(expected(cases.find((c) => c.name === "correct lot (stale version)")!)).toEqual({ admin: 409, formulator: 403, reviewer: 403, production: 409 });
   });
 
   for (const c of cases) {
@@ -220,6 +228,7 @@ describe("another team's records", () => {
   it("answers 404 on every route given Larkspur's ids, and changes nothing", async () => {
     const before = await (await clients.admin.fetch(`/api/revisions/${ids.draft}`)).json();
     const beforeMaterial = await (await clients.admin.fetch(`/api/materials/${ids.material}`)).json();
+    const beforeLot = await (await clients.admin.fetch(`/api/lots/${ids.lot}`)).json();
     const otherLib = await library(other);
     const probes: [Case["method"], string, unknown?][] = [
       ["GET", `/api/formulations/${ids.formulation}`],
@@ -245,6 +254,8 @@ describe("another team's records", () => {
       ["GET", `/api/explorations/${ids.exploration}/export?format=xlsx`],
       ["DELETE", `/api/explorations/${ids.exploration}`],
       ["POST", `/api/formulations/${ids.formulation}/revisions`, { input: coatInput(otherLib) }],
+      ["GET", `/api/lots/${ids.lot}`],
+      ["PATCH", `/api/lots/${ids.lot}`, { version: (beforeLot as { version: number }).version, supplier: "Taken over", measuredAssay: 0.5 }],
     ];
     for (const [method, path, json] of probes) {
       const res = await other.fetch(path, { method, json });
@@ -254,6 +265,7 @@ describe("another team's records", () => {
     expect(list.total).toBe(0);
     expect(await (await clients.admin.fetch(`/api/revisions/${ids.draft}`)).json()).toEqual(before);
     expect(await (await clients.admin.fetch(`/api/materials/${ids.material}`)).json()).toEqual(beforeMaterial);
+    expect(await (await clients.admin.fetch(`/api/lots/${ids.lot}`)).json()).toEqual(beforeLot);
     const members = (await (await clients.admin.fetch("/api/members")).json()) as { rows: { id: string; role: string }[] };
     expect(members.rows.find((m) => m.id === ids.member)?.role).toBe("production");
     expect((await clients.admin.fetch(`/api/explorations/${ids.exploration}`)).status).toBe(200);

@@ -89,6 +89,8 @@ let batchId = "";
 let draftId = "";
 let materialId = "";
 let memberId = "";
+/** A lot the correction cases aim at (received 2020-01-01); the snapshot checks it never changes. */
+let correctedLotId = "";
 let validInput: Json;
 let validMaterial: Json;
 const cases: BadCase[] = [];
@@ -103,7 +105,8 @@ async function snapshot() {
   const batch = await (await admin.fetch(`/api/batches/${batchId}`)).json();
   const attachments = await (await admin.fetch(`/api/attachments?ownerType=material&ownerId=${materialId}`)).json();
   const teamSettings = await (await admin.fetch("/api/team/settings")).json();
-  return { f, m, d, mem, audit: a.total, batches, batch, attachments, teamSettings };
+  const lot = await (await admin.fetch(`/api/lots/${correctedLotId}`)).json();
+  return { f, m, d, mem, audit: a.total, batches, batch, attachments, teamSettings, lot };
 }
 
 beforeAll(async () => {
@@ -259,6 +262,36 @@ beforeAll(async () => {
   lotBad.push(["PUT", () => `/api/batches/${batchId}/lines/0/lot`, { lotId: null, extra: 1 }, "body"]);
   for (const [method, path, body, field] of lotBad) {
     cases.push({ label: `lot ${method} ${JSON.stringify(body).slice(0, 70)}`, client: p, method, path, body: JSON.stringify(body), field });
+  }
+  // Correcting a lot (PATCH /api/lots/:id): the receiving rules, a version, at least one field, no quantities.
+  correctedLotId = expiredLotId;
+  const corrected = () => `/api/lots/${correctedLotId}`;
+  const fix: [Json, string][] = [];
+  for (const v of NUMBER_BAD.concat([0, -1, 1.5, "1"])) fix.push([{ version: v, notes: "x" }, "version"]);
+  fix.push([{ notes: "x" }, "version"]);
+  fix.push([{}, "version"]);
+  fix.push([{ version: 1 }, "body"]);
+  for (const extra of [{ quantity: 5 }, { quantityOnHand: 0 }, { quantityReceived: 5 }, { unit: "kg" }, { receivedOn: "2020-01-02" }, { materialId: lineMaterial }, { extra: 1 }] as Record<string, Json>[]) {
+    fix.push([{ version: 1, notes: "x", ...extra }, "body"]);
+  }
+  for (const v of ["2026-13-40", "2026-02-30", "yesterday", "10/01/2026", 20260110, "", true, []]) fix.push([{ version: 1, expiresOn: v }, "expiresOn"]);
+  // Before the lot's received date (2020-01-01): checked against the stored lot.
+  for (const v of ["2019-12-31", "2000-01-01"]) fix.push([{ version: 1, expiresOn: v }, "expiresOn"]);
+  for (const v of NUMBER_BAD.filter((x) => x !== null).concat([0, -0.5, 1.01, 98, "0.9"])) fix.push([{ version: 1, measuredAssay: v }, "measuredAssay"]);
+  for (const v of STRING_BAD) fix.push([{ version: 1, supplier: v }, "supplier"]);
+  for (const name of NAME_BAD) fix.push([{ version: 1, supplierLot: name.slice(0, 101) }, "supplierLot"]);
+  fix.push([{ version: 1, supplierLot: "x".repeat(101) }, "supplierLot"]);
+  for (const v of [5, true, [], { x: 1 }, "Resin\u202Etxt", "x".repeat(5001)]) fix.push([{ version: 1, notes: v }, "notes"]);
+  for (const [body, field] of fix) {
+    cases.push({ label: `lot PATCH ${JSON.stringify(body).slice(0, 70)}`, client: p, method: "PATCH", path: corrected, body: JSON.stringify(body), field });
+  }
+  for (const [label, body] of [
+    ["empty body", ""],
+    ["malformed JSON", "{\"version\": "],
+    ["a JSON array", "[1]"],
+    ["oversized body", JSON.stringify({ version: 1, notes: "☃".repeat(700_000) })],
+  ] as [string, string][]) {
+    cases.push({ label: `lot PATCH ${label}`, client: p, method: "PATCH", path: corrected, body });
   }
   const disposeBad: [Json, string][] = [
     [{ disposition: "approved" }, "disposition"],

@@ -3,7 +3,10 @@
  * form (a bad expiry date is named beside its field), the lot page shows
  * what is on hand; a line of a batch takes from that lot; a reviewer who did
  * not make the batch releases it from the batch record's disposition panel,
- * and the lot's quantity on hand goes down by the line's mass.
+ * and the lot's quantity on hand goes down by the line's mass. Production
+ * then corrects the lot's expiry and assay through its Edit form (a bad
+ * assay named beside its field), a reviewer sees no Edit, and a batch line
+ * that picked the lot shows its lot number read-only.
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { openSession, poll, signInAs, unique, type Session } from "./browser";
@@ -84,5 +87,50 @@ describe("material lots and batch disposition in the browser", () => {
     // 2 kg received, the line's mass (g) taken off in kg: 1 kg = 1000 g.
     expect(lot.quantityOnHand).toBeCloseTo(2 - line.targetGrams / 1000, 9);
     expect(lot.uses[0]!.quantityUsed).toBeCloseTo(line.targetGrams / 1000, 9);
+  });
+
+  it("lets production correct the lot's expiry and assay through Edit, and shows the new values", async () => {
+    const page = production.page;
+    await page.goto(`/lots/${lotId}`);
+    await page.getByRole("button", { name: "Edit", exact: true }).click();
+    await page.locator("#edit-lot-assay").fill("1.5");
+    await page.getByRole("button", { name: "Save correction" }).click();
+    await poll(() => page.locator("#edit-lot-assay-error").textContent()).toMatch(/mass fraction: at most 1/);
+    expect(await page.getByTestId("lot-assay-help").textContent()).toMatch(/already released from this lot keep the assay they were released with/);
+    await page.locator("#edit-lot-assay").fill("0.97");
+    await page.locator("#edit-lot-expires").fill("2099-06-30");
+    await page.getByRole("button", { name: "Save correction" }).click();
+    await poll(() => page.locator("#received").textContent()).toMatch(/0\.97 \(mass fraction\)/);
+    const received = (await page.locator("#received").textContent())!;
+    expect(received).toMatch(/Expires on\s*2099-06-30/);
+    // The quantity on hand is not the correction's: as the release left it.
+    const lot = (await (await api.fetch(`/api/lots/${lotId}`)).json()) as { version: number; measuredAssay: number; expiresOn: string; quantityOnHand: number };
+    expect(lot).toMatchObject({ version: 2, measuredAssay: 0.97, expiresOn: "2099-06-30" });
+    expect(lot.quantityOnHand).toBeLessThan(2);
+  });
+
+  it("shows a reviewer the lot without an Edit button", async () => {
+    const page = reviewer.page;
+    await page.goto(`/lots/${lotId}`);
+    await poll(() => page.locator("#received").textContent()).toMatch(/0\.97 \(mass fraction\)/);
+    expect(await page.getByRole("button", { name: "Edit", exact: true }).count()).toBe(0);
+  });
+
+  it("shows a picked lot's number read-only in the weighing form: typing over it changes nothing", async () => {
+    const open = (await (await api.fetch("/api/batches", { method: "POST", json: { revisionId: releasedId } })).json()) as Batch;
+    const line = open.lines.find((l) => l.role !== "water")!;
+    expect((await api.fetch(`/api/batches/${open.id}/lines/${line.index}/lot`, { method: "PUT", json: { lotId } })).status).toBe(200);
+    const page = production.page;
+    await page.goto(`/batches/${open.id}`);
+    const field = page.locator(`#lot-${line.index}`);
+    await poll(() => field.inputValue()).toBe(`BR-${stamp}`);
+    expect(await field.getAttribute("readonly")).not.toBeNull();
+    await field.click();
+    await page.keyboard.type("HAND");
+    expect(await field.inputValue()).toBe(`BR-${stamp}`);
+    // A field that could not be typed into leaves nothing to save: the record keeps the lot's number.
+    await page.locator(`#mass-${line.index}`).click();
+    const saved = (await (await api.fetch(`/api/batches/${open.id}`)).json()) as { lines: { lotNumber: string | null }[] };
+    expect(saved.lines[line.index]!.lotNumber).toBe(`BR-${stamp}`);
   });
 });
