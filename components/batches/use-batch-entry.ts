@@ -33,16 +33,6 @@ export function useBatchEntry(initial: Batch, defaultInitials: string) {
   });
   const queue = useRef<Promise<unknown>>(Promise.resolve());
 
-  // Picking a lot (on the same page) refreshes the page's record: read the saved lines again so a
-  // picked lot's number shows in its line at once.
-  const pickedKey = initial.lines.map((l) => `${l.lotId ?? ""}:${l.lotNumber ?? ""}`).join("|");
-  const shownPicks = useRef(pickedKey);
-  useEffect(() => {
-    if (shownPicks.current === pickedKey) return;
-    shownPicks.current = pickedKey;
-    void mutate();
-  }, [pickedKey, mutate]);
-
   const setProblem = useCallback((index: number, problem: LineProblem | undefined) => setProblems((p) => ({ ...p, [index]: problem })), []);
   const addProblems = useCallback((more: Record<number, LineProblem>) => setProblems((p) => ({ ...p, ...more })), []);
 

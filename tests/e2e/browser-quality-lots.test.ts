@@ -121,7 +121,7 @@ describe("material lots and batch disposition in the browser", () => {
     const line = open.lines.find((l) => l.role !== "water")!;
     expect((await api.fetch(`/api/batches/${open.id}/lines/${line.index}/lot`, { method: "PUT", json: { lotId } })).status).toBe(200);
     const page = production.page;
-    await page.goto(`/batches/${open.id}`);
+    await page.goto(`/batches/${open.id}/weigh`);
     const field = page.locator(`#lot-${line.index}`);
     await poll(() => field.inputValue()).toBe(`BR-${stamp}`);
     expect(await field.getAttribute("readonly")).not.toBeNull();
