@@ -5,10 +5,11 @@
  * them, so a Web Worker can take a cancel message. Pure TypeScript.
  */
 import type { FormulationInput } from "../formulation/input-schema";
-import type { NumericModel } from "../formulation/numeric/figures";
+import type { NumericEvaluator, NumericModel } from "../formulation/numeric/figures";
 import { isPointRefusal, pointInput } from "./apply";
 import { isPlanError, planGrid } from "./grid";
-import { outputReader, type OutputReader } from "./outputs";
+import { knobPlan, pointKnobs, type KnobPlan } from "./knobs";
+import { evaluatorReader, outputReader, type EvaluatorReader, type OutputReader } from "./outputs";
 import { bestCandidates, searchOutputs } from "./search";
 import type { Grid, OutputKey, Search } from "./spec";
 import { POINT_STATUSES, type ExplorationRun, type GridPlan, type PlanError } from "./types";
@@ -41,10 +42,35 @@ const STATUS_INDEX: Record<string, number> = { clear: 0, caution: 1, fail: 2 };
 /** Points computed between two yields to the event loop, unless the caller says otherwise. */
 export const DEFAULT_CHUNK = 250;
 
+/** The prepared numeric path of a run: the model's evaluator, the plan's knobs and where each output is read. */
+interface Prepared {
+  evaluator: NumericEvaluator;
+  knobs: KnobPlan;
+  values: Float64Array;
+  /** Per output: its slot in evaluator.figures, or −1 when `reads[o]` computes it. */
+  slots: Int32Array;
+  reads: ((evaluator: NumericEvaluator) => number)[];
+}
+
 interface RunState {
   run: ExplorationRun;
   readers: OutputReader[];
   options: RunOptions;
+  prepared?: Prepared;
+}
+
+function prepared(options: RunOptions, outputs: readonly string[]): Prepared | undefined {
+  if (!options.model.prepare) return undefined;
+  const knobs = knobPlan(options.base, options.plan);
+  const evaluator = options.model.prepare(options.base, knobs.knobs);
+  const readers: EvaluatorReader[] = outputs.map(evaluatorReader);
+  return {
+    evaluator,
+    knobs,
+    values: new Float64Array(knobs.knobs.length),
+    slots: Int32Array.from(readers, (r) => ("slot" in r ? r.slot : -1)),
+    reads: readers.map((r) => ("read" in r ? r.read : () => Number.NaN)),
+  };
 }
 
 function start(options: RunOptions): RunState {
@@ -53,11 +79,40 @@ function start(options: RunOptions): RunState {
   const count = options.plan.count;
   const values = outputs.map(() => new Float64Array(count).fill(Number.NaN));
   const run: ExplorationRun = { plan: options.plan, outputs, values, status: new Uint8Array(count).fill(REFUSED), refusals: [] };
-  return { run, readers: outputs.map(outputReader), options };
+  return { run, readers: outputs.map(outputReader), options, prepared: prepared(options, outputs) };
+}
+
+/** Computes points [from, to) into the run with the model's prepared evaluator: numbers in, numbers out. */
+function computePrepared(state: RunState, p: Prepared, from: number, to: number): void {
+  const { run, options } = state;
+  const { evaluator, values, slots, reads } = p;
+  const figures = evaluator.figures;
+  const columns = run.values;
+  for (let point = from; point < to; point++) {
+    const refusal = pointKnobs(options.base, options.plan, p.knobs, point, values);
+    if (refusal) {
+      run.refusals.push({ point, code: refusal.code, field: refusal.field });
+      continue;
+    }
+    const status = evaluator.evaluate(values);
+    if (status < 0) {
+      run.refusals.push({ point, code: evaluator.refusal.code, field: evaluator.refusal.field });
+      continue;
+    }
+    run.status[point] = status;
+    for (let o = 0; o < columns.length; o++) {
+      const slot = slots[o]!;
+      columns[o]![point] = slot >= 0 ? figures[slot]! : reads[o]!(evaluator);
+    }
+  }
 }
 
 /** Computes points [from, to) into the run. */
 function computeRange(state: RunState, from: number, to: number): void {
+  if (state.prepared) {
+    computePrepared(state, state.prepared, from, to);
+    return;
+  }
   const { run, readers, options } = state;
   for (let p = from; p < to; p++) {
     const input = pointInput(options.base, options.plan, p);

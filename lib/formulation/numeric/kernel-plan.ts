@@ -35,6 +35,26 @@ export const KNOB_SOLIDS = 2;
 export const KNOB_STEP = 3;
 export const KNOB_SPEED = 4;
 
+/** Per component coefficients, interleaved in KernelPlan.coef (STRIDE numbers per component), per g of residue. */
+export const C_MASS = 0;
+export const C_VOLUME = 1;
+export const C_ATOMS = 2;
+export const C_GROUPS = 3;
+export const C_WATER = 4;
+export const C_SOLVENT = 5;
+export const C_VOC = 6;
+export const C_EPOXY = 7;
+export const C_AMINE = 8;
+/** g × price per kg (NaN without a price, so that the cost comes out NaN: absent). */
+export const C_COST = 9;
+/** Per unit weight fraction: 1 / ρ_phase, the same for organic phases only, 1 for organic phases, organic share, Lorentz–Lorenz term / ρ. */
+export const C_SPECIFIC = 10;
+export const C_ORGANIC_SPECIFIC = 11;
+export const C_ORGANIC = 12;
+export const C_SHARE = 13;
+export const C_OPTICS = 14;
+export const STRIDE = 15;
+
 /** The structure of one input, resolved; per component arrays are in the input's component order. */
 export interface KernelPlan {
   n: number;
@@ -43,22 +63,11 @@ export interface KernelPlan {
   knobIndex: Int32Array;
   weights: Float64Array;
   precursor: Uint8Array;
-  massPerResidue: Float64Array;
-  perDensity: Float64Array;
+  /** STRIDE coefficients per component (C_MASS …). */
+  coef: Float64Array;
   molesPerResidue: Float64Array;
-  atomsPerResidue: Float64Array;
-  groupsPerResidue: Float64Array;
-  waterPerResidue: Float64Array;
-  solventPerResidue: Float64Array;
-  vocPerResidue: Float64Array;
-  price: Float64Array;
-  epoxyPerResidue: Float64Array;
-  aminePerResidue: Float64Array;
   phaseDensity: Float64Array;
   organic: Uint8Array;
-  share: Float64Array;
-  /** Lorentz–Lorenz term over phase density, NaN when the phase has no index. */
-  opticsTerm: Float64Array;
   /** Thermal subject of a present component (organic phase), or its precursor's conversion temperature. */
   subject: (ThermalProfile | undefined)[];
   conversionC: Float64Array;
@@ -145,21 +154,10 @@ export function kernelPlan(table: MaterialTable, input: FormulationInput, knobs:
     knobIndex: new Int32Array(knobs.length).fill(-1),
     weights: f64(n),
     precursor: new Uint8Array(n),
-    massPerResidue: f64(n),
-    perDensity: f64(n),
+    coef: f64(n * STRIDE),
     molesPerResidue: f64(n),
-    atomsPerResidue: f64(n),
-    groupsPerResidue: f64(n),
-    waterPerResidue: f64(n),
-    solventPerResidue: f64(n),
-    vocPerResidue: f64(n),
-    price: f64(n),
-    epoxyPerResidue: f64(n),
-    aminePerResidue: f64(n),
     phaseDensity: f64(n),
     organic: new Uint8Array(n),
-    share: f64(n),
-    opticsTerm: f64(n),
     subject: new Array<ThermalProfile | undefined>(n).fill(undefined),
     conversionC: f64(n).fill(Number.NaN),
     thermalComponents: new Int32Array(0),
@@ -222,6 +220,7 @@ export function kernelPlan(table: MaterialTable, input: FormulationInput, knobs:
     const line = lineOf(row, table, solventIndex, false, true);
     const data = coatMaterialData(row.material);
     const p = row.precursor;
+    const c = plan.coef.subarray(i * STRIDE, (i + 1) * STRIDE);
     let mass: number;
     let active: number;
     if (row.material.kind === "precursor") {
@@ -229,11 +228,11 @@ export function kernelPlan(table: MaterialTable, input: FormulationInput, knobs:
       plan.precursor[i] = 1;
       plan.molesPerResidue[i] = row.molPerResidueGram;
       mass = row.molPerResidueGram * row.molarMass * row.perAssay;
-      plan.atomsPerResidue[i] = row.molPerResidueGram * p.networkAtomsPerMolecule;
-      plan.groupsPerResidue[i] = row.molPerResidueGram * p.hydrolysableGroupsPerMolecule;
-      plan.waterPerResidue[i] = mass * row.waterMolPerGram + row.molPerResidueGram * row.crystalWater;
-      const alcohol = row.alcoholSlot >= 0 ? table.alcohols[row.alcoholSlot]!.molarMass * plan.groupsPerResidue[i]! : 0;
-      plan.vocPerResidue[i] = mass * line.vocPerGram + alcohol;
+      c[C_ATOMS] = row.molPerResidueGram * p.networkAtomsPerMolecule;
+      c[C_GROUPS] = row.molPerResidueGram * p.hydrolysableGroupsPerMolecule;
+      c[C_WATER] = mass * row.waterMolPerGram + row.molPerResidueGram * row.crystalWater;
+      const alcohol = row.alcoholSlot >= 0 ? table.alcohols[row.alcoholSlot]!.molarMass * c[C_GROUPS]! : 0;
+      c[C_VOC] = mass * line.vocPerGram + alcohol;
       plan.phaseDensity[i] = p.residueDensity;
       if (p.conversionTemperatureC !== undefined) {
         plan.conversionC[i] = p.conversionTemperatureC;
@@ -243,22 +242,25 @@ export function kernelPlan(table: MaterialTable, input: FormulationInput, knobs:
     } else {
       if (row.phaseDensityField !== "") return undefined;
       mass = row.perAssay;
-      plan.waterPerResidue[i] = mass * row.waterMolPerGram;
-      plan.vocPerResidue[i] = mass * line.vocPerGram;
+      c[C_WATER] = mass * row.waterMolPerGram;
+      c[C_VOC] = mass * line.vocPerGram;
       plan.phaseDensity[i] = row.phaseDensity;
       plan.organic[i] = 1;
+      c[C_ORGANIC_SPECIFIC] = 1 / row.phaseDensity;
+      c[C_ORGANIC] = 1;
       plan.subject[i] = row.thermal;
       if (row.thermal) thermal.push(i);
       active = 1;
     }
-    plan.massPerResidue[i] = mass;
-    plan.perDensity[i] = row.perDensity;
-    plan.solventPerResidue[i] = mass * line.solventPerGram;
-    plan.price[i] = data.pricePerKg;
-    plan.epoxyPerResidue[i] = data.curing ? active * data.epoxyPerGram : 0;
-    plan.aminePerResidue[i] = data.curing ? active * data.aminePerGram : 0;
-    plan.share[i] = row.organicShare;
-    plan.opticsTerm[i] = data.lorentzLorenzTerm / plan.phaseDensity[i]!;
+    c[C_MASS] = mass;
+    c[C_VOLUME] = mass * row.perDensity;
+    c[C_SOLVENT] = mass * line.solventPerGram;
+    c[C_COST] = mass * data.pricePerKg;
+    c[C_EPOXY] = data.curing ? active * data.epoxyPerGram : 0;
+    c[C_AMINE] = data.curing ? active * data.aminePerGram : 0;
+    c[C_SPECIFIC] = 1 / plan.phaseDensity[i]!;
+    c[C_SHARE] = row.organicShare;
+    c[C_OPTICS] = data.lorentzLorenzTerm / plan.phaseDensity[i]!;
     if (input.water.ratio === "perPrecursor" && component.materialId === input.water.referenceId && row.material.kind === "precursor") plan.waterReference = i;
   }
   plan.thermalComponents = Int32Array.from(thermal);

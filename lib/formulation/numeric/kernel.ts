@@ -11,7 +11,10 @@ import { MIN_LINE_GRAMS, ML_PER_L } from "../constants";
 import type { ProcessStep } from "../input-schema";
 import { numericFilm } from "./coat-film";
 import { SCALAR_FIGURES, type ScalarFigure } from "./compare";
-import { KNOB_SOLIDS, KNOB_SPEED, KNOB_STEP, KNOB_WATER, KNOB_WEIGHT, type KernelPlan, type LineCoefficients } from "./kernel-plan";
+import {
+  C_AMINE, C_ATOMS, C_COST, C_EPOXY, C_GROUPS, C_MASS, C_OPTICS, C_ORGANIC, C_ORGANIC_SPECIFIC, C_SHARE, C_SOLVENT, C_SPECIFIC, C_VOC, C_VOLUME, C_WATER,
+  KNOB_SOLIDS, KNOB_SPEED, KNOB_STEP, KNOB_WATER, KNOB_WEIGHT, STRIDE, type KernelPlan, type LineCoefficients,
+} from "./kernel-plan";
 import { thermalVerdict, type ThermalProfile } from "./thermal";
 
 /** The point needs the general branch. */
@@ -61,6 +64,7 @@ export interface KernelState {
   mask: number;
   status: number;
   maxAllowedC: number;
+  readonly sums: Sums;
 }
 
 /**
@@ -72,7 +76,8 @@ export interface KernelState {
  * ```
  */
 export function kernelState(plan: KernelPlan): KernelState {
-  return { w: new Float64Array(plan.n), mask: -1, status: 0, maxAllowedC: Number.NaN };
+  const sums: Sums = { mass: 0, volume: 0, water: 0, solvent: 0, voc: 0, cost: 0, priced: 0, epoxy: 0, amine: 0 };
+  return { w: new Float64Array(plan.n), mask: -1, status: 0, maxAllowedC: Number.NaN, sums };
 }
 
 /** Sums of the lines other than the components. */
@@ -84,7 +89,6 @@ interface Sums {
   voc: number;
   cost: number;
   priced: number;
-  absent: boolean;
   epoxy: number;
   amine: number;
 }
@@ -96,11 +100,8 @@ function addLine(s: Sums, line: LineCoefficients, grams: number, volume: number)
   s.solvent += grams * line.solventPerGram;
   s.voc += grams * line.vocPerGram;
   if (grams > 0) {
-    if (Number.isNaN(line.price)) s.absent = true;
-    else {
-      s.priced += 1;
-      s.cost += grams * line.price;
-    }
+    s.priced += 1;
+    s.cost += grams * line.price;
   }
   s.epoxy += grams * line.epoxyPerGram;
   s.amine += grams * line.aminePerGram;
@@ -159,7 +160,16 @@ export function kernelPoint(plan: KernelPlan, state: KernelState, values: Float6
   const exact = Math.abs(floatSum - 1) <= 1e-12;
 
   const w = state.w;
-  const s: Sums = { mass: 0, volume: 0, water: 0, solvent: 0, voc: 0, cost: 0, priced: 0, absent: false, epoxy: 0, amine: 0 };
+  const s = state.sums;
+  let mass = 0;
+  let volume = 0;
+  let water = 0;
+  let solvent = 0;
+  let voc = 0;
+  let cost = 0;
+  let priced = 0;
+  let epoxy = 0;
+  let amine = 0;
   let atoms = 0;
   let groups = 0;
   let specific = 0;
@@ -168,43 +178,44 @@ export function kernelPoint(plan: KernelPlan, state: KernelState, values: Float6
   let content = 0;
   let optics = 0;
   let known = 0;
-  let opticsAbsent = false;
-  for (let i = 0; i < n; i++) {
+  const c = plan.coef;
+  for (let i = 0, o = 0; i < n; i++, o += STRIDE) {
     const wi = exact ? weights[i]! : weights[i]! / floatSum;
     w[i] = wi;
     const residue = wi * solidMass;
-    const mass = residue * plan.massPerResidue[i]!;
-    s.mass += mass;
-    s.volume += mass * plan.perDensity[i]!;
-    atoms += residue * plan.atomsPerResidue[i]!;
-    groups += residue * plan.groupsPerResidue[i]!;
-    s.water += residue * plan.waterPerResidue[i]!;
-    s.solvent += residue * plan.solventPerResidue[i]!;
-    s.voc += residue * plan.vocPerResidue[i]!;
-    if (mass > 0) {
-      const price = plan.price[i]!;
-      if (Number.isNaN(price)) s.absent = true;
-      else {
-        s.priced += 1;
-        s.cost += mass * price;
-      }
+    const grams = residue * c[o + C_MASS]!;
+    mass += grams;
+    volume += residue * c[o + C_VOLUME]!;
+    atoms += residue * c[o + C_ATOMS]!;
+    groups += residue * c[o + C_GROUPS]!;
+    water += residue * c[o + C_WATER]!;
+    solvent += residue * c[o + C_SOLVENT]!;
+    voc += residue * c[o + C_VOC]!;
+    epoxy += residue * c[o + C_EPOXY]!;
+    amine += residue * c[o + C_AMINE]!;
+    specific += wi * c[o + C_SPECIFIC]!;
+    organicW += wi * c[o + C_ORGANIC]!;
+    organicSpecific += wi * c[o + C_ORGANIC_SPECIFIC]!;
+    content += wi * c[o + C_SHARE]!;
+    if (grams > 0) {
+      // a NaN price makes the cost NaN: absent, as when cost.ts finds a line without a price
+      priced += 1;
+      cost += residue * c[o + C_COST]!;
     }
-    s.epoxy += residue * plan.epoxyPerResidue[i]!;
-    s.amine += residue * plan.aminePerResidue[i]!;
-    const phaseSpecific = wi / plan.phaseDensity[i]!;
-    specific += phaseSpecific;
-    if (plan.organic[i]) {
-      organicW += wi;
-      organicSpecific += phaseSpecific;
-    }
-    content += wi * plan.share[i]!;
     if (wi !== 0) {
-      const term = plan.opticsTerm[i]!;
-      if (Number.isNaN(term)) opticsAbsent = true;
-      optics += wi * term;
+      optics += wi * c[o + C_OPTICS]!;
       known += 1;
     }
   }
+  s.mass = mass;
+  s.volume = volume;
+  s.water = water;
+  s.solvent = solvent;
+  s.voc = voc;
+  s.cost = cost;
+  s.priced = priced;
+  s.epoxy = epoxy;
+  s.amine = amine;
   if (!(atoms > 0)) return KERNEL_GENERAL;
   if (plan.waterRatio === 1 && !(groups > 0)) return KERNEL_GENERAL;
 
@@ -307,7 +318,7 @@ export function kernelPoint(plan: KernelPlan, state: KernelState, values: Float6
     capillary = film.capillaryNumber;
   }
   let index = Number.NaN;
-  if (!opticsAbsent && known > 0) {
+  if (known > 0 && !Number.isNaN(optics)) {
     const sum = optics * density;
     const term = pores === 0 ? sum : sum * (1 - pores);
     index = Math.sqrt((1 + term * 2) / (1 - term));
@@ -341,8 +352,8 @@ export function kernelPoint(plan: KernelPlan, state: KernelState, values: Float6
   out[F.vocPerL] = (s.voc * ML_PER_L) / solVolume;
   out[F.vocLessWater] = (s.voc * ML_PER_L) / lessWaterMl;
   out[F.cure] = s.epoxy > 0 ? s.amine / s.epoxy : Number.NaN;
-  const priced = !s.absent && s.priced > 0;
-  const total = priced ? s.cost / 1000 : Number.NaN;
+  const hasCost = s.priced > 0 && !Number.isNaN(s.cost);
+  const total = hasCost ? s.cost / 1000 : Number.NaN;
   const perLitre = (total * ML_PER_L) / solVolume;
   out[F.costTotal] = total;
   out[F.costPerKg] = (total * 1000) / solidMass;
