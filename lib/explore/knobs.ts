@@ -7,8 +7,12 @@
  */
 import type { FormulationInput } from "../formulation/input-schema";
 import type { Knob } from "../formulation/numeric/knobs";
-import { prepare, SUM_TOLERANCE, tidy, type PointRefusal } from "./apply";
+import { prepare, SUM_TOLERANCE, tidy as tidyWeight, type PointRefusal } from "./apply";
 import type { GridPlan } from "./types";
+
+// Read once (an imported binding is a getter where modules are compiled one by one).
+const tidy = tidyWeight;
+const SLACK = SUM_TOLERANCE;
 
 /** The knobs of a plan and where each axis writes. */
 export interface KnobPlan {
@@ -83,9 +87,9 @@ export function pointKnobs(base: FormulationInput, plan: GridPlan, k: KnobPlan, 
   }
   if (!k.weights) return undefined;
   let remainder = 1 - sum;
-  if (remainder < -SUM_TOLERANCE) return { code: "fractions_over_one", field: "components" };
+  if (remainder < -SLACK) return { code: "fractions_over_one", field: "components" };
   if (remainder < 0) remainder = 0;
-  if (remainder > SUM_TOLERANCE && !(k.othersTotal > 0)) return { code: "nothing_takes_the_rest", field: "components" };
+  if (remainder > SLACK && !(k.othersTotal > 0)) return { code: "nothing_takes_the_rest", field: "components" };
   const scale = k.othersTotal > 0 ? remainder / k.othersTotal : 0;
   for (let i = 0; i < n; i++) values[i] = tidy(components[i]!.weightFraction * scale);
   // a component on both axes takes the first axis's value, as pointInput does

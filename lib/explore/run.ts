@@ -8,7 +8,7 @@ import type { FormulationInput } from "../formulation/input-schema";
 import type { NumericEvaluator, NumericModel } from "../formulation/numeric/figures";
 import { isPointRefusal, pointInput } from "./apply";
 import { isPlanError, planGrid } from "./grid";
-import { knobPlan, pointKnobs, type KnobPlan } from "./knobs";
+import { knobPlan, pointKnobs as knobsAt, type KnobPlan } from "./knobs";
 import { evaluatorReader, outputReader, type EvaluatorReader, type OutputReader } from "./outputs";
 import { bestCandidates, searchOutputs } from "./search";
 import type { Grid, OutputKey, Search } from "./spec";
@@ -37,6 +37,8 @@ export interface AsyncRunOptions extends RunOptions {
 }
 
 const REFUSED = POINT_STATUSES.indexOf("refused");
+/** Read once (an imported binding is a getter where modules are compiled one by one). */
+const pointKnobs = knobsAt;
 const STATUS_INDEX: Record<string, number> = { clear: 0, caution: 1, fail: 2 };
 
 /** Points computed between two yields to the event loop, unless the caller says otherwise. */

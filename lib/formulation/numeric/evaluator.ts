@@ -9,6 +9,7 @@ import type { ThermalStatus } from "../result-types";
 import { SCALAR_FIGURES } from "./compare";
 import type { NumericEvaluator, NumericFigures, NumericOutcome, NumericPhase } from "./figures";
 import { KERNEL_GENERAL, kernelPoint, kernelState } from "./kernel";
+import { C_ORGANIC, C_PHASE_DENSITY, STRIDE, zeros } from "./kernel-layout";
 import { kernelPlan } from "./kernel-plan";
 import { inputAt, type Knob } from "./knobs";
 import type { MaterialTable } from "./material-table";
@@ -16,6 +17,9 @@ import type { MaterialTable } from "./material-table";
 const STATUS: readonly ThermalStatus[] = ["clear", "caution", "fail"];
 const STATUS_RANK: Record<string, number> = { clear: 0, caution: 1, fail: 2 };
 const REFUSED = -1;
+// Read once (an imported binding is a getter where modules are compiled one by one).
+const GENERAL = KERNEL_GENERAL;
+const point = kernelPoint;
 
 /**
  * An evaluator of `base` with `knobs` varied over the materials of `table`.
@@ -35,7 +39,7 @@ export function numericEvaluator(
 ): NumericEvaluator {
   const plan = kernelPlan(table, base, knobs);
   const state = plan && kernelState(plan);
-  const figures = new Float64Array(SCALAR_FIGURES.length);
+  const figures = zeros(SCALAR_FIGURES.length);
   const density = SCALAR_FIGURES.indexOf("theoreticalDensity");
   const ids = base.components.map((c) => c.materialId);
   const refusal = { code: "", field: "" };
@@ -47,18 +51,18 @@ export function numericEvaluator(
     if (last) return last.phases;
     return ids.map((materialId, i) => {
       const w = state!.w[i]!;
-      return { materialId, organic: plan!.organic[i] === 1, weightFraction: w, volumeFraction: (w / plan!.phaseDensity[i]!) * figures[density]! };
+      return { materialId, organic: plan!.coef[i * STRIDE + C_ORGANIC] === 1, weightFraction: w, volumeFraction: (w / plan!.coef[i * STRIDE + C_PHASE_DENSITY]!) * figures[density]! };
     });
   }
 
   return {
     figures,
     refusal,
-    evaluate(values: Float64Array): number {
+    evaluate(values: ArrayLike<number>): number {
       last = undefined;
       if (plan) {
-        status = kernelPoint(plan, state!, values, figures);
-        if (status !== KERNEL_GENERAL) return status;
+        status = point(plan, state!, values, figures);
+        if (status !== GENERAL) return status;
       }
       const outcome = general(inputAt(base, knobs, values));
       if (!outcome.ok) {
@@ -83,15 +87,54 @@ export function numericEvaluator(
       for (let i = 0; i < ids.length; i++) {
         if (ids[i] !== id) continue;
         const w = state!.w[i]!;
-        sum += field === "weightFraction" ? w : (w / plan!.phaseDensity[i]!) * figures[density]!;
+        sum += field === "weightFraction" ? w : (w / plan!.coef[i * STRIDE + C_PHASE_DENSITY]!) * figures[density]!;
       }
       return sum;
     },
     toFigures(): NumericFigures {
-      if (last) return last;
-      const out = {} as Record<string, number>;
-      for (let k = 0; k < SCALAR_FIGURES.length; k++) out[SCALAR_FIGURES[k]!] = figures[k]!;
-      return { ...(out as Omit<NumericFigures, "phases" | "thermalStatus">), phases: phases(), thermalStatus: STATUS[status]! };
+      return last ?? figuresObject(figures, phases(), STATUS[status]!);
     },
+  };
+}
+
+const I = Object.fromEntries(SCALAR_FIGURES.map((key, k) => [key, k])) as Record<(typeof SCALAR_FIGURES)[number], number>;
+
+/** A figures object (one shape, keys in the order of evaluatePoint's) from the scalar figures. */
+function figuresObject(f: readonly number[], phases: NumericPhase[], thermalStatus: ThermalStatus): NumericFigures {
+  return {
+    solMassGrams: f[I.solMassGrams]!,
+    solVolumeMl: f[I.solVolumeMl]!,
+    solidsFraction: f[I.solidsFraction]!,
+    residueGramsPerL: f[I.residueGramsPerL]!,
+    compositeMassGrams: f[I.compositeMassGrams]!,
+    theoreticalDensity: f[I.theoreticalDensity]!,
+    porosity: f[I.porosity]!,
+    denseLinearShrinkage: f[I.denseLinearShrinkage]!,
+    denseVolumetricShrinkage: f[I.denseVolumetricShrinkage]!,
+    organicWeightFraction: f[I.organicWeightFraction]!,
+    organicVolumeFraction: f[I.organicVolumeFraction]!,
+    organicContent: f[I.organicContent]!,
+    phases,
+    effectiveR: f[I.effectiveR]!,
+    effectiveH: f[I.effectiveH]!,
+    waterAddGrams: f[I.waterAddGrams]!,
+    solventAddedGrams: f[I.solventAddedGrams]!,
+    solventMolPerNetworkAtom: f[I.solventMolPerNetworkAtom]!,
+    thermalStatus,
+    maxAllowedC: f[I.maxAllowedC]!,
+    wetThicknessUm: f[I.wetThicknessUm]!,
+    dryThicknessNm: f[I.dryThicknessNm]!,
+    coverageM2PerL: f[I.coverageM2PerL]!,
+    capillaryNumber: f[I.capillaryNumber]!,
+    refractiveIndex: f[I.refractiveIndex]!,
+    indexMismatch: f[I.indexMismatch]!,
+    vocMassGrams: f[I.vocMassGrams]!,
+    vocGramsPerLitre: f[I.vocGramsPerLitre]!,
+    vocGramsPerLitreLessWater: f[I.vocGramsPerLitreLessWater]!,
+    cureRatio: f[I.cureRatio]!,
+    costTotal: f[I.costTotal]!,
+    costPerKgDry: f[I.costPerKgDry]!,
+    costPerLitreSol: f[I.costPerLitreSol]!,
+    costPerM2: f[I.costPerM2]!,
   };
 }

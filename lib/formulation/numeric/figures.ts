@@ -116,14 +116,14 @@ export type NumericOutcome = { ok: true; figures: NumericFigures } | NumericFail
  */
 export interface NumericEvaluator {
   /** The scalar figures of the last point, in SCALAR_FIGURES order (compare.ts); NaN where absent or refused. */
-  readonly figures: Float64Array;
+  readonly figures: number[];
   /**
    * Computes one point.
    *
    * @param values - one value per knob, in the order the evaluator was prepared with
    * @returns the thermal status (0 clear, 1 caution, 2 fail), or −1 when the engine would refuse the point
    */
-  evaluate(values: Float64Array): number;
+  evaluate(values: ArrayLike<number>): number;
   /** The refusal of the last point (when evaluate returned −1): the engine's code and field. */
   readonly refusal: { code: string; field: string };
   /** Σ weight or volume fraction of the last point's phases of material `id`. */

@@ -11,6 +11,10 @@
 import { DEFAULT_THERMAL_MARGIN_C, WATER_MOLAR_MASS_G_PER_MOL } from "../constants";
 import type { CoatingSpec, FormulationInput, ProcessStep } from "../input-schema";
 import { coatMaterialData } from "./coat-material";
+import {
+  C_AMINE, C_ATOMS, C_CONVERSION, C_COST, C_EPOXY, C_GROUPS, C_MASS, C_MOLES, C_OPTICS, C_ORGANIC, C_ORGANIC_SPECIFIC, C_PHASE_DENSITY, C_SHARE, C_SOLVENT,
+  C_SPECIFIC, C_VOC, C_VOLUME, C_WATER, KNOB_SOLIDS, KNOB_SPEED, KNOB_STEP, KNOB_WATER, KNOB_WEIGHT, STRIDE, zeros,
+} from "./kernel-layout";
 import type { Knob } from "./knobs";
 import type { MaterialTable, TableMaterial } from "./material-table";
 import type { ThermalProfile } from "./thermal";
@@ -28,51 +32,20 @@ export interface LineCoefficients {
   aminePerGram: number;
 }
 
-/** Knob codes of the kernel (per knob, what it sets). */
-export const KNOB_WEIGHT = 0;
-export const KNOB_WATER = 1;
-export const KNOB_SOLIDS = 2;
-export const KNOB_STEP = 3;
-export const KNOB_SPEED = 4;
-
-/** Per component coefficients, interleaved in KernelPlan.coef (STRIDE numbers per component), per g of residue. */
-export const C_MASS = 0;
-export const C_VOLUME = 1;
-export const C_ATOMS = 2;
-export const C_GROUPS = 3;
-export const C_WATER = 4;
-export const C_SOLVENT = 5;
-export const C_VOC = 6;
-export const C_EPOXY = 7;
-export const C_AMINE = 8;
-/** g × price per kg (NaN without a price, so that the cost comes out NaN: absent). */
-export const C_COST = 9;
-/** Per unit weight fraction: 1 / ρ_phase, the same for organic phases only, 1 for organic phases, organic share, Lorentz–Lorenz term / ρ. */
-export const C_SPECIFIC = 10;
-export const C_ORGANIC_SPECIFIC = 11;
-export const C_ORGANIC = 12;
-export const C_SHARE = 13;
-export const C_OPTICS = 14;
-export const STRIDE = 15;
 
 /** The structure of one input, resolved; per component arrays are in the input's component order. */
 export interface KernelPlan {
   n: number;
-  knobCode: Int32Array;
+  knobCode: number[];
   /** Component or step index per knob (−1 when none). */
-  knobIndex: Int32Array;
-  weights: Float64Array;
-  precursor: Uint8Array;
+  knobIndex: number[];
+  weights: number[];
   /** STRIDE coefficients per component (C_MASS …). */
-  coef: Float64Array;
-  molesPerResidue: Float64Array;
-  phaseDensity: Float64Array;
-  organic: Uint8Array;
+  coef: number[];
   /** Thermal subject of a present component (organic phase), or its precursor's conversion temperature. */
   subject: (ThermalProfile | undefined)[];
-  conversionC: Float64Array;
   /** Components whose presence changes the thermal verdict. */
-  thermalComponents: Int32Array;
+  thermalComponents: number[];
   basisType: FormulationInput["basis"]["type"];
   /** Solids-content basis: sol mass and solids fraction; solid-mass basis: grams in solMassGrams; gel body: S. */
   solMassGrams: number;
@@ -126,7 +99,6 @@ function lineOf(row: TableMaterial, table: MaterialTable, solventIndex: number, 
   };
 }
 
-const f64 = (n: number): Float64Array => new Float64Array(n);
 
 /**
  * The kernel's plan for `input` with `knobs` varied, or undefined when the kernel does not cover it.
@@ -150,17 +122,12 @@ export function kernelPlan(table: MaterialTable, input: FormulationInput, knobs:
   if (input.solvent?.mode === "fill" && basis.type === "solidMass") return undefined;
   const plan: KernelPlan = {
     n,
-    knobCode: new Int32Array(knobs.length),
-    knobIndex: new Int32Array(knobs.length).fill(-1),
-    weights: f64(n),
-    precursor: new Uint8Array(n),
-    coef: f64(n * STRIDE),
-    molesPerResidue: f64(n),
-    phaseDensity: f64(n),
-    organic: new Uint8Array(n),
-    subject: new Array<ThermalProfile | undefined>(n).fill(undefined),
-    conversionC: f64(n).fill(Number.NaN),
-    thermalComponents: new Int32Array(0),
+    knobCode: [],
+    knobIndex: [],
+    weights: zeros(n),
+    coef: zeros(n * STRIDE),
+    subject: [],
+    thermalComponents: [],
     basisType: basis.type,
     solMassGrams: basis.type === "solidsContent" ? basis.solMassGrams : Number.NaN,
     solidsFraction: basis.type === "solidsContent" ? basis.solidsFraction : Number.NaN,
@@ -220,65 +187,67 @@ export function kernelPlan(table: MaterialTable, input: FormulationInput, knobs:
     const line = lineOf(row, table, solventIndex, false, true);
     const data = coatMaterialData(row.material);
     const p = row.precursor;
-    const c = plan.coef.subarray(i * STRIDE, (i + 1) * STRIDE);
+    const c = plan.coef;
+    const o = i * STRIDE;
+    plan.subject.push(undefined);
+    c[o + C_CONVERSION] = Number.NaN;
     let mass: number;
     let active: number;
     if (row.material.kind === "precursor") {
       if (!p || Number.isNaN(row.molarMass)) return undefined;
-      plan.precursor[i] = 1;
-      plan.molesPerResidue[i] = row.molPerResidueGram;
+      c[o + C_MOLES] = row.molPerResidueGram;
       mass = row.molPerResidueGram * row.molarMass * row.perAssay;
-      c[C_ATOMS] = row.molPerResidueGram * p.networkAtomsPerMolecule;
-      c[C_GROUPS] = row.molPerResidueGram * p.hydrolysableGroupsPerMolecule;
-      c[C_WATER] = mass * row.waterMolPerGram + row.molPerResidueGram * row.crystalWater;
-      const alcohol = row.alcoholSlot >= 0 ? table.alcohols[row.alcoholSlot]!.molarMass * c[C_GROUPS]! : 0;
-      c[C_VOC] = mass * line.vocPerGram + alcohol;
-      plan.phaseDensity[i] = p.residueDensity;
+      c[o + C_ATOMS] = row.molPerResidueGram * p.networkAtomsPerMolecule;
+      c[o + C_GROUPS] = row.molPerResidueGram * p.hydrolysableGroupsPerMolecule;
+      c[o + C_WATER] = mass * row.waterMolPerGram + row.molPerResidueGram * row.crystalWater;
+      const alcohol = row.alcoholSlot >= 0 ? table.alcohols[row.alcoholSlot]!.molarMass * c[o + C_GROUPS]! : 0;
+      c[o + C_VOC] = mass * line.vocPerGram + alcohol;
+      c[o + C_PHASE_DENSITY] = p.residueDensity;
       if (p.conversionTemperatureC !== undefined) {
-        plan.conversionC[i] = p.conversionTemperatureC;
+        c[o + C_CONVERSION] = p.conversionTemperatureC;
         thermal.push(i);
       }
       active = mass * data.assayFactor;
     } else {
       if (row.phaseDensityField !== "") return undefined;
       mass = row.perAssay;
-      c[C_WATER] = mass * row.waterMolPerGram;
-      c[C_VOC] = mass * line.vocPerGram;
-      plan.phaseDensity[i] = row.phaseDensity;
-      plan.organic[i] = 1;
-      c[C_ORGANIC_SPECIFIC] = 1 / row.phaseDensity;
-      c[C_ORGANIC] = 1;
+      c[o + C_WATER] = mass * row.waterMolPerGram;
+      c[o + C_VOC] = mass * line.vocPerGram;
+      c[o + C_PHASE_DENSITY] = row.phaseDensity;
+      c[o + C_ORGANIC_SPECIFIC] = 1 / row.phaseDensity;
+      c[o + C_ORGANIC] = 1;
       plan.subject[i] = row.thermal;
       if (row.thermal) thermal.push(i);
       active = 1;
     }
-    c[C_MASS] = mass;
-    c[C_VOLUME] = mass * row.perDensity;
-    c[C_SOLVENT] = mass * line.solventPerGram;
-    c[C_COST] = mass * data.pricePerKg;
-    c[C_EPOXY] = data.curing ? active * data.epoxyPerGram : 0;
-    c[C_AMINE] = data.curing ? active * data.aminePerGram : 0;
-    c[C_SPECIFIC] = 1 / plan.phaseDensity[i]!;
-    c[C_SHARE] = row.organicShare;
-    c[C_OPTICS] = data.lorentzLorenzTerm / plan.phaseDensity[i]!;
+    c[o + C_MASS] = mass;
+    c[o + C_VOLUME] = mass * row.perDensity;
+    c[o + C_SOLVENT] = mass * line.solventPerGram;
+    c[o + C_COST] = mass * data.pricePerKg;
+    c[o + C_EPOXY] = data.curing ? active * data.epoxyPerGram : 0;
+    c[o + C_AMINE] = data.curing ? active * data.aminePerGram : 0;
+    c[o + C_SPECIFIC] = 1 / c[o + C_PHASE_DENSITY]!;
+    c[o + C_SHARE] = row.organicShare;
+    c[o + C_OPTICS] = data.lorentzLorenzTerm / c[o + C_PHASE_DENSITY]!;
     if (input.water.ratio === "perPrecursor" && component.materialId === input.water.referenceId && row.material.kind === "precursor") plan.waterReference = i;
   }
-  plan.thermalComponents = Int32Array.from(thermal);
+  plan.thermalComponents = thermal;
   for (let k = 0; k < knobs.length; k++) {
     const knob = knobs[k]!;
     if (knob.kind === "weightFraction") {
       if (!(knob.component >= 0 && knob.component < n)) return undefined;
-      plan.knobCode[k] = KNOB_WEIGHT;
-      plan.knobIndex[k] = knob.component;
-    } else if (knob.kind === "waterValue") plan.knobCode[k] = KNOB_WATER;
-    else if (knob.kind === "solidsFraction") plan.knobCode[k] = KNOB_SOLIDS;
+      plan.knobCode.push(KNOB_WEIGHT);
+      plan.knobIndex.push(knob.component);
+    } else if (knob.kind === "waterValue") plan.knobCode.push(KNOB_WATER);
+    else if (knob.kind === "solidsFraction") plan.knobCode.push(KNOB_SOLIDS);
     else if (knob.kind === "stepTemperature") {
       if (!(knob.index >= 0 && knob.index < plan.steps.length)) return undefined;
-      plan.knobCode[k] = KNOB_STEP;
-      plan.knobIndex[k] = knob.index;
+      plan.knobCode.push(KNOB_STEP);
+      plan.knobIndex.push(knob.index);
       plan.stepsVary = true;
-    } else if (knob.kind === "withdrawalSpeed") plan.knobCode[k] = KNOB_SPEED;
+    } else if (knob.kind === "withdrawalSpeed") plan.knobCode.push(KNOB_SPEED);
     else return undefined;
+    if (plan.knobIndex.length < plan.knobCode.length) plan.knobIndex.push(-1);
   }
   return plan;
 }

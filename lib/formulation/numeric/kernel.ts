@@ -11,11 +11,18 @@ import { MIN_LINE_GRAMS, ML_PER_L } from "../constants";
 import type { ProcessStep } from "../input-schema";
 import { numericFilm } from "./coat-film";
 import { SCALAR_FIGURES, type ScalarFigure } from "./compare";
-import {
-  C_AMINE, C_ATOMS, C_COST, C_EPOXY, C_GROUPS, C_MASS, C_OPTICS, C_ORGANIC, C_ORGANIC_SPECIFIC, C_SHARE, C_SOLVENT, C_SPECIFIC, C_VOC, C_VOLUME, C_WATER,
-  KNOB_SOLIDS, KNOB_SPEED, KNOB_STEP, KNOB_WATER, KNOB_WEIGHT, STRIDE, type KernelPlan, type LineCoefficients,
-} from "./kernel-plan";
+import * as layout from "./kernel-layout";
+import type { KernelPlan, LineCoefficients } from "./kernel-plan";
 import { thermalVerdict, type ThermalProfile } from "./thermal";
+
+// Local copies, read once: where modules are compiled one by one (tsx, vitest), an imported binding is
+// read through a getter at every use, which a loop over components cannot afford.
+const { C_AMINE, C_ATOMS, C_CONVERSION, C_COST, C_EPOXY, C_GROUPS, C_MASS, C_MOLES, C_OPTICS, C_ORGANIC, C_ORGANIC_SPECIFIC, C_SHARE, C_SOLVENT } = layout;
+const { C_SPECIFIC, C_VOC, C_VOLUME, C_WATER, KNOB_SOLIDS, KNOB_SPEED, KNOB_STEP, KNOB_WATER, KNOB_WEIGHT, STRIDE, zeros } = layout;
+const MIN_GRAMS = MIN_LINE_GRAMS;
+const PER_L = ML_PER_L;
+const film = numericFilm;
+const verdictOf = thermalVerdict;
 
 /** The point needs the general branch. */
 export const KERNEL_GENERAL = -2;
@@ -59,7 +66,7 @@ const F = {
 /** Scratch of one kernel: the point's weight fractions (scaled to 1) and the hoisted thermal verdict. */
 export interface KernelState {
   /** w_i of the last point, as the phases hold them. */
-  readonly w: Float64Array;
+  readonly w: number[];
   /** Bit i set when thermal component i is present; −1 before the first point. */
   mask: number;
   status: number;
@@ -77,7 +84,7 @@ export interface KernelState {
  */
 export function kernelState(plan: KernelPlan): KernelState {
   const sums: Sums = { mass: 0, volume: 0, water: 0, solvent: 0, voc: 0, cost: 0, priced: 0, epoxy: 0, amine: 0 };
-  return { w: new Float64Array(plan.n), mask: -1, status: 0, maxAllowedC: Number.NaN, sums };
+  return { w: zeros(plan.n), mask: -1, status: 0, maxAllowedC: Number.NaN, sums };
 }
 
 /** Sums of the lines other than the components. */
@@ -112,7 +119,7 @@ const subjects: ThermalProfile[] = [];
 const conversions: number[] = [];
 
 /** The thermal verdict of the point, recomputed only when the present subjects or the steps change. */
-function thermal(plan: KernelPlan, state: KernelState, w: Float64Array): void {
+function thermal(plan: KernelPlan, state: KernelState, w: readonly number[]): void {
   const list = plan.thermalComponents;
   let mask = 0;
   for (let k = 0; k < list.length && k < 30; k++) if (w[list[k]!] !== 0) mask |= 1 << k;
@@ -124,10 +131,10 @@ function thermal(plan: KernelPlan, state: KernelState, w: Float64Array): void {
     if (w[i] === 0) continue;
     const subject = plan.subject[i];
     if (subject) subjects.push(subject);
-    else conversions.push(plan.conversionC[i]!);
+    else conversions.push(plan.coef[i * STRIDE + C_CONVERSION]!);
   }
   if (plan.substrate) subjects.push(plan.substrate);
-  const verdict = thermalVerdict(subjects, conversions, plan.steps as readonly ProcessStep[], plan.marginC);
+  const verdict = verdictOf(subjects, conversions, plan.steps as readonly ProcessStep[], plan.marginC);
   state.mask = mask;
   state.status = STATUS_RANK[verdict.status]!;
   state.maxAllowedC = verdict.maxAllowedC;
@@ -142,7 +149,7 @@ function thermal(plan: KernelPlan, state: KernelState, w: Float64Array): void {
  * const status = kernelPoint(plan, kernelState(plan), Float64Array.of(0.3, 4), out);
  * ```
  */
-export function kernelPoint(plan: KernelPlan, state: KernelState, values: Float64Array, out: Float64Array): number {
+export function kernelPoint(plan: KernelPlan, state: KernelState, values: ArrayLike<number>, out: number[]): number {
   const weights = plan.weights;
   for (let k = 0; k < values.length; k++) {
     const code = plan.knobCode[k];
@@ -234,13 +241,13 @@ export function kernelPoint(plan: KernelPlan, state: KernelState, values: Float6
       addedMol = addMol;
       const grams = addMol * plan.solventGramsPerMol;
       solventAdded = grams;
-      if (grams >= MIN_LINE_GRAMS) addLine(s, plan.solventLine!, grams, grams * plan.solventLine!.perDensity);
+      if (grams >= MIN_GRAMS) addLine(s, plan.solventLine!, grams, grams * plan.solventLine!.perDensity);
     }
     const ratio = (addedMol + carriedMol) / atoms;
     if (Number.isFinite(ratio)) solventPerAtom = ratio;
   }
   const reference = plan.waterReference;
-  const basisMol = plan.waterRatio === 0 ? atoms : plan.waterRatio === 1 ? groups : reference >= 0 ? w[reference]! * solidMass * plan.molesPerResidue[reference]! : 0;
+  const basisMol = plan.waterRatio === 0 ? atoms : plan.waterRatio === 1 ? groups : reference >= 0 ? w[reference]! * solidMass * plan.coef[reference * STRIDE + C_MOLES]! : 0;
   const targetMol = plan.waterValue * basisMol;
   const waterMolarMass = plan.waterMolarMass;
   let addMol: number;
@@ -264,7 +271,7 @@ export function kernelPoint(plan: KernelPlan, state: KernelState, values: Float6
         addMol = 0;
       }
     }
-    if (Math.abs(grams) < MIN_LINE_GRAMS) grams = 0;
+    if (Math.abs(grams) < MIN_GRAMS) grams = 0;
     if (grams < 0) return KERNEL_GENERAL;
     let addedMol = Number.NaN;
     if (grams > 0) {
@@ -278,7 +285,7 @@ export function kernelPoint(plan: KernelPlan, state: KernelState, values: Float6
     addMol = plan.countCarried ? Math.max(targetMol - s.water, 0) : targetMol;
   }
   let addGrams = 0;
-  if (addMol * waterMolarMass < MIN_LINE_GRAMS) addMol = 0;
+  if (addMol * waterMolarMass < MIN_GRAMS) addMol = 0;
   if (addMol > 0) {
     addGrams = addMol * waterMolarMass;
     const water = plan.waterLine;
@@ -311,11 +318,11 @@ export function kernelPoint(plan: KernelPlan, state: KernelState, values: Float6
   let coverage = Number.NaN;
   let capillary = Number.NaN;
   if (plan.coating) {
-    const film = numericFilm(plan.coating, ratio, pores, solMass / solVolume);
-    wet = film.wetThicknessUm;
-    dry = film.dryThicknessNm;
-    coverage = film.coverageM2PerL;
-    capillary = film.capillaryNumber;
+    const coat = film(plan.coating, ratio, pores, solMass / solVolume);
+    wet = coat.wetThicknessUm;
+    dry = coat.dryThicknessNm;
+    coverage = coat.coverageM2PerL;
+    capillary = coat.capillaryNumber;
   }
   let index = Number.NaN;
   if (known > 0 && !Number.isNaN(optics)) {
@@ -327,7 +334,7 @@ export function kernelPoint(plan: KernelPlan, state: KernelState, values: Float6
   out[F.solMass] = solMass;
   out[F.solVolume] = solVolume;
   out[F.solids] = solidMass / solMass;
-  out[F.residuePerL] = (solidMass * ML_PER_L) / solVolume;
+  out[F.residuePerL] = (solidMass * PER_L) / solVolume;
   out[F.composite] = solidMass;
   out[F.density] = density;
   out[F.porosity] = porosity;
@@ -349,12 +356,12 @@ export function kernelPoint(plan: KernelPlan, state: KernelState, values: Float6
   out[F.index] = index;
   out[F.mismatch] = index - plan.substrateIndex;
   out[F.voc] = s.voc;
-  out[F.vocPerL] = (s.voc * ML_PER_L) / solVolume;
-  out[F.vocLessWater] = (s.voc * ML_PER_L) / lessWaterMl;
+  out[F.vocPerL] = (s.voc * PER_L) / solVolume;
+  out[F.vocLessWater] = (s.voc * PER_L) / lessWaterMl;
   out[F.cure] = s.epoxy > 0 ? s.amine / s.epoxy : Number.NaN;
   const hasCost = s.priced > 0 && !Number.isNaN(s.cost);
   const total = hasCost ? s.cost / 1000 : Number.NaN;
-  const perLitre = (total * ML_PER_L) / solVolume;
+  const perLitre = (total * PER_L) / solVolume;
   out[F.costTotal] = total;
   out[F.costPerKg] = (total * 1000) / solidMass;
   out[F.costPerL] = perLitre;

@@ -135,7 +135,7 @@ function evaluatePoint(input: FormulationInput, table: MaterialTable, state: Poi
 }
 
 const NO_KNOBS: readonly Knob[] = [];
-const NO_VALUES = new Float64Array(0);
+const NO_VALUES: readonly number[] = [];
 
 /**
  * A NumericModel that computes every exploration figure in plain float64.
