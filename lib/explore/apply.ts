@@ -16,6 +16,9 @@ export interface PointRefusal {
 /** Slack on Σ weight fractions = 1 (a float sum of a few steps). */
 export const SUM_TOLERANCE = 1e-9;
 
+/** The schema's smallest non-zero weight fraction, read once (an imported binding is a getter where modules are compiled one by one). */
+const MIN_WEIGHT = WEIGHT_FRACTION.min;
+
 /**
  * A weight fraction the input schema accepts: values in (0, 1e-6) (the schema allows exactly 0 or
  * 1e-6 … 1) become 0, and a float just above 1 becomes 1.
@@ -26,7 +29,7 @@ export const SUM_TOLERANCE = 1e-9;
  * ```
  */
 export function tidy(w: number): number {
-  if (w < WEIGHT_FRACTION.min) return 0;
+  if (w < MIN_WEIGHT) return 0;
   return w > 1 ? 1 : w;
 }
 

@@ -52,6 +52,8 @@ interface Prepared {
   /** Per output: its slot in evaluator.figures, or −1 when `reads[o]` computes it. */
   slots: Int32Array;
   reads: ((evaluator: NumericEvaluator) => number)[];
+  /** Scratch: the figures of up to BLOCK points, output by output (BLOCK numbers per output). */
+  block: Float64Array;
 }
 
 interface RunState {
@@ -72,6 +74,7 @@ function prepared(options: RunOptions, outputs: readonly string[]): Prepared | u
     values: new Float64Array(knobs.knobs.length),
     slots: Int32Array.from(readers, (r) => ("slot" in r ? r.slot : -1)),
     reads: readers.map((r) => ("read" in r ? r.read : () => Number.NaN)),
+    block: new Float64Array(BLOCK * outputs.length),
   };
 }
 
@@ -84,27 +87,36 @@ function start(options: RunOptions): RunState {
   return { run, readers: outputs.map(outputReader), options, prepared: prepared(options, outputs) };
 }
 
+/** Points whose figures are gathered before they are copied into the run's columns (one copy per column per block). */
+const BLOCK = 64;
+
 /** Computes points [from, to) into the run with the model's prepared evaluator: numbers in, numbers out. */
 function computePrepared(state: RunState, p: Prepared, from: number, to: number): void {
   const { run, options } = state;
-  const { evaluator, values, slots, reads } = p;
+  const { evaluator, values, slots, reads, block } = p;
   const figures = evaluator.figures;
   const columns = run.values;
-  for (let point = from; point < to; point++) {
-    const refusal = pointKnobs(options.base, options.plan, p.knobs, point, values);
-    if (refusal) {
-      run.refusals.push({ point, code: refusal.code, field: refusal.field });
-      continue;
+  const outputs = columns.length;
+  for (let start = from; start < to; start += BLOCK) {
+    const end = Math.min(to, start + BLOCK);
+    for (let point = start, j = 0; point < end; point++, j++) {
+      const refusal = pointKnobs(options.base, options.plan, p.knobs, point, values);
+      const status = refusal ? -1 : evaluator.evaluate(values);
+      if (status < 0) {
+        run.refusals.push({ point, code: refusal ? refusal.code : evaluator.refusal.code, field: refusal ? refusal.field : evaluator.refusal.field });
+        for (let o = 0, at = j; o < outputs; o++, at += BLOCK) block[at] = Number.NaN;
+        continue;
+      }
+      run.status[point] = status;
+      for (let o = 0, at = j; o < outputs; o++, at += BLOCK) {
+        const slot = slots[o]!;
+        block[at] = slot >= 0 ? figures[slot]! : reads[o]!(evaluator);
+      }
     }
-    const status = evaluator.evaluate(values);
-    if (status < 0) {
-      run.refusals.push({ point, code: evaluator.refusal.code, field: evaluator.refusal.field });
-      continue;
-    }
-    run.status[point] = status;
-    for (let o = 0; o < columns.length; o++) {
-      const slot = slots[o]!;
-      columns[o]![point] = slot >= 0 ? figures[slot]! : reads[o]!(evaluator);
+    // column by column: a run's columns are far apart in memory, a block is not
+    for (let o = 0; o < outputs; o++) {
+      const column = columns[o]!;
+      for (let point = start, at = o * BLOCK; point < end; point++, at++) column[point] = block[at]!;
     }
   }
 }

@@ -8,9 +8,9 @@ import type { FormulationInput } from "../input-schema";
 import type { ThermalStatus } from "../result-types";
 import { SCALAR_FIGURES } from "./compare";
 import type { NumericEvaluator, NumericFigures, NumericOutcome, NumericPhase } from "./figures";
-import { KERNEL_GENERAL, kernelPoint, kernelState } from "./kernel";
+import { KERNEL_GENERAL, kernelPoint, kernelState, type KernelState } from "./kernel";
 import { C_ORGANIC, C_PHASE_DENSITY, STRIDE, zeros } from "./kernel-layout";
-import { kernelPlan } from "./kernel-plan";
+import { kernelPlan, type KernelPlan } from "./kernel-plan";
 import { inputAt, type Knob } from "./knobs";
 import type { MaterialTable } from "./material-table";
 
@@ -37,64 +37,90 @@ export function numericEvaluator(
   knobs: readonly Knob[],
   general: (input: FormulationInput) => NumericOutcome,
 ): NumericEvaluator {
-  const plan = kernelPlan(table, base, knobs);
-  const state = plan && kernelState(plan);
-  const figures = zeros(SCALAR_FIGURES.length);
-  const density = SCALAR_FIGURES.indexOf("theoreticalDensity");
-  const ids = base.components.map((c) => c.materialId);
-  const refusal = { code: "", field: "" };
-  /** The general branch's figures of the last point, undefined when the kernel computed it. */
-  let last: NumericFigures | undefined;
-  let status = REFUSED;
+  return new Evaluator(table, base, knobs, general);
+}
 
-  function phases(): NumericPhase[] {
-    if (last) return last.phases;
-    return ids.map((materialId, i) => {
-      const w = state!.w[i]!;
-      return { materialId, organic: plan!.coef[i * STRIDE + C_ORGANIC] === 1, weightFraction: w, volumeFraction: (w / plan!.coef[i * STRIDE + C_PHASE_DENSITY]!) * figures[density]! };
-    });
+const DENSITY = SCALAR_FIGURES.indexOf("theoreticalDensity");
+const ORGANIC = C_ORGANIC;
+const PHASE_DENSITY = C_PHASE_DENSITY;
+const WIDTH = STRIDE;
+
+/** A class, so that making one (once per evaluate(input)) makes no closures. */
+class Evaluator implements NumericEvaluator {
+  readonly figures = zeros(SCALAR_FIGURES.length);
+  readonly refusal = { code: "", field: "" };
+  private readonly plan: KernelPlan | undefined;
+  private readonly state: KernelState | undefined;
+  /** The general branch's figures of the last point, undefined when the kernel computed it. */
+  private last: NumericFigures | undefined = undefined;
+  private status = REFUSED;
+
+  constructor(
+    table: MaterialTable,
+    private readonly base: FormulationInput,
+    private readonly knobs: readonly Knob[],
+    private readonly general: (input: FormulationInput) => NumericOutcome,
+  ) {
+    this.plan = kernelPlan(table, base, knobs);
+    this.state = this.plan && kernelState(this.plan);
   }
 
-  return {
-    figures,
-    refusal,
-    evaluate(values: ArrayLike<number>): number {
-      last = undefined;
-      if (plan) {
-        status = point(plan, state!, values, figures);
-        if (status !== GENERAL) return status;
-      }
-      const outcome = general(inputAt(base, knobs, values));
-      if (!outcome.ok) {
-        refusal.code = outcome.code;
-        refusal.field = outcome.field;
-        figures.fill(Number.NaN);
-        status = REFUSED;
-        return status;
-      }
-      last = outcome.figures;
-      for (let k = 0; k < SCALAR_FIGURES.length; k++) figures[k] = last[SCALAR_FIGURES[k]!];
-      status = STATUS_RANK[last.thermalStatus]!;
-      return status;
-    },
-    phaseFraction(id: string, field: "weightFraction" | "volumeFraction"): number {
-      if (status === REFUSED) return Number.NaN;
-      let sum = 0;
-      if (last) {
-        for (const phase of last.phases) if (phase.materialId === id) sum += phase[field];
-        return sum;
-      }
-      for (let i = 0; i < ids.length; i++) {
-        if (ids[i] !== id) continue;
-        const w = state!.w[i]!;
-        sum += field === "weightFraction" ? w : (w / plan!.coef[i * STRIDE + C_PHASE_DENSITY]!) * figures[density]!;
-      }
+  evaluate(values: ArrayLike<number>): number {
+    this.last = undefined;
+    const figures = this.figures;
+    if (this.plan) {
+      this.status = point(this.plan, this.state!, values, figures);
+      if (this.status !== GENERAL) return this.status;
+    }
+    const outcome = this.general(inputAt(this.base, this.knobs, values));
+    if (!outcome.ok) {
+      this.refusal.code = outcome.code;
+      this.refusal.field = outcome.field;
+      figures.fill(Number.NaN);
+      this.status = REFUSED;
+      return REFUSED;
+    }
+    const last = outcome.figures;
+    this.last = last;
+    for (let k = 0; k < SCALAR_FIGURES.length; k++) figures[k] = last[SCALAR_FIGURES[k]!];
+    this.status = STATUS_RANK[last.thermalStatus]!;
+    return this.status;
+  }
+
+  /** w_i / ρ_i · ρ_th of component i's phase at the last kernel point. */
+  private volumeFraction(i: number): number {
+    return (this.state!.w[i]! / this.plan!.coef[i * WIDTH + PHASE_DENSITY]!) * this.figures[DENSITY]!;
+  }
+
+  phaseFraction(id: string, field: "weightFraction" | "volumeFraction"): number {
+    if (this.status === REFUSED) return Number.NaN;
+    let sum = 0;
+    if (this.last) {
+      for (const phase of this.last.phases) if (phase.materialId === id) sum += phase[field];
       return sum;
-    },
-    toFigures(): NumericFigures {
-      return last ?? figuresObject(figures, phases(), STATUS[status]!);
-    },
-  };
+    }
+    const components = this.base.components;
+    for (let i = 0; i < components.length; i++) {
+      if (components[i]!.materialId !== id) continue;
+      sum += field === "weightFraction" ? this.state!.w[i]! : this.volumeFraction(i);
+    }
+    return sum;
+  }
+
+  toFigures(): NumericFigures {
+    if (this.last) return this.last;
+    const phases: NumericPhase[] = [];
+    const components = this.base.components;
+    for (let i = 0; i < components.length; i++) {
+      phases.push({
+        materialId: components[i]!.materialId,
+        organic: this.plan!.coef[i * WIDTH + ORGANIC] === 1,
+        weightFraction: this.state!.w[i]!,
+        volumeFraction: this.volumeFraction(i),
+      });
+    }
+    return figuresObject(this.figures, phases, STATUS[this.status]!);
+  }
 }
 
 const I = Object.fromEntries(SCALAR_FIGURES.map((key, k) => [key, k])) as Record<(typeof SCALAR_FIGURES)[number], number>;

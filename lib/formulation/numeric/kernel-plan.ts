@@ -11,13 +11,15 @@
 import { DEFAULT_THERMAL_MARGIN_C, WATER_MOLAR_MASS_G_PER_MOL } from "../constants";
 import type { CoatingSpec, FormulationInput, ProcessStep } from "../input-schema";
 import { coatMaterialData } from "./coat-material";
-import {
-  C_AMINE, C_ATOMS, C_CONVERSION, C_COST, C_EPOXY, C_GROUPS, C_MASS, C_MOLES, C_OPTICS, C_ORGANIC, C_ORGANIC_SPECIFIC, C_PHASE_DENSITY, C_SHARE, C_SOLVENT,
-  C_SPECIFIC, C_VOC, C_VOLUME, C_WATER, KNOB_SOLIDS, KNOB_SPEED, KNOB_STEP, KNOB_WATER, KNOB_WEIGHT, STRIDE, zeros,
-} from "./kernel-layout";
+import * as layout from "./kernel-layout";
 import type { Knob } from "./knobs";
 import type { MaterialTable, TableMaterial } from "./material-table";
 import type { ThermalProfile } from "./thermal";
+
+// Local copies, read once (an imported binding is a getter where modules are compiled one by one).
+const { C_AMINE, C_ATOMS, C_CONVERSION, C_COST, C_EPOXY, C_GROUPS, C_MASS, C_MOLES, C_OPTICS, C_ORGANIC, C_ORGANIC_SPECIFIC, C_PHASE_DENSITY } = layout;
+const { C_SHARE, C_SOLVENT, C_SPECIFIC, C_VOC, C_VOLUME, C_WATER, KNOB_SOLIDS, KNOB_SPEED, KNOB_STEP, KNOB_WATER, KNOB_WEIGHT, STRIDE, zeros } = layout;
+const materialData = coatMaterialData;
 
 /** Per gram as supplied of a catalyst, solvent or water line. */
 export interface LineCoefficients {
@@ -84,9 +86,9 @@ export interface KernelPlan {
 }
 
 function lineOf(row: TableMaterial, table: MaterialTable, solventIndex: number, roleVolatile: boolean, carries: boolean): LineCoefficients {
-  const data = coatMaterialData(row.material);
+  const data = materialData(row.material);
   const carried = row.material.solventId === undefined ? undefined : table.byId.get(row.material.solventId);
-  const carriedVolatile = !carried || coatMaterialData(carried).volatile;
+  const carriedVolatile = !carried || materialData(carried).volatile;
   const solventFraction = carries ? row.solventFraction : 0;
   return {
     perDensity: row.perDensity,
@@ -100,6 +102,18 @@ function lineOf(row: TableMaterial, table: MaterialTable, solventIndex: number, 
 }
 
 
+function rowOf(table: MaterialTable, id: string): TableMaterial | undefined {
+  const index = table.indexOf.get(id);
+  return index === undefined ? undefined : table.materials[index];
+}
+
+/** Copies of the steps (a step temperature knob sets them in place). */
+function copySteps(steps: readonly ProcessStep[]): ProcessStep[] {
+  const out: ProcessStep[] = [];
+  for (const step of steps) out.push({ ...step });
+  return out;
+}
+
 /**
  * The kernel's plan for `input` with `knobs` varied, or undefined when the kernel does not cover it.
  *
@@ -111,12 +125,11 @@ function lineOf(row: TableMaterial, table: MaterialTable, solventIndex: number, 
  */
 export function kernelPlan(table: MaterialTable, input: FormulationInput, knobs: readonly Knob[]): KernelPlan | undefined {
   if ((input.modifiers && input.modifiers.length > 0) || table.formulaRefusal) return undefined;
-  const at = (id: string | undefined): TableMaterial | undefined => (id === undefined ? undefined : table.materials[table.indexOf.get(id) ?? -1]);
   const n = input.components.length;
-  const solventRow = input.solvent ? at(input.solvent.materialId) : undefined;
+  const solventRow = input.solvent ? rowOf(table, input.solvent.materialId) : undefined;
   if (input.solvent && (!solventRow || Number.isNaN(solventRow.molarMass) || Number.isNaN(solventRow.perDensity))) return undefined;
   const solventIndex = solventRow ? table.indexOf.get(solventRow.id)! : -1;
-  const waterRow = at(input.water.materialId);
+  const waterRow = rowOf(table, input.water.materialId);
   if (!waterRow || Number.isNaN(waterRow.perDensity)) return undefined;
   const basis = input.basis;
   if (input.solvent?.mode === "fill" && basis.type === "solidMass") return undefined;
@@ -155,7 +168,7 @@ export function kernelPlan(table: MaterialTable, input: FormulationInput, knobs:
     coating: input.coating ? { ...input.coating } : undefined,
     substrate: undefined,
     substrateIndex: Number.NaN,
-    steps: input.steps.map((step) => ({ ...step })),
+    steps: copySteps(input.steps),
     marginC: input.marginC ?? DEFAULT_THERMAL_MARGIN_C,
     stepsVary: false,
   };
@@ -166,14 +179,14 @@ export function kernelPlan(table: MaterialTable, input: FormulationInput, knobs:
   }
   const catalyst = input.catalyst;
   if (catalyst && catalyst.molPerNetworkAtom > 0) {
-    const row = at(catalyst.materialId);
+    const row = rowOf(table, catalyst.materialId);
     if (!row || Number.isNaN(row.molarMass) || Number.isNaN(row.perDensity)) return undefined;
     plan.catalystRatio = catalyst.molPerNetworkAtom;
     plan.catalystGramsPerMol = row.molarMass * row.perAssay;
     plan.catalyst = lineOf(row, table, solventIndex, true, true);
   }
   if (input.substrateId !== undefined) {
-    const row = at(input.substrateId);
+    const row = rowOf(table, input.substrateId);
     if (!row) return undefined;
     plan.substrate = row.thermal;
     plan.substrateIndex = row.material.refractiveIndex ?? Number.NaN;
@@ -181,11 +194,11 @@ export function kernelPlan(table: MaterialTable, input: FormulationInput, knobs:
   const thermal: number[] = [];
   for (let i = 0; i < n; i++) {
     const component = input.components[i]!;
-    const row = at(component.materialId);
+    const row = rowOf(table, component.materialId);
     if (!row || Number.isNaN(row.perDensity)) return undefined;
     plan.weights[i] = component.weightFraction;
     const line = lineOf(row, table, solventIndex, false, true);
-    const data = coatMaterialData(row.material);
+    const data = materialData(row.material);
     const p = row.precursor;
     const c = plan.coef;
     const o = i * STRIDE;
