@@ -8,21 +8,21 @@
  * which gives the engine's refusal or figures.
  */
 import { MIN_LINE_GRAMS, ML_PER_L } from "../constants";
-import type { ProcessStep } from "../input-schema";
 import { numericFilm } from "./coat-film";
 import { SCALAR_FIGURES, type ScalarFigure } from "./compare";
 import * as layout from "./kernel-layout";
-import type { KernelPlan, LineCoefficients } from "./kernel-plan";
-import { thermalVerdict, type ThermalProfile } from "./thermal";
+import type { KernelPlan } from "./kernel-plan";
+import { addLine as addSums, thermal as thermalOf, type KernelState } from "./kernel-state";
 
 // Local copies, read once: where modules are compiled one by one (tsx, vitest), an imported binding is
 // read through a getter at every use, which a loop over components cannot afford.
-const { C_AMINE, C_ATOMS, C_CONVERSION, C_COST, C_EPOXY, C_GROUPS, C_MASS, C_MOLES, C_OPTICS, C_ORGANIC, C_ORGANIC_SPECIFIC, C_SHARE, C_SOLVENT } = layout;
-const { C_SPECIFIC, C_VOC, C_VOLUME, C_WATER, KNOB_SOLIDS, KNOB_SPEED, KNOB_STEP, KNOB_WATER, KNOB_WEIGHT, STRIDE, zeros } = layout;
+const { C_AMINE, C_ATOMS, C_COST, C_EPOXY, C_GROUPS, C_MASS, C_MOLES, C_OPTICS, C_ORGANIC, C_ORGANIC_SPECIFIC, C_SHARE, C_SOLVENT } = layout;
+const { C_SPECIFIC, C_VOC, C_VOLUME, C_WATER, KNOB_SOLIDS, KNOB_SPEED, KNOB_STEP, KNOB_WATER, KNOB_WEIGHT, STRIDE } = layout;
 const MIN_GRAMS = MIN_LINE_GRAMS;
 const PER_L = ML_PER_L;
 const film = numericFilm;
-const verdictOf = thermalVerdict;
+const addLine = addSums;
+const thermal = thermalOf;
 
 /** The point needs the general branch. */
 export const KERNEL_GENERAL = -2;
@@ -62,83 +62,6 @@ const F = {
   costPerL: at("costPerLitreSol"),
   costPerM2: at("costPerM2"),
 };
-
-/** Scratch of one kernel: the point's weight fractions (scaled to 1) and the hoisted thermal verdict. */
-export interface KernelState {
-  /** w_i of the last point, as the phases hold them. */
-  readonly w: number[];
-  /** Bit i set when thermal component i is present; −1 before the first point. */
-  mask: number;
-  status: number;
-  maxAllowedC: number;
-  readonly sums: Sums;
-}
-
-/**
- * Fresh scratch for a plan.
- *
- * @example
- * ```ts
- * const state = kernelState(plan);
- * ```
- */
-export function kernelState(plan: KernelPlan): KernelState {
-  const sums: Sums = { mass: 0, volume: 0, water: 0, solvent: 0, voc: 0, cost: 0, priced: 0, epoxy: 0, amine: 0 };
-  return { w: zeros(plan.n), mask: -1, status: 0, maxAllowedC: Number.NaN, sums };
-}
-
-/** Sums of the lines other than the components. */
-interface Sums {
-  mass: number;
-  volume: number;
-  water: number;
-  solvent: number;
-  voc: number;
-  cost: number;
-  priced: number;
-  epoxy: number;
-  amine: number;
-}
-
-function addLine(s: Sums, line: LineCoefficients, grams: number, volume: number): void {
-  s.mass += grams;
-  s.volume += volume;
-  s.water += grams * line.waterMolPerGram;
-  s.solvent += grams * line.solventPerGram;
-  s.voc += grams * line.vocPerGram;
-  if (grams > 0) {
-    s.priced += 1;
-    s.cost += grams * line.price;
-  }
-  s.epoxy += grams * line.epoxyPerGram;
-  s.amine += grams * line.aminePerGram;
-}
-
-const STATUS_RANK: Record<string, number> = { clear: 0, caution: 1, fail: 2 };
-const subjects: ThermalProfile[] = [];
-const conversions: number[] = [];
-
-/** The thermal verdict of the point, recomputed only when the present subjects or the steps change. */
-function thermal(plan: KernelPlan, state: KernelState, w: readonly number[]): void {
-  const list = plan.thermalComponents;
-  let mask = 0;
-  for (let k = 0; k < list.length && k < 30; k++) if (w[list[k]!] !== 0) mask |= 1 << k;
-  if (mask === state.mask && !plan.stepsVary && list.length <= 30) return;
-  subjects.length = 0;
-  conversions.length = 0;
-  for (let k = 0; k < list.length; k++) {
-    const i = list[k]!;
-    if (w[i] === 0) continue;
-    const subject = plan.subject[i];
-    if (subject) subjects.push(subject);
-    else conversions.push(plan.coef[i * STRIDE + C_CONVERSION]!);
-  }
-  if (plan.substrate) subjects.push(plan.substrate);
-  const verdict = verdictOf(subjects, conversions, plan.steps as readonly ProcessStep[], plan.marginC);
-  state.mask = mask;
-  state.status = STATUS_RANK[verdict.status]!;
-  state.maxAllowedC = verdict.maxAllowedC;
-}
 
 /**
  * One point: sets the knobs to `values`, computes every scalar figure into `out` (SCALAR_FIGURES order).
