@@ -19,7 +19,9 @@ import { numericModel } from "../formulation/numeric/model";
 import { formulationInputs } from "../formulation/numeric/test-arbitraries";
 import { parseFormulationInput } from "../formulation/validate";
 import { isPlanError, planGrid } from "./grid";
-import { knobPlan } from "./knobs";
+import { inputAt } from "../formulation/numeric/knobs";
+import { isPointRefusal, pointInput } from "./apply";
+import { knobPlan, pointKnobs } from "./knobs";
 import { outputCatalogue } from "./outputs";
 import { runExplorationSync } from "./run";
 import type { Grid, Variable } from "./spec";
@@ -109,4 +111,28 @@ describe("the explorer's prepared numeric path vs pointInput and the decimal eng
       expect([...kinds].some((k) => k.includes(kind)), kind).toBe(true);
     }
   }, 60_000);
+
+  it("sets, through knob values, the same input pointInput makes at every point, and refuses the same points", () => {
+    let points = 0;
+    fc.assert(
+      fc.property(cases, ({ input, grid }) => {
+        const plan = planGrid(grid, input);
+        if (isPlanError(plan)) return;
+        const k = knobPlan(input, plan);
+        const values = new Float64Array(k.knobs.length);
+        for (let p = 0; p < plan.count; p++) {
+          const expected = pointInput(input, plan, p);
+          const refusal = pointKnobs(input, plan, k, p, values);
+          if (isPointRefusal(expected)) expect(refusal).toEqual(expected);
+          else {
+            expect(refusal).toBeUndefined();
+            expect(inputAt(input, k.knobs, values)).toEqual(expected);
+          }
+          points += 1;
+        }
+      }),
+      { numRuns: 300 },
+    );
+    expect(points).toBeGreaterThan(2000);
+  });
 });
