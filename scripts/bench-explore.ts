@@ -2,14 +2,16 @@
  * Benchmark of the design explorer's numeric path: a 10,000-point map
  * (100 × 100: the first precursor's weight fraction × the water ratio R) of
  * the 10-component formulation of bench-engine (scripts/bench-input.ts),
- * run the way the explorer runs it: runExplorationSync makes each point's
- * input with object spreads (lib/explore/apply.ts), numericModel computes
- * every figure, core and coat, and every scalar figure is read into the
- * run's Float64Arrays.
+ * run the way the explorer runs it: runExplorationSync prepares the numeric
+ * model once for the plan (lib/formulation/numeric/evaluator.ts), writes each
+ * point's varied numbers as knob values (lib/explore/knobs.ts), the kernel
+ * (lib/formulation/numeric/kernel.ts) computes every figure, core and coat,
+ * and every scalar figure is copied into the run's Float64Arrays.
  *
  * Printed figures (median of 9 rounds in which the three take turns, after 3 warm-up rounds):
  * - "numeric path": the whole run above, 10,000 points;
- * - "model only": numericModel.evaluate over the same 10,000 inputs made beforehand;
+ * - "model only": numericModel.evaluate over the same 10,000 inputs made beforehand (each call
+ *   prepares the model for its input, then computes one point);
  * - "bare arithmetic": the floor the arithmetic itself costs. A hand-inlined loop over
  *   Float64Arrays extracted once from this formulation (per component: mol per g residue,
  *   g and mL as supplied per mol, network atoms and alkoxy groups per mol, carried water,
@@ -21,6 +23,9 @@
  *   fractions, dense shrinkage (linear and volumetric), effective R and h. It leaves out
  *   what the numeric path also does: refusal checks, the thermal verdict, organic content,
  *   the phase list, solvent figures, and the coat figures (film, optics, VOC, cure, cost);
+ * - "with a modifier": the same grid over the same formulation with acetylacetone on one titanium
+ *   alkoxide (1 mol/mol), which the kernel does not cover: every point takes the general branch
+ *   (the point's input through composition.ts and liquids.ts); median of 5 runs, timed on its own;
  * - the largest relative difference between the numeric path and the decimal engine
  *   (decimalModel) over every 50th point, all figures (lib/formulation/numeric/compare.ts).
  *
@@ -31,6 +36,7 @@ import { performance } from "node:perf_hooks";
 import { isPlanError, isPointRefusal, planGrid, pointInput, runExplorationSync, SCALAR_FIGURE_KEYS, type Grid, type GridPlan } from "../lib/explore";
 import { decimalModel, numericModel, type FormulationInput, type Material } from "../lib/formulation";
 import { figuresDifference } from "../lib/formulation/numeric/compare";
+import { referenceMaterial } from "../data/materials";
 import { makeInput } from "./bench-input";
 
 const WARMUP_ROUNDS = 3;
@@ -238,6 +244,24 @@ if (check.ok) {
   }
 }
 
+// The modifier case: same grid, one modifier (the general branch for every point).
+const modified: FormulationInput = {
+  ...base,
+  materials: [...base.materials, referenceMaterial("acac")],
+  modifiers: [{ materialId: "acac", precursorId: base.components[3]!.materialId, molPerMetal: 1 }],
+};
+const modifiedPlan = planGrid(grid, modified);
+if (isPlanError(modifiedPlan)) throw new Error(modifiedPlan.message);
+const modifiedModel = numericModel(modified.materials);
+const modifiedTimes: number[] = [];
+let modifiedRefused = 0;
+for (let i = 0; i < 7; i++) {
+  const start = performance.now();
+  modifiedRefused = runExplorationSync({ base: modified, plan: modifiedPlan, outputs, model: modifiedModel }).refusals.length;
+  if (i >= 2) modifiedTimes.push(performance.now() - start);
+}
+const modifiedMs = median(modifiedTimes);
+
 const reference = decimalModel(base.materials);
 let maxDifference = 0;
 let worst = "";
@@ -267,6 +291,9 @@ console.log(`median (fastest) of ${ROUNDS} rounds, taken in turn after ${WARMUP_
 console.log(`numeric path (runner, all ${outputs.length} figures): ${pathMs.toFixed(1)} ms (${path!.fastest.toFixed(1)}), ${((pathMs * 1000) / plan.count).toFixed(2)} µs per point`);
 console.log(`model only (inputs made beforehand): ${modelOnly!.median.toFixed(1)} ms (${modelOnly!.fastest.toFixed(1)})`);
 console.log(`bare arithmetic (core figures, see header): ${bareMs.toFixed(2)} ms (${bareLoop!.fastest.toFixed(2)}); agrees with the model to ${bareCheck.toExponential(1)}`);
+console.log(
+  `with a modifier (general branch, ${modifiedRefused} refused): ${modifiedMs.toFixed(1)} ms (${Math.min(...modifiedTimes).toFixed(1)}), ${((modifiedMs * 1000) / modifiedPlan.count).toFixed(2)} µs per point`,
+);
 console.log(`decimal engine vs numeric path: ${sampled} points sampled (every ${SAMPLE_EVERY}th), largest difference at ${worst || "none"}`);
 if (!Number.isFinite(sink)) console.log("(unexpected non-finite checksum)");
 console.log(

@@ -14,18 +14,27 @@ export interface PointRefusal {
 }
 
 /** Slack on Σ weight fractions = 1 (a float sum of a few steps). */
-const SUM_TOLERANCE = 1e-9;
+export const SUM_TOLERANCE = 1e-9;
+
+/** The schema's smallest non-zero weight fraction, read once (an imported binding is a getter where modules are compiled one by one). */
+const MIN_WEIGHT = WEIGHT_FRACTION.min;
 
 /**
  * A weight fraction the input schema accepts: values in (0, 1e-6) (the schema allows exactly 0 or
  * 1e-6 … 1) become 0, and a float just above 1 becomes 1.
+ *
+ * @example
+ * ```ts
+ * tidy(3e-7); // 0
+ * ```
  */
-function tidy(w: number): number {
-  if (w < WEIGHT_FRACTION.min) return 0;
+export function tidy(w: number): number {
+  if (w < MIN_WEIGHT) return 0;
   return w > 1 ? 1 : w;
 }
 
-interface Prepared {
+/** What the points of one plan share. */
+export interface Prepared {
   base: FormulationInput;
   /** Per axis: the index of its component in base.components, or −1 when the axis is not a weight fraction. */
   componentOf: number[];
@@ -37,7 +46,16 @@ interface Prepared {
 
 const prepared = new WeakMap<GridPlan, Prepared>();
 
-function prepare(base: FormulationInput, plan: GridPlan): Prepared {
+/**
+ * What every point of `plan` over `base` shares (the varied components' indices, Σ of the others),
+ * worked out once per plan.
+ *
+ * @example
+ * ```ts
+ * prepare(base, plan).othersTotal; // Σ weight fraction of the components no axis varies
+ * ```
+ */
+export function prepare(base: FormulationInput, plan: GridPlan): Prepared {
   const cached = prepared.get(plan);
   if (cached && cached.base === base) return cached;
   const indexOf = (id: string): number => base.components.findIndex((c) => c.materialId === id);

@@ -4,7 +4,8 @@
  * mismatch, and each phase's volume and weight fraction. Pure TypeScript.
  */
 import type { FormulationInput } from "../formulation/input-schema";
-import type { NumericFigures } from "../formulation/numeric/figures";
+import { SCALAR_FIGURES } from "../formulation/numeric/compare";
+import type { NumericEvaluator, NumericFigures } from "../formulation/numeric/figures";
 import { materialName } from "./labels";
 import type { OutputKey } from "./spec";
 import type { OutputInfo } from "./types";
@@ -154,4 +155,35 @@ export function outputReader(key: OutputKey): OutputReader {
  */
 export function outputValue(figures: NumericFigures, key: OutputKey): number {
   return outputReader(key)(figures);
+}
+
+/** How a run reads one output from a prepared evaluator: a slot of its figures, or a function. */
+export type EvaluatorReader = { slot: number } | { read: (evaluator: NumericEvaluator) => number };
+
+/**
+ * The reader of one output from a NumericEvaluator (the prepared numeric path): a scalar figure is a
+ * slot of `evaluator.figures`; |mismatch| and phase fractions are computed from it.
+ *
+ * @example
+ * ```ts
+ * const reader = evaluatorReader("refractiveIndex");
+ * if ("slot" in reader) evaluator.figures[reader.slot]; // the index at the last point
+ * ```
+ */
+export function evaluatorReader(key: OutputKey): EvaluatorReader {
+  if (Object.hasOwn(SCALARS, key)) return { slot: SCALAR_FIGURES.indexOf(key as ScalarFigureKey) };
+  if (key === ABS_MISMATCH) {
+    const slot = SCALAR_FIGURES.indexOf("indexMismatch");
+    return { read: (e) => Math.abs(e.figures[slot]!) };
+  }
+  for (const [prefix, field] of [
+    [PHASE_VOLUME, "volumeFraction"],
+    [PHASE_WEIGHT, "weightFraction"],
+  ] as const) {
+    if (key.startsWith(prefix)) {
+      const id = key.slice(prefix.length);
+      return { read: (e) => e.phaseFraction(id, field) };
+    }
+  }
+  return { read: () => Number.NaN };
 }

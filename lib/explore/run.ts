@@ -5,10 +5,11 @@
  * them, so a Web Worker can take a cancel message. Pure TypeScript.
  */
 import type { FormulationInput } from "../formulation/input-schema";
-import type { NumericModel } from "../formulation/numeric/figures";
+import type { NumericEvaluator, NumericModel } from "../formulation/numeric/figures";
 import { isPointRefusal, pointInput } from "./apply";
 import { isPlanError, planGrid } from "./grid";
-import { outputReader, type OutputReader } from "./outputs";
+import { knobPlan, pointKnobs as knobsAt, type KnobPlan } from "./knobs";
+import { evaluatorReader, outputReader, type EvaluatorReader, type OutputReader } from "./outputs";
 import { bestCandidates, searchOutputs } from "./search";
 import type { Grid, OutputKey, Search } from "./spec";
 import { POINT_STATUSES, type ExplorationRun, type GridPlan, type PlanError } from "./types";
@@ -36,15 +37,45 @@ export interface AsyncRunOptions extends RunOptions {
 }
 
 const REFUSED = POINT_STATUSES.indexOf("refused");
+/** Read once (an imported binding is a getter where modules are compiled one by one). */
+const pointKnobs = knobsAt;
 const STATUS_INDEX: Record<string, number> = { clear: 0, caution: 1, fail: 2 };
 
 /** Points computed between two yields to the event loop, unless the caller says otherwise. */
 export const DEFAULT_CHUNK = 250;
 
+/** The prepared numeric path of a run: the model's evaluator, the plan's knobs and where each output is read. */
+interface Prepared {
+  evaluator: NumericEvaluator;
+  knobs: KnobPlan;
+  values: Float64Array;
+  /** Per output: its slot in evaluator.figures, or −1 when `reads[o]` computes it. */
+  slots: Int32Array;
+  reads: ((evaluator: NumericEvaluator) => number)[];
+  /** Scratch: the figures of up to BLOCK points, output by output (BLOCK numbers per output). */
+  block: Float64Array;
+}
+
 interface RunState {
   run: ExplorationRun;
   readers: OutputReader[];
   options: RunOptions;
+  prepared?: Prepared;
+}
+
+function prepared(options: RunOptions, outputs: readonly string[]): Prepared | undefined {
+  if (!options.model.prepare) return undefined;
+  const knobs = knobPlan(options.base, options.plan);
+  const evaluator = options.model.prepare(options.base, knobs.knobs);
+  const readers: EvaluatorReader[] = outputs.map(evaluatorReader);
+  return {
+    evaluator,
+    knobs,
+    values: new Float64Array(knobs.knobs.length),
+    slots: Int32Array.from(readers, (r) => ("slot" in r ? r.slot : -1)),
+    reads: readers.map((r) => ("read" in r ? r.read : () => Number.NaN)),
+    block: new Float64Array(BLOCK * outputs.length),
+  };
 }
 
 function start(options: RunOptions): RunState {
@@ -53,11 +84,49 @@ function start(options: RunOptions): RunState {
   const count = options.plan.count;
   const values = outputs.map(() => new Float64Array(count).fill(Number.NaN));
   const run: ExplorationRun = { plan: options.plan, outputs, values, status: new Uint8Array(count).fill(REFUSED), refusals: [] };
-  return { run, readers: outputs.map(outputReader), options };
+  return { run, readers: outputs.map(outputReader), options, prepared: prepared(options, outputs) };
+}
+
+/** Points whose figures are gathered before they are copied into the run's columns (one copy per column per block). */
+const BLOCK = 64;
+
+/** Computes points [from, to) into the run with the model's prepared evaluator: numbers in, numbers out. */
+function computePrepared(state: RunState, p: Prepared, from: number, to: number): void {
+  const { run, options } = state;
+  const { evaluator, values, slots, reads, block } = p;
+  const figures = evaluator.figures;
+  const columns = run.values;
+  const outputs = columns.length;
+  for (let start = from; start < to; start += BLOCK) {
+    const end = Math.min(to, start + BLOCK);
+    for (let point = start, j = 0; point < end; point++, j++) {
+      const refusal = pointKnobs(options.base, options.plan, p.knobs, point, values);
+      const status = refusal ? -1 : evaluator.evaluate(values);
+      if (status < 0) {
+        run.refusals.push({ point, code: refusal ? refusal.code : evaluator.refusal.code, field: refusal ? refusal.field : evaluator.refusal.field });
+        for (let o = 0, at = j; o < outputs; o++, at += BLOCK) block[at] = Number.NaN;
+        continue;
+      }
+      run.status[point] = status;
+      for (let o = 0, at = j; o < outputs; o++, at += BLOCK) {
+        const slot = slots[o]!;
+        block[at] = slot >= 0 ? figures[slot]! : reads[o]!(evaluator);
+      }
+    }
+    // column by column: a run's columns are far apart in memory, a block is not
+    for (let o = 0; o < outputs; o++) {
+      const column = columns[o]!;
+      for (let point = start, at = o * BLOCK; point < end; point++, at++) column[point] = block[at]!;
+    }
+  }
 }
 
 /** Computes points [from, to) into the run. */
 function computeRange(state: RunState, from: number, to: number): void {
+  if (state.prepared) {
+    computePrepared(state, state.prepared, from, to);
+    return;
+  }
   const { run, readers, options } = state;
   for (let p = from; p < to; p++) {
     const input = pointInput(options.base, options.plan, p);

@@ -13,6 +13,7 @@ import { molarMassOf } from "../formula";
 import type { FormulationInput } from "../input-schema";
 import type { Material } from "../material-schema";
 import type { FormulationResult, ThermalStatus } from "../result-types";
+import type { Knob } from "./knobs";
 
 /** One phase of the dry composite: a residue, an organic phase or a bonded ligand. */
 export interface NumericPhase {
@@ -109,6 +110,28 @@ export interface NumericFailure {
 /** The outcome of one point: figures, or the reason the engine would refuse it. */
 export type NumericOutcome = { ok: true; figures: NumericFigures } | NumericFailure;
 
+/**
+ * The figures of many points of one input whose knobs (knobs.ts) vary: resolved once, then evaluated
+ * point by point into plain numbers. The figures of the last point stay readable until the next one.
+ */
+export interface NumericEvaluator {
+  /** The scalar figures of the last point, in SCALAR_FIGURES order (compare.ts); NaN where absent or refused. */
+  readonly figures: number[];
+  /**
+   * Computes one point.
+   *
+   * @param values - one value per knob, in the order the evaluator was prepared with
+   * @returns the thermal status (0 clear, 1 caution, 2 fail), or −1 when the engine would refuse the point
+   */
+  evaluate(values: ArrayLike<number>): number;
+  /** The refusal of the last point (when evaluate returned −1): the engine's code and field. */
+  readonly refusal: { code: string; field: string };
+  /** Σ weight or volume fraction of the last point's phases of material `id`. */
+  phaseFraction(id: string, field: "weightFraction" | "volumeFraction"): number;
+  /** The last point's figures as an object (allocates; for a single point). */
+  toFigures(): NumericFigures;
+}
+
 /** Figures for inputs over one list of materials, indexed once. */
 export interface NumericModel {
   /**
@@ -117,6 +140,11 @@ export interface NumericModel {
    * are ignored in favour of the ones the model was built with.
    */
   evaluate(input: FormulationInput): NumericOutcome;
+  /**
+   * An evaluator of many points of `base` with `knobs` varied, when the model offers one (the numeric
+   * model does; the decimal model computes every point from its input).
+   */
+  prepare?(base: FormulationInput, knobs: readonly Knob[]): NumericEvaluator;
 }
 
 const nan = (value: number | undefined): number => (value === undefined ? Number.NaN : value);

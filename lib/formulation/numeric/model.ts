@@ -11,7 +11,9 @@ import type { FormulationInput } from "../input-schema";
 import type { Material } from "../material-schema";
 import { numericCoat } from "./coat";
 import { composePoint } from "./composition";
-import type { NumericFigures, NumericModel, NumericOutcome, NumericPhase } from "./figures";
+import { numericEvaluator } from "./evaluator";
+import type { NumericEvaluator, NumericFigures, NumericModel, NumericOutcome, NumericPhase } from "./figures";
+import type { Knob } from "./knobs";
 import { liquids } from "./liquids";
 import { materialTable, positionOf, type MaterialTable } from "./material-table";
 import { pointState, type PointState } from "./point-state";
@@ -37,6 +39,7 @@ function shrinkageOf(ratio: number): { linear: number; volumetric: number } {
   return { volumetric: 1 - ratio, linear: 1 - Math.cbrt(ratio) };
 }
 
+/** The general branch: one whole input, every structure (modifiers, refusals, lines left out). */
 function evaluatePoint(input: FormulationInput, table: MaterialTable, state: PointState): NumericFigures {
   const solidMass = solidMassOf(input.basis);
   composePoint(input, table, solidMass, state);
@@ -131,11 +134,15 @@ function evaluatePoint(input: FormulationInput, table: MaterialTable, state: Poi
   };
 }
 
+const NO_KNOBS: readonly Knob[] = [];
+const NO_VALUES: readonly number[] = [];
+
 /**
  * A NumericModel that computes every exploration figure in plain float64.
  * Inputs must already be valid (formulationInputSchema); a point the engine
  * would refuse while computing gives `{ ok: false, code, field }` with the
- * engine's code and field.
+ * engine's code and field. `prepare` resolves an input's structure once for
+ * many points (evaluator.ts); `evaluate` is prepare and one point.
  *
  * @param materials - the materials every evaluated input uses (indexed once)
  * @returns the model
@@ -144,19 +151,29 @@ function evaluatePoint(input: FormulationInput, table: MaterialTable, state: Poi
  * const model = numericModel(input.materials);
  * const outcome = model.evaluate({ ...input, water: { ...input.water, value: 6 } });
  * if (outcome.ok) outcome.figures.solidsFraction; // dry composite / sol mass
+ * const sweep = model.prepare!(input, [{ kind: "waterValue" }]);
+ * sweep.evaluate(Float64Array.of(6)); // 0 clear, 1 caution, 2 fail, −1 refused
  * ```
  */
 export function numericModel(materials: readonly Material[]): NumericModel {
   const table = materialTable(materials);
   const state = pointState(table);
+  const general = (input: FormulationInput): NumericOutcome => {
+    try {
+      return { ok: true, figures: evaluatePoint(input, table, state) };
+    } catch (error) {
+      if (error instanceof NumericRefusal) return error.toFailure();
+      throw error;
+    }
+  };
   return {
     evaluate(input: FormulationInput): NumericOutcome {
-      try {
-        return { ok: true, figures: evaluatePoint(input, table, state) };
-      } catch (error) {
-        if (error instanceof NumericRefusal) return error.toFailure();
-        throw error;
-      }
+      const evaluator = numericEvaluator(table, input, NO_KNOBS, general);
+      if (evaluator.evaluate(NO_VALUES) < 0) return { ok: false, code: evaluator.refusal.code, field: evaluator.refusal.field };
+      return { ok: true, figures: evaluator.toFigures() };
+    },
+    prepare(base: FormulationInput, knobs: readonly Knob[]): NumericEvaluator {
+      return numericEvaluator(table, base, knobs, general);
     },
   };
 }
