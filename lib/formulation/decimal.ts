@@ -111,6 +111,12 @@ export function positive(value: Dec): boolean {
 export const ZERO: Dec = new Dec(0);
 /** Decimal one (dimensionless). */
 export const ONE: Dec = new Dec(1);
+/**
+ * Decimal one half (dimensionless). x · HALF is the same decimal as x / 2
+ * (both round the same exact half to 20 digits), and a multiplication costs
+ * decimal.js less than a division.
+ */
+export const HALF: Dec = new Dec(0.5);
 
 /**
  * Molar mass of water as a decimal, g/mol (see WATER_MOLAR_MASS_G_PER_MOL in
@@ -199,8 +205,6 @@ export function toNumber(value: Dec): number {
   return value.s < 0 ? -magnitude : magnitude;
 }
 
-/** Decimal one half (dimensionless). */
-const HALF: Dec = new Dec(0.5);
 
 /**
  * Square root of a non-negative decimal: a double-precision first guess

@@ -1,6 +1,6 @@
 import type { DecLine } from "./composition";
 import { ML_PER_L, VOC_BOILING_POINT_MAX_C, WATER_MOLAR_MASS_G_PER_MOL } from "./constants";
-import { type Dec, dec, timesFactor, toNumber, ZERO } from "./decimal";
+import { type Dec, dec, positive, timesFactor, toNumber, ZERO } from "./decimal";
 import { FormulationError } from "./errors";
 import { requireDensity, type IndexedMaterial } from "./material-index";
 import type { Material } from "./material-schema";
@@ -110,7 +110,7 @@ export function vocFigures(inputs: VocInputs): { voc: VocResult; notices: Notice
     ? ZERO
     : inputs.waterMol.times(dec(waterMaterial.molarMass ?? WATER_MOLAR_MASS_G_PER_MOL)).div(requireDensity(inputs.waterEntry));
   const lessWaterMl = inputs.solVolumeMl.minus(waterMl);
-  if (!lessWaterMl.greaterThan(0)) {
+  if (!positive(lessWaterMl)) {
     throw new FormulationError(
       "invalid_input",
       `${inputs.waterEntry.path}.density`,
