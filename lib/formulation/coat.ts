@@ -28,8 +28,8 @@ export interface CoatContext {
   /** Water in the sol, added and carried, mol. */
   totalWaterMol: Dec;
   waterEntry: IndexedMaterial;
-  /** Alcohol released on full hydrolysis. */
-  alcohols: Iterable<{ mol: Dec; molarMass: number }>;
+  /** Alcohol released on full hydrolysis: mol, g/mol and g of each. */
+  alcohols: Iterable<{ mol: Dec; molarMass: number; grams: Dec }>;
 }
 
 /**
@@ -45,7 +45,7 @@ export interface CoatContext {
  * @param context - the decimal figures of the computation
  * @example
  * ```ts
- * addCoatPredictions(result, { input, byId, lines, composite, phases, solidMass, solMass, solVolume, totalWaterMol, waterEntry, alcohols: pass.alcohols.values() });
+ * addCoatPredictions(result, { input, byId, lines, composite, phases, solidMass, solMass, solVolume, totalWaterMol, waterEntry, alcohols });
  * result.voc?.gramsPerLitre;
  * ```
  */

@@ -306,10 +306,12 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
   }
   const thermal = checkThermal(subjects, conversions, input.steps, marginC);
 
-  const alcohol: AlcoholRelease[] = [...pass.alcohols.values()].map((amount) => ({
+  // g of each alcohol released, once: the result reports it and the VOC figure adds it up
+  const alcohols = [...pass.alcohols.values()].map((amount) => ({ ...amount, grams: amount.mol.times(dec(amount.molarMass)) }));
+  const alcohol: AlcoholRelease[] = alcohols.map((amount) => ({
     name: amount.name,
     mol: toNumber(amount.mol),
-    grams: toNumber(amount.mol.times(dec(amount.molarMass))),
+    grams: toNumber(amount.grams),
   }));
 
   const ordered = orderLines(lines.map(toRecipeLine), input.additionOrder);
@@ -370,6 +372,6 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
   if (solventSummary) result.solvent = solventSummary;
   if (modifierResults.length > 0) result.modifiers = modifierResults;
   // What the coat will be: film (with a coating), optics, VOC, epoxy–amine balance, cost.
-  addCoatPredictions(result, { input, byId, lines, composite: compositeDecimals, phases, solidMass, solMass, solVolume, totalWaterMol, waterEntry, alcohols: pass.alcohols.values() });
+  addCoatPredictions(result, { input, byId, lines, composite: compositeDecimals, phases, solidMass, solMass, solVolume, totalWaterMol, waterEntry, alcohols });
   return result;
 }

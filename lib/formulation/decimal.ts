@@ -171,7 +171,7 @@ export function divideUnlessOne(value: Dec, divisor: number | undefined): Dec {
  */
 export function cubeRoot(value: Dec): Dec {
   if (value.isZero()) return ZERO;
-  const approximate = Math.cbrt(value.toNumber());
+  const approximate = Math.cbrt(toNumber(value));
   // outside the range of a double: let decimal.js do the whole root
   if (!Number.isFinite(approximate) || approximate === 0) return value.cbrt();
   const guess = new Dec(approximate);
@@ -192,7 +192,7 @@ export function cubeRoot(value: Dec): Dec {
  */
 export function squareRoot(value: Dec): Dec {
   if (value.isZero()) return ZERO;
-  const approximate = Math.sqrt(value.toNumber());
+  const approximate = Math.sqrt(toNumber(value));
   // outside the range of a double: let decimal.js do the whole root
   if (!Number.isFinite(approximate) || approximate === 0) return value.sqrt();
   const guess = new Dec(approximate);

@@ -44,8 +44,8 @@ export function vocVerdict(material: Material): VocVerdict {
 export interface VocInputs {
   lines: readonly DecLine[];
   byId: Map<string, IndexedMaterial>;
-  /** Alcohol released on full hydrolysis, mol and g/mol per alcohol. */
-  alcohols: Iterable<{ mol: Dec; molarMass: number }>;
+  /** Alcohol released on full hydrolysis, g of each alcohol. */
+  alcohols: Iterable<{ grams: Dec }>;
   /** Water in the sol, added and carried, mol. */
   waterMol: Dec;
   /** The water material (its molar mass and density give the water volume). */
@@ -72,7 +72,7 @@ export interface VocInputs {
  * @returns the VOC figures and an info notice naming materials assumed volatile
  * @example
  * ```ts
- * vocFigures({ lines, byId, alcohols: pass.alcohols.values(), waterMol, waterEntry, solVolumeMl }).voc.gramsPerLitre;
+ * vocFigures({ lines, byId, alcohols: [{ grams: dec(12.3) }], waterMol, waterEntry, solVolumeMl }).voc.gramsPerLitre;
  * ```
  */
 export function vocFigures(inputs: VocInputs): { voc: VocResult; notices: Notice[] } {
@@ -103,7 +103,7 @@ export function vocFigures(inputs: VocInputs): { voc: VocResult; notices: Notice
       }
     }
   }
-  for (const alcohol of inputs.alcohols) grams = grams.plus(alcohol.mol.times(dec(alcohol.molarMass)));
+  for (const alcohol of inputs.alcohols) grams = grams.plus(alcohol.grams);
 
   const waterMaterial = inputs.waterEntry.material;
   const waterMl = inputs.waterMol.isZero()
