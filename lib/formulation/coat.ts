@@ -1,8 +1,8 @@
-import type { PhaseInput } from "./composite";
+import type { CompositeFigures, PhaseInput } from "./composite";
 import type { DecLine } from "./composition";
 import { batchCost } from "./cost";
 import { cureBalance } from "./cure";
-import { Dec, ZERO } from "./decimal";
+import { Dec } from "./decimal";
 import { filmPrediction } from "./film";
 import type { FormulationInput } from "./input-schema";
 import type { IndexedMaterial } from "./material-index";
@@ -15,6 +15,8 @@ export interface CoatContext {
   input: FormulationInput;
   byId: Map<string, IndexedMaterial>;
   lines: readonly DecLine[];
+  /** ρ_th, S / ρ_th and P of the dry composite, decimal (from `compositeFigures`). */
+  composite: Pick<CompositeFigures, "theoreticalDensity" | "solidVolumeMl" | "porosity">;
   /** Phases of the dry composite, bonded ligands included. */
   phases: readonly PhaseInput[];
   /** S, g of dry composite. */
@@ -26,8 +28,8 @@ export interface CoatContext {
   /** Water in the sol, added and carried, mol. */
   totalWaterMol: Dec;
   waterEntry: IndexedMaterial;
-  /** Alcohol released on full hydrolysis. */
-  alcohols: Iterable<{ mol: Dec; molarMass: number }>;
+  /** Alcohol released on full hydrolysis: mol, g/mol and g of each. */
+  alcohols: Iterable<{ mol: Dec; molarMass: number; grams: Dec }>;
 }
 
 /**
@@ -35,29 +37,27 @@ export interface CoatContext {
  * be"): the film (only when the input states a coating method), the dry
  * coat's refractive index beside the substrate's, VOC (always), the
  * epoxy–amine balance (when an equivalent weight is present) and the cost
- * (when the lines have prices), with their notices. Reads the composite's
- * theoretical density and porosity from `result`; P = 0 when no bulk
- * density is known.
+ * (when the lines have prices), with their notices. Takes the composite's
+ * theoretical density, dense volume and porosity (P = 0 when no bulk
+ * density is known) as the decimals `compositeFigures` computed.
  *
  * @param result - the result so far; gains coating, optics, voc, cure, cost and notices
  * @param context - the decimal figures of the computation
  * @example
  * ```ts
- * addCoatPredictions(result, { input, byId, lines, phases, solidMass, solMass, solVolume, totalWaterMol, waterEntry, alcohols: pass.alcohols.values() });
+ * addCoatPredictions(result, { input, byId, lines, composite, phases, solidMass, solMass, solVolume, totalWaterMol, waterEntry, alcohols });
  * result.voc?.gramsPerLitre;
  * ```
  */
 export function addCoatPredictions(result: FormulationResult, context: CoatContext): void {
   const { input, byId, lines, solidMass, solVolume } = context;
   const notices = result.notices;
-  // Per-call figures become decimals directly (`dec` memoises material constants; these would only fill its cache).
-  const porosity = result.composite.porosity === undefined ? ZERO : new Dec(result.composite.porosity);
-  const theoreticalDensity = new Dec(result.composite.theoreticalDensity);
+  const { porosity, theoreticalDensity } = context.composite;
 
   let coverage: Dec | undefined;
   if (input.coating) {
     // φ_s = (S / ρ_th) / V_sol; ρ of the sol = sol mass / sol volume
-    const solidVolumeFraction = solidMass.div(theoreticalDensity).div(solVolume);
+    const solidVolumeFraction = context.composite.solidVolumeMl.div(solVolume);
     const film = filmPrediction(input.coating, { solidVolumeFraction, porosity, densityGPerCm3: context.solMass.div(solVolume) });
     result.coating = film.coating;
     coverage = new Dec(film.coating.coverageM2PerL);

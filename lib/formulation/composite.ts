@@ -22,6 +22,18 @@ export interface BulkDensity {
   field: string;
 }
 
+/** The composite figures, with the decimals the coat predictions go on from. */
+export interface CompositeFigures {
+  /** The figures as reported. */
+  result: CompositeResult;
+  /** ρ_th, g/cm³ (decimal). */
+  theoreticalDensity: Dec;
+  /** S / ρ_th, mL of dense dry composite (decimal). */
+  solidVolumeMl: Dec;
+  /** P, 0 when no bulk density is known (decimal). */
+  porosity: Dec;
+}
+
 /**
  * Volumetric and linear shrinkage from a sol volume to a solid volume:
  * volumetric = 1 − V_solid / V_sol, linear = 1 − (V_solid / V_sol)^(1/3).
@@ -47,12 +59,12 @@ export function shrinkage(solidVolumeMl: Dec, solVolumeMl: Dec): Shrinkage {
  * @param solidMass - S, g
  * @param solVolumeMl - sol volume, mL (ideal mixing)
  * @param bulk - bulk density of the dry gel, if known
- * @returns composite figures as plain numbers
+ * @returns composite figures as plain numbers (`result`), and ρ_th, S / ρ_th and P as decimals
  * @example
  * ```ts
  * // 100 % silica (2.20 g/cm³), S = 22 g, sol 100 mL → dense solid 10 mL, volumetric shrinkage 0.9
  * compositeFigures([{ materialId: "teos", weightFraction: new Dec(1), weightFractionValue: 1, density: new Dec(2.2), densityValue: 2.2 }],
- *   new Dec(22), new Dec(100));
+ *   new Dec(22), new Dec(100)).result.denseShrinkage.volumetric; // 0.9
  * ```
  */
 export function compositeFigures(
@@ -60,7 +72,7 @@ export function compositeFigures(
   solidMass: Dec,
   solVolumeMl: Dec,
   bulk?: BulkDensity,
-): CompositeResult {
+): CompositeFigures {
   const specificVolumes = phases.map((phase) => per(phase.weightFraction, phase.densityValue));
   let totalSpecificVolume = ZERO;
   for (const value of specificVolumes) totalSpecificVolume = totalSpecificVolume.plus(value);
@@ -76,12 +88,15 @@ export function compositeFigures(
     if (phase.residueFormula !== undefined) out.residueFormula = phase.residueFormula;
     return out;
   });
+  // S / ρ_th = S · Σ (w_k / ρ_k)
+  const solidVolumeMl = solidMass.times(totalSpecificVolume);
   const result: CompositeResult = {
     massGrams: toNumber(solidMass),
     theoreticalDensity: toNumber(theoreticalDensity),
     phases: outPhases,
-    denseShrinkage: shrinkage(solidMass.div(theoreticalDensity), solVolumeMl),
+    denseShrinkage: shrinkage(solidVolumeMl, solVolumeMl),
   };
+  let porosity = ZERO;
   if (bulk) {
     if (bulk.density.greaterThan(theoreticalDensity)) {
       throw new FormulationError(
@@ -90,8 +105,9 @@ export function compositeFigures(
         `bulk density ${toNumber(bulk.density)} g/cm³ exceeds the theoretical density ${Number(theoreticalDensity.toPrecision(5))} g/cm³ of this composition`,
       );
     }
-    result.porosity = toNumber(ONE.minus(bulk.density.div(theoreticalDensity)));
+    porosity = ONE.minus(bulk.density.div(theoreticalDensity));
+    result.porosity = toNumber(porosity);
     result.dryGelShrinkage = shrinkage(solidMass.div(bulk.density), solVolumeMl);
   }
-  return result;
+  return { result, theoreticalDensity, solidVolumeMl, porosity };
 }

@@ -4,7 +4,7 @@ import { solidMassFromBasis } from "./basis";
 import { compositeFigures, type BulkDensity } from "./composite";
 import { composeComponents, type DecLine } from "./composition";
 import { DEFAULT_THERMAL_MARGIN_C, ENGINE_VERSION, MIN_LINE_GRAMS, ML_PER_L, WATER_MOLAR_MASS_G_PER_MOL } from "./constants";
-import { add, type Dec, dec, ONE, toNumber, ZERO, positive } from "./decimal";
+import { add, type Dec, dec, HALF, ONE, toNumber, ZERO, positive } from "./decimal";
 import { dosePerNetworkAtom } from "./dosing";
 import { FormulationError } from "./errors";
 import type { FormulationInput } from "./input-schema";
@@ -296,7 +296,8 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
   } else if (basis.type === "gelBody") {
     bulk = { density: dec(basis.bulkDensity), field: "basis.bulkDensity" };
   }
-  const composite = compositeFigures(phases, solidMass, solVolume, bulk);
+  const compositeDecimals = compositeFigures(phases, solidMass, solVolume, bulk);
+  const composite = compositeDecimals.result;
 
   // Thermal checks: organic phases and the substrate.
   if (input.substrateId !== undefined) {
@@ -305,10 +306,12 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
   }
   const thermal = checkThermal(subjects, conversions, input.steps, marginC);
 
-  const alcohol: AlcoholRelease[] = [...pass.alcohols.values()].map((amount) => ({
+  // g of each alcohol released, once: the result reports it and the VOC figure adds it up
+  const alcohols = [...pass.alcohols.values()].map((amount) => ({ ...amount, grams: amount.mol.times(dec(amount.molarMass)) }));
+  const alcohol: AlcoholRelease[] = alcohols.map((amount) => ({
     name: amount.name,
     mol: toNumber(amount.mol),
-    grams: toNumber(amount.mol.times(dec(amount.molarMass))),
+    grams: toNumber(amount.grams),
   }));
 
   const ordered = orderLines(lines.map(toRecipeLine), input.additionOrder);
@@ -349,7 +352,7 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
       addGrams: toNumber(addGrams),
       addMl: toNumber(addMl),
       hydrolysisMol: toNumber(groupMol),
-      condensationMol: toNumber(groupMol.div(2)),
+      condensationMol: toNumber(groupMol.times(HALF)),
       effectiveR: toNumber(effectiveR),
       ...(groupMol.isZero() ? {} : { effectiveH: toNumber(totalWaterMol.div(groupMol)) }),
       ...(groupsReplacedMol.isZero() ? {} : { groupsReplacedMol: toNumber(groupsReplacedMol) }),
@@ -369,6 +372,6 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
   if (solventSummary) result.solvent = solventSummary;
   if (modifierResults.length > 0) result.modifiers = modifierResults;
   // What the coat will be: film (with a coating), optics, VOC, epoxy–amine balance, cost.
-  addCoatPredictions(result, { input, byId, lines, phases, solidMass, solMass, solVolume, totalWaterMol, waterEntry, alcohols: pass.alcohols.values() });
+  addCoatPredictions(result, { input, byId, lines, composite: compositeDecimals, phases, solidMass, solMass, solVolume, totalWaterMol, waterEntry, alcohols });
   return result;
 }

@@ -1,6 +1,6 @@
 import type { DecLine } from "./composition";
 import { ML_PER_L } from "./constants";
-import { type Dec, dec, toNumber, ZERO } from "./decimal";
+import { type Dec, dec, positive, toNumber, ZERO } from "./decimal";
 import type { IndexedMaterial } from "./material-index";
 import type { CostResult, Notice } from "./result-types";
 
@@ -39,7 +39,7 @@ export function batchCost(
   let priced = 0;
   const unpriced: IndexedMaterial[] = [];
   for (const line of lines) {
-    if (!line.massGrams.greaterThan(0)) continue;
+    if (!positive(line.massGrams)) continue;
     const entry = byId.get(line.materialId);
     if (!entry) continue;
     const price = entry.material.pricePerKg;

@@ -148,5 +148,35 @@ describe("FormulationError", () => {
         params: { code: "fractions_do_not_sum" },
       });
     });
+
+    it("refuses weight fractions just past 0.5 % from 1 and scales those at exactly 0.5 %, as the decimal sum decides", () => {
+      // 0.333 + 0.333 + 0.329 is 0.995 in decimals (0.9950000000000001 in floats): scaled; 0.994999 is refused
+      const at = (third: number, others = 0.333): FormulationInput => ({
+        ...base(),
+        materials: [...base().materials, ref("gptms")],
+        components: [
+          { materialId: "teos", weightFraction: others },
+          { materialId: "pcl", weightFraction: others },
+          { materialId: "gptms", weightFraction: third },
+        ],
+      });
+      expect(formulationInputSchema.safeParse(at(0.329)).success).toBe(true);
+      expect(computeFormulation(at(0.329)).notices.map((n) => n.code)).toContain("fractions_scaled");
+      expect(thrown(at(0.328999)).code).toBe("fractions_do_not_sum");
+      expect(thrown(at(0.328999)).message).toContain("weight fractions sum to 0.994999,");
+      // 3 × 0.335 is 1.005 in decimals, 1.0050000000000001 in floats: scaled, not refused
+      expect(formulationInputSchema.safeParse(at(0.335, 0.335)).success).toBe(true);
+      expect(thrown(at(0.335001, 0.335)).code).toBe("fractions_do_not_sum");
+    });
+
+    it("refuses a material whose assay, water and solvent fractions add up to more than 1, on its assay", () => {
+      const parsed = formulationInputSchema.safeParse({
+        ...base(),
+        materials: base().materials.map((m) => (m.id === "hcl-37" ? { ...m, assay: 0.5, waterFraction: 0.6 } : m)),
+      });
+      expect(parsed.error?.issues.map((issue) => [issue.path.join("."), issue.message])).toEqual([
+        ["materials.4.assay", "assay + water fraction + solvent fraction is 1.1, it must not exceed 1"],
+      ]);
+    });
   });
 });

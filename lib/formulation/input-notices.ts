@@ -1,10 +1,13 @@
 import { CATALYST_RATIO_CAUTION } from "./constants";
-import { Dec } from "./decimal";
+import { Dec, ONE } from "./decimal";
+import { compareSum, decimalSum } from "./sum-compare";
 import type { Material } from "./material-schema";
 import type { Notice } from "./result-types";
 
 /** Tolerance on assay + water + solvent fractions = 1 (dimensionless). Common practice, no source. */
 const BALANCE_TOLERANCE = 1e-9;
+/** The largest stated sum (assay + water + solvent fractions) that leaves an unstated balance: 1 − BALANCE_TOLERANCE. */
+const HIGHEST_UNBALANCED = new Dec(1).minus(BALANCE_TOLERANCE);
 
 function percent(value: number): string {
   return `${Number((value * 100).toPrecision(4))} %`;
@@ -28,9 +31,10 @@ export function assayBalanceNotices(dispensed: readonly { material: Material; pa
   const notices: Notice[] = [];
   for (const { material, path } of dispensed) {
     if (material.assay === undefined || material.assay >= 1) continue;
-    const stated = new Dec(material.assay).plus(material.waterFraction ?? 0).plus(material.solventFraction ?? 0);
-    const rest = new Dec(1).minus(stated);
-    if (!rest.greaterThan(BALANCE_TOLERANCE)) continue;
+    // 1 − (assay + water + solvent) > tolerance, i.e. the stated fractions below 1 − tolerance (decided as the decimal sum decides)
+    const fractions = [material.assay, material.waterFraction ?? 0, material.solventFraction ?? 0];
+    if (compareSum(fractions, HIGHEST_UNBALANCED) >= 0) continue;
+    const rest = ONE.minus(decimalSum(fractions));
     notices.push({
       level: "info",
       code: "assay_balance_unstated",

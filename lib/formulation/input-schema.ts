@@ -1,6 +1,7 @@
 import { z } from "zod";
 import { WEIGHT_FRACTION_SCALE_TOLERANCE } from "./constants";
-import { dec, ZERO } from "./decimal";
+import { ONE } from "./decimal";
+import { compareSum, decimalSum } from "./sum-compare";
 import { nameText } from "./text-rules";
 import { materialSchema, type Material, type MaterialKind } from "./material-schema";
 import {
@@ -234,6 +235,10 @@ export const coatingSpecSchema = z.discriminatedUnion(
 
 type Ctx = z.RefinementCtx;
 
+/** The highest and lowest sums of weight fractions the engine scales to 1 (1 ± WEIGHT_FRACTION_SCALE_TOLERANCE). */
+const HIGHEST_SUM = ONE.plus(WEIGHT_FRACTION_SCALE_TOLERANCE);
+const LOWEST_SUM = ONE.minus(WEIGHT_FRACTION_SCALE_TOLERANCE);
+
 function addIssue(ctx: Ctx, path: (string | number)[], code: string, message: string): void {
   ctx.addIssue({ code: "custom", path, message, params: { code } });
 }
@@ -313,7 +318,6 @@ export const formulationInputSchema = z
     });
 
     const seen = new Set<string>();
-    let total = ZERO;
     input.components.forEach((component, index) => {
       const path = ["components", index, "materialId"];
       checkReference(ctx, byId, component.materialId, path, ["precursor", "organic"]);
@@ -321,9 +325,11 @@ export const formulationInputSchema = z
         addIssue(ctx, path, "duplicate_component", `"${byId.get(component.materialId)?.name ?? "a material"}" is chosen for two components; combine its weight fractions`);
       }
       seen.add(component.materialId);
-      total = total.plus(dec(component.weightFraction));
     });
-    if (total.minus(1).abs().greaterThan(WEIGHT_FRACTION_SCALE_TOLERANCE)) {
+    // |Σw − 1| > tolerance, as the decimal sum decides (the float sum settles all but a sum at the edge)
+    const fractions = input.components.map((component) => component.weightFraction);
+    if (compareSum(fractions, HIGHEST_SUM) > 0 || compareSum(fractions, LOWEST_SUM) < 0) {
+      const total = decimalSum(fractions);
       addIssue(
         ctx,
         ["components"],

@@ -41,7 +41,9 @@ export function indexFromTerm(term: Dec): Dec {
   return squareRoot(ONE.plus(term.times(2)).div(ONE.minus(term)));
 }
 
-const perDensityCache = new Map<string, Dec>();
+/** L(n) / ρ by index, then by density (numbers as keys: no key text to build per phase and call). */
+const perDensityCache = new Map<number, Map<number, Dec>>();
+let perDensityCount = 0;
 
 /**
  * L(n) / ρ for a phase of index n and density ρ (cm³/g), memoised: with it the
@@ -49,12 +51,21 @@ const perDensityCache = new Map<string, Dec>();
  * multiplication per phase (the phases' constants recur on every call).
  */
 function termPerDensity(index: number, density: Dec, densityValue: number): Dec {
-  const key = `${index}|${densityValue}`;
-  let value = perDensityCache.get(key);
+  let byDensity = perDensityCache.get(index);
+  let value = byDensity?.get(densityValue);
   if (value === undefined) {
-    if (perDensityCache.size >= TERM_CACHE_LIMIT) perDensityCache.clear();
+    if (perDensityCount >= TERM_CACHE_LIMIT) {
+      perDensityCache.clear();
+      perDensityCount = 0;
+      byDensity = undefined;
+    }
+    if (byDensity === undefined) {
+      byDensity = new Map();
+      perDensityCache.set(index, byDensity);
+    }
     value = lorentzLorenzTerm(index).div(density);
-    perDensityCache.set(key, value);
+    byDensity.set(densityValue, value);
+    perDensityCount += 1;
   }
   return value;
 }

@@ -34,7 +34,8 @@ export interface OrganicAmounts {
 export function organicPhaseDensity(entry: IndexedMaterial): number {
   const material = entry.material;
   if (material.phaseDensity !== undefined) return material.phaseDensity;
-  if ((material.assay ?? 1) === 1) return requireDensity(entry).toNumber();
+  // the density as given (requireDensity throws when there is none)
+  if ((material.assay ?? 1) === 1) return material.density ?? requireDensity(entry).toNumber();
   throw new FormulationError(
     "missing_density",
     `${entry.path}.phaseDensity`,

@@ -209,7 +209,9 @@ export function checkThermal(
     }
     const hard = hardLimit(subject, allInert ? "inert" : "air");
     if (hard) {
-      const cautionFrom = new Dec(hard.limitC).minus(marginC).toNumber();
+      // whole degrees (the usual case) subtract exactly in floats; otherwise the decimal difference, rounded once
+      const cautionFrom =
+        Number.isSafeInteger(hard.limitC) && Number.isSafeInteger(marginC) ? hard.limitC - marginC : new Dec(hard.limitC).minus(marginC).toNumber();
       if (!maxAllowed || cautionFrom < maxAllowed.value) maxAllowed = { value: cautionFrom, materialId: subject.materialId, limit: hard.limit };
     }
     for (const step of steps) checks.push(checkStep(subject, any, step, marginC));

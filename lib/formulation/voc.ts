@@ -1,6 +1,6 @@
 import type { DecLine } from "./composition";
 import { ML_PER_L, VOC_BOILING_POINT_MAX_C, WATER_MOLAR_MASS_G_PER_MOL } from "./constants";
-import { type Dec, dec, timesFactor, toNumber, ZERO } from "./decimal";
+import { type Dec, dec, positive, timesFactor, toNumber, ZERO } from "./decimal";
 import { FormulationError } from "./errors";
 import { requireDensity, type IndexedMaterial } from "./material-index";
 import type { Material } from "./material-schema";
@@ -44,8 +44,8 @@ export function vocVerdict(material: Material): VocVerdict {
 export interface VocInputs {
   lines: readonly DecLine[];
   byId: Map<string, IndexedMaterial>;
-  /** Alcohol released on full hydrolysis, mol and g/mol per alcohol. */
-  alcohols: Iterable<{ mol: Dec; molarMass: number }>;
+  /** Alcohol released on full hydrolysis, g of each alcohol. */
+  alcohols: Iterable<{ grams: Dec }>;
   /** Water in the sol, added and carried, mol. */
   waterMol: Dec;
   /** The water material (its molar mass and density give the water volume). */
@@ -72,7 +72,7 @@ export interface VocInputs {
  * @returns the VOC figures and an info notice naming materials assumed volatile
  * @example
  * ```ts
- * vocFigures({ lines, byId, alcohols: pass.alcohols.values(), waterMol, waterEntry, solVolumeMl }).voc.gramsPerLitre;
+ * vocFigures({ lines, byId, alcohols: [{ grams: dec(12.3) }], waterMol, waterEntry, solVolumeMl }).voc.gramsPerLitre;
  * ```
  */
 export function vocFigures(inputs: VocInputs): { voc: VocResult; notices: Notice[] } {
@@ -103,14 +103,14 @@ export function vocFigures(inputs: VocInputs): { voc: VocResult; notices: Notice
       }
     }
   }
-  for (const alcohol of inputs.alcohols) grams = grams.plus(alcohol.mol.times(dec(alcohol.molarMass)));
+  for (const alcohol of inputs.alcohols) grams = grams.plus(alcohol.grams);
 
   const waterMaterial = inputs.waterEntry.material;
   const waterMl = inputs.waterMol.isZero()
     ? ZERO
     : inputs.waterMol.times(dec(waterMaterial.molarMass ?? WATER_MOLAR_MASS_G_PER_MOL)).div(requireDensity(inputs.waterEntry));
   const lessWaterMl = inputs.solVolumeMl.minus(waterMl);
-  if (!lessWaterMl.greaterThan(0)) {
+  if (!positive(lessWaterMl)) {
     throw new FormulationError(
       "invalid_input",
       `${inputs.waterEntry.path}.density`,

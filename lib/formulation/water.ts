@@ -1,4 +1,4 @@
-import { Dec, ZERO } from "./decimal";
+import { Dec, HALF, ZERO } from "./decimal";
 import type { Notice } from "./result-types";
 
 /**
@@ -99,7 +99,7 @@ export function waterNotices(p: {
         (p.hydrolysableGroupMol.isZero() ? "." : ` (h = ${show(p.totalMol.div(p.hydrolysableGroupMol))}).`),
     });
   }
-  const netCondensation = p.hydrolysableGroupMol.div(2);
+  const netCondensation = p.hydrolysableGroupMol.times(HALF);
   if (p.hydrolysableGroupMol.isZero()) return notices;
   if (clearlyBelow(p.totalMol, netCondensation)) {
     notices.push({
