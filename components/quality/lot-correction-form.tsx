@@ -33,6 +33,7 @@ export function LotCorrectionForm({ lot }: LotCorrectionFormProps) {
   const router = useRouter();
   const [open, setOpen] = useState(false);
   const [outcome, setOutcome] = useState<Outcome>(null);
+  const [stale, setStale] = useState(false);
   const { register, handleSubmit, formState, setError } = useForm<LotCorrectionFormInput, unknown, LotCorrectionFormValues>({
     resolver: zodResolver(lotCorrectionFormSchema),
     defaultValues: {
@@ -60,6 +61,8 @@ export function LotCorrectionForm({ lot }: LotCorrectionFormProps) {
     } catch (err) {
       if (err instanceof ApiRequestError) {
         for (const f of LOT_CORRECTION_FIELDS) if (err.fields[f]) setError(f, { message: err.fields[f] });
+        // someone else saved a correction first: offer the saved lot (the page keys this form by the lot's version)
+        setStale(err.status === 409 && !!err.fields.version);
       }
       setOutcome({ tone: "error", text: `Not saved: ${errorMessage(err)}` });
     }
@@ -110,6 +113,7 @@ export function LotCorrectionForm({ lot }: LotCorrectionFormProps) {
         <Button type="submit" variant="primary" busy={isSubmitting}>
           Save correction
         </Button>
+        {stale ? <Button onClick={() => router.refresh()}>Reload the saved lot</Button> : null}
         <Button onClick={() => setOpen(false)} disabled={isSubmitting}>
           Cancel
         </Button>

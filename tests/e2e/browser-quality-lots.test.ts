@@ -5,7 +5,8 @@
  * not make the batch releases it from the batch record's disposition panel,
  * and the lot's quantity on hand goes down by the line's mass. Production
  * then corrects the lot's expiry and assay through its Edit form (a bad
- * assay named beside its field), a reviewer sees no Edit, and a batch line
+ * assay named beside its field); Edit opens again on the saved values and,
+ * after someone else's correction, offers the saved lot; a reviewer sees no Edit, and a batch line
  * that picked the lot shows its lot number read-only.
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
@@ -107,6 +108,29 @@ describe("material lots and batch disposition in the browser", () => {
     const lot = (await (await api.fetch(`/api/lots/${lotId}`)).json()) as { version: number; measuredAssay: number; expiresOn: string; quantityOnHand: number };
     expect(lot).toMatchObject({ version: 2, measuredAssay: 0.97, expiresOn: "2099-06-30" });
     expect(lot.quantityOnHand).toBeLessThan(2);
+  });
+
+  it("opens Edit again on the saved values, and after someone else's correction offers to reload the saved lot", async () => {
+    // still on the lot page where the correction above was saved: no new page load
+    const page = production.page;
+    await page.getByRole("button", { name: "Edit", exact: true }).click();
+    // the fields show the correction saved above, not the values at receipt
+    expect(await page.locator("#edit-lot-assay").inputValue()).toBe("0.97");
+    expect(await page.locator("#edit-lot-expires").inputValue()).toBe("2099-06-30");
+    // someone else corrects the notes meanwhile (version 2 → 3)
+    const other = await api.fetch(`/api/lots/${lotId}`, { method: "PATCH", json: { version: 2, notes: `Recounted ${stamp}` } });
+    expect(other.status).toBe(200);
+    await page.locator("#edit-lot-supplier").fill("Browser Silanes GmbH");
+    await page.getByRole("button", { name: "Save correction" }).click();
+    await poll(() => page.getByText(/Someone corrected this lot after you opened it/).count()).toBe(1);
+    await page.getByRole("button", { name: "Reload the saved lot" }).click();
+    // the page shows the saved lot; Edit opens on its values, the unsaved supplier gone
+    await poll(() => page.locator("#received").textContent()).toContain(`Recounted ${stamp}`);
+    await page.getByRole("button", { name: "Edit", exact: true }).click();
+    expect(await page.locator("#edit-lot-notes").inputValue()).toBe(`Recounted ${stamp}`);
+    expect(await page.locator("#edit-lot-supplier").inputValue()).toBe("Browser Silanes");
+    const lot = (await (await api.fetch(`/api/lots/${lotId}`)).json()) as { version: number; supplier: string };
+    expect(lot).toMatchObject({ version: 3, supplier: "Browser Silanes" });
   });
 
   it("shows a reviewer the lot without an Edit button", async () => {
