@@ -4,7 +4,7 @@
  * the 10-component formulation of bench-engine (scripts/bench-input.ts),
  * run the way the explorer runs it: runExplorationSync prepares the numeric
  * model once for the plan (lib/formulation/numeric/evaluator.ts), writes each
- * point's varied numbers as knob values (lib/explore/knobs.ts), the kernel
+ * point's varied numbers as knob values (lib/explore/apply.ts), the kernel
  * (lib/formulation/numeric/kernel.ts) computes every figure, core and coat,
  * and every scalar figure is copied into the run's Float64Arrays.
  *

@@ -1,10 +1,13 @@
 /**
- * The revision's input at one point of a grid. Runs for every point of a run
- * (up to 20,000 times), so it copies only what the point changes and shares
- * everything else with the revision's input. Pure TypeScript.
+ * One point of a grid applied to the revision's input: as knob values
+ * (lib/formulation/numeric/knobs.ts; plain numbers, what the numeric model's
+ * prepared evaluator takes for every point of a run) and, from those, as the
+ * point's input (pointInput: for the decimal engine and for opening a
+ * candidate), which copies only what the point changes. Pure TypeScript.
  */
-import type { Component, FormulationInput } from "../formulation/input-schema";
+import type { FormulationInput } from "../formulation/input-schema";
 import { WEIGHT_FRACTION } from "../formulation/limits";
+import { inputAt, type Knob } from "../formulation/numeric/knobs";
 import type { GridPlan } from "./types";
 
 /** Why a point has no valid input: a code and the input's field at fault. */
@@ -67,29 +70,90 @@ export function prepare(base: FormulationInput, plan: GridPlan): Prepared {
   return made;
 }
 
-function ternaryInput(base: FormulationInput, plan: GridPlan, p: Prepared, point: number): FormulationInput {
-  const t = plan.ternary!;
-  const components: Component[] = base.components.slice();
-  for (let k = 0; k < 3; k++) {
-    const i = p.ternaryOf[k]!;
-    components[i] = { materialId: t.materialIds[k]!, weightFraction: tidy(t.shares[3 * point + k]! * t.total) };
-  }
-  return { ...base, components };
+/** The knobs of a plan and where each axis writes. */
+export interface KnobPlan {
+  knobs: Knob[];
+  /** True when the first base.components.length knobs are every component's weight fraction. */
+  weights: boolean;
+  /** Per axis: its knob, or −1 for a weight-fraction axis (it sets the weight knobs). */
+  axisKnob: number[];
+  /** Per weight-fraction axis: its component; −1 for other axes. */
+  componentOf: number[];
+  othersTotal: number;
+  ternaryOf: number[];
 }
 
-/** Sets the varied weight fractions; the others keep their proportions and share 1 − Σ varied. */
-function applyFractions(base: FormulationInput, p: Prepared, varied: number[], values: number[]): Component[] | PointRefusal {
+/**
+ * The knobs a plan varies: every component's weight fraction when an axis (or the ternary map) varies
+ * one, then one knob per other axis.
+ *
+ * @example
+ * ```ts
+ * knobPlan(base, plan).knobs; // e.g. [{ kind: "weightFraction", component: 0 }, …, { kind: "waterValue" }]
+ * ```
+ */
+export function knobPlan(base: FormulationInput, plan: GridPlan): KnobPlan {
+  const p = prepare(base, plan);
+  const weights = plan.ternary !== undefined || plan.axes.some((a) => a.variable.kind === "weightFraction");
+  const knobs: Knob[] = weights ? base.components.map((_, component) => ({ kind: "weightFraction" as const, component })) : [];
+  const axisKnob = plan.axes.map((axis) => {
+    const v = axis.variable;
+    if (v.kind === "weightFraction") return -1;
+    if (v.kind === "waterRatio") knobs.push({ kind: "waterValue" });
+    else if (v.kind === "solidsContent") knobs.push({ kind: "solidsFraction" });
+    else if (v.kind === "modifierRatio") knobs.push({ kind: "modifierRatio", index: v.index });
+    else if (v.kind === "stepTemperature") knobs.push({ kind: "stepTemperature", index: v.index });
+    else knobs.push({ kind: "withdrawalSpeed" });
+    return knobs.length - 1;
+  });
+  return { knobs, weights, axisKnob, componentOf: p.componentOf, othersTotal: p.othersTotal, ternaryOf: p.ternaryOf };
+}
+
+/**
+ * Writes the knob values of one point into `values` (pointInput's numbers, without the input object).
+ *
+ * @param point - 0 … plan.count − 1
+ * @returns undefined, or pointInput's refusal for the point
+ * @example
+ * ```ts
+ * const k = knobPlan(base, plan);
+ * const values = new Float64Array(k.knobs.length);
+ * if (!pointKnobs(base, plan, k, 7, values)) evaluator.evaluate(values);
+ * ```
+ */
+export function pointKnobs(base: FormulationInput, plan: GridPlan, k: KnobPlan, point: number, values: Float64Array): PointRefusal | undefined {
+  const components = base.components;
+  const n = components.length;
+  if (plan.ternary) {
+    const t = plan.ternary;
+    for (let i = 0; i < n; i++) values[i] = components[i]!.weightFraction;
+    for (let j = 0; j < 3; j++) values[k.ternaryOf[j]!] = tidy(t.shares[3 * point + j]! * t.total);
+    return undefined;
+  }
+  const axes = plan.axes;
+  const two = axes.length === 2;
+  const n1 = two ? axes[1]!.values.length : 1;
+  const i0 = two ? Math.floor(point / n1) : point;
   let sum = 0;
-  for (const v of values) sum += v;
+  for (let a = 0; a < axes.length; a++) {
+    const value = axes[a]!.values[a === 0 ? i0 : point % n1]!;
+    const knob = k.axisKnob[a]!;
+    if (knob >= 0) values[knob] = value;
+    else sum += tidy(value);
+  }
+  if (!k.weights) return undefined;
   let remainder = 1 - sum;
   if (remainder < -SUM_TOLERANCE) return { code: "fractions_over_one", field: "components" };
   if (remainder < 0) remainder = 0;
-  if (remainder > SUM_TOLERANCE && !(p.othersTotal > 0)) return { code: "nothing_takes_the_rest", field: "components" };
-  const scale = p.othersTotal > 0 ? remainder / p.othersTotal : 0;
-  return base.components.map((c, i) => {
-    const at = varied.indexOf(i);
-    return { materialId: c.materialId, weightFraction: tidy(at >= 0 ? values[at]! : c.weightFraction * scale) };
-  });
+  if (remainder > SUM_TOLERANCE && !(k.othersTotal > 0)) return { code: "nothing_takes_the_rest", field: "components" };
+  const scale = k.othersTotal > 0 ? remainder / k.othersTotal : 0;
+  for (let i = 0; i < n; i++) values[i] = tidy(components[i]!.weightFraction * scale);
+  // a component on both axes takes the first axis's value, as pointInput does
+  for (let a = axes.length - 1; a >= 0; a--) {
+    if (k.axisKnob[a]! >= 0) continue;
+    values[k.componentOf[a]!] = tidy(axes[a]!.values[a === 0 ? i0 : point % n1]!);
+  }
+  return undefined;
 }
 
 /**
@@ -112,51 +176,10 @@ function applyFractions(base: FormulationInput, p: Prepared, varied: number[], v
  */
 export function pointInput(base: FormulationInput, plan: GridPlan, point: number): FormulationInput | PointRefusal {
   if (!Number.isInteger(point) || point < 0 || point >= plan.count) return { code: "no_such_point", field: "point" };
-  const p = prepare(base, plan);
-  if (plan.ternary) return ternaryInput(base, plan, p, point);
-  const axes = plan.axes;
-  const n1 = axes.length === 2 ? axes[1]!.values.length : 1;
-  const index = axes.length === 2 ? [Math.floor(point / n1), point % n1] : [point];
-  const out: FormulationInput = { ...base };
-  const varied: number[] = [];
-  const fractions: number[] = [];
-  for (let a = 0; a < axes.length; a++) {
-    const variable = axes[a]!.variable;
-    const value = axes[a]!.values[index[a]!]!;
-    switch (variable.kind) {
-      case "weightFraction":
-        varied.push(p.componentOf[a]!);
-        fractions.push(tidy(value));
-        break;
-      case "waterRatio":
-        out.water = { ...out.water, value };
-        break;
-      case "solidsContent":
-        if (out.basis.type === "solidsContent") out.basis = { ...out.basis, solidsFraction: value };
-        break;
-      case "modifierRatio": {
-        const modifiers = (out.modifiers ?? []).slice();
-        modifiers[variable.index] = { ...modifiers[variable.index]!, molPerMetal: value };
-        out.modifiers = modifiers;
-        break;
-      }
-      case "stepTemperature": {
-        const steps = out.steps.slice();
-        steps[variable.index] = { ...steps[variable.index]!, temperatureC: value };
-        out.steps = steps;
-        break;
-      }
-      case "withdrawalSpeed":
-        if (out.coating?.method === "dip") out.coating = { ...out.coating, withdrawalMmPerS: value };
-        break;
-    }
-  }
-  if (varied.length > 0) {
-    const components = applyFractions(base, p, varied, fractions);
-    if (!Array.isArray(components)) return components;
-    out.components = components;
-  }
-  return out;
+  const k = knobPlan(base, plan);
+  const values = new Float64Array(k.knobs.length);
+  const refusal = pointKnobs(base, plan, k, point, values);
+  return refusal ?? inputAt(base, k.knobs, values);
 }
 
 /**

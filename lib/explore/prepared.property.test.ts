@@ -21,7 +21,7 @@ import { parseFormulationInput } from "../formulation/validate";
 import { isPlanError, planGrid } from "./grid";
 import { inputAt } from "../formulation/numeric/knobs";
 import { isPointRefusal, pointInput } from "./apply";
-import { knobPlan, pointKnobs } from "./knobs";
+import { knobPlan, pointKnobs } from "./apply";
 import { outputCatalogue } from "./outputs";
 import { runExplorationSync } from "./run";
 import type { Grid, Variable } from "./spec";

@@ -6,9 +6,8 @@
  */
 import type { FormulationInput } from "../formulation/input-schema";
 import type { NumericEvaluator, NumericModel } from "../formulation/numeric/figures";
-import { isPointRefusal, pointInput } from "./apply";
+import { isPointRefusal, knobPlan, pointInput, pointKnobs as knobsAt, type KnobPlan } from "./apply";
 import { isPlanError, planGrid } from "./grid";
-import { knobPlan, pointKnobs as knobsAt, type KnobPlan } from "./knobs";
 import { evaluatorReader, outputReader, type EvaluatorReader, type OutputReader } from "./outputs";
 import { bestCandidates, searchOutputs } from "./search";
 import type { Grid, OutputKey, Search } from "./spec";

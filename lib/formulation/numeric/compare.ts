@@ -4,6 +4,7 @@
  * and the thermal status matched exactly. Used by the property test of the
  * numeric path and by the explorer benchmark.
  */
+import { COAT_KEYS } from "./context";
 import type { NumericFigures } from "./figures";
 
 /** The numeric figures compared one by one (every key of NumericFigures but phases and thermalStatus). */
@@ -26,20 +27,7 @@ export const SCALAR_FIGURES = [
   "solventAddedGrams",
   "solventMolPerNetworkAtom",
   "maxAllowedC",
-  "wetThicknessUm",
-  "dryThicknessNm",
-  "coverageM2PerL",
-  "capillaryNumber",
-  "refractiveIndex",
-  "indexMismatch",
-  "vocMassGrams",
-  "vocGramsPerLitre",
-  "vocGramsPerLitreLessWater",
-  "cureRatio",
-  "costTotal",
-  "costPerKgDry",
-  "costPerLitreSol",
-  "costPerM2",
+  ...COAT_KEYS,
 ] as const satisfies readonly (keyof NumericFigures)[];
 
 /** A scalar figure's key. */
