@@ -6,6 +6,7 @@ import { composeComponents, type DecLine } from "./composition";
 import { DEFAULT_THERMAL_MARGIN_C, ENGINE_VERSION, MIN_LINE_GRAMS, ML_PER_L, WATER_MOLAR_MASS_G_PER_MOL } from "./constants";
 import { add, type Dec, dec, HALF, ONE, toNumber, ZERO, positive } from "./decimal";
 import { dosePerNetworkAtom } from "./dosing";
+import { decimalSum } from "./sum-compare";
 import { FormulationError } from "./errors";
 import type { FormulationInput } from "./input-schema";
 import { assayBalanceNotices, catalystRatioNotices, fractionsScaledNotice } from "./input-notices";
@@ -103,7 +104,7 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
   let floatSum = 0;
   for (const component of input.components) floatSum += component.weightFraction;
   const exact = Math.abs(floatSum - 1) <= 1e-12;
-  const fractionSum = exact ? ONE : input.components.reduce((sum, c) => sum.plus(dec(c.weightFraction)), ZERO);
+  const fractionSum = exact ? ONE : decimalSum(input.components.map((c) => c.weightFraction));
   const components = input.components.map((c) => ({
     materialId: c.materialId,
     weightFraction: exact ? dec(c.weightFraction) : dec(c.weightFraction).div(fractionSum),
