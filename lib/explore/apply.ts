@@ -81,6 +81,8 @@ export interface KnobPlan {
   componentOf: number[];
   othersTotal: number;
   ternaryOf: number[];
+  /** The base's weight fractions, in component order (read per point without the input objects). */
+  baseWeights: Float64Array;
 }
 
 /**
@@ -106,7 +108,8 @@ export function knobPlan(base: FormulationInput, plan: GridPlan): KnobPlan {
     else knobs.push({ kind: "withdrawalSpeed" });
     return knobs.length - 1;
   });
-  return { knobs, weights, axisKnob, componentOf: p.componentOf, othersTotal: p.othersTotal, ternaryOf: p.ternaryOf };
+  const baseWeights = Float64Array.from(base.components, (c) => c.weightFraction);
+  return { knobs, weights, axisKnob, componentOf: p.componentOf, othersTotal: p.othersTotal, ternaryOf: p.ternaryOf, baseWeights };
 }
 
 /**
@@ -122,11 +125,11 @@ export function knobPlan(base: FormulationInput, plan: GridPlan): KnobPlan {
  * ```
  */
 export function pointKnobs(base: FormulationInput, plan: GridPlan, k: KnobPlan, point: number, values: Float64Array): PointRefusal | undefined {
-  const components = base.components;
-  const n = components.length;
+  const weights = k.baseWeights;
+  const n = weights.length;
   if (plan.ternary) {
     const t = plan.ternary;
-    for (let i = 0; i < n; i++) values[i] = components[i]!.weightFraction;
+    for (let i = 0; i < n; i++) values[i] = weights[i]!;
     for (let j = 0; j < 3; j++) values[k.ternaryOf[j]!] = tidy(t.shares[3 * point + j]! * t.total);
     return undefined;
   }
@@ -147,7 +150,7 @@ export function pointKnobs(base: FormulationInput, plan: GridPlan, k: KnobPlan, 
   if (remainder < 0) remainder = 0;
   if (remainder > SUM_TOLERANCE && !(k.othersTotal > 0)) return { code: "nothing_takes_the_rest", field: "components" };
   const scale = k.othersTotal > 0 ? remainder / k.othersTotal : 0;
-  for (let i = 0; i < n; i++) values[i] = tidy(components[i]!.weightFraction * scale);
+  for (let i = 0; i < n; i++) values[i] = tidy(weights[i]! * scale);
   // a component on both axes takes the first axis's value, as pointInput does
   for (let a = axes.length - 1; a >= 0; a--) {
     if (k.axisKnob[a]! >= 0) continue;

@@ -1,8 +1,9 @@
 import { describe, expect, it } from "vitest";
 import { decimalModel, type NumericModel } from "../formulation/numeric/figures";
+import { numericModel } from "../formulation/numeric/model";
 import { isPlanError, planGrid } from "./grid";
 import { runExploration, runExplorationSync } from "./run";
-import type { Grid } from "./spec";
+import type { Grid, OutputKey } from "./spec";
 import { visorCoat } from "./test-fixtures";
 import { POINT_STATUSES, type GridPlan } from "./types";
 
@@ -58,6 +59,29 @@ describe("runExplorationSync", () => {
     expect(run.refusals).toEqual([{ point: 2, code: "solids_content_too_high", field: "basis.solidsFraction" }]);
     expect(run.values[0]![0]).toBeCloseTo(1, 12);
     expect(Number.isNaN(run.values[0]![2])).toBe(true);
+  });
+
+  it("writes NaN into every column at refused points on the prepared numeric path, whatever the outputs", () => {
+    // two weight-fraction axes: where GPTMS + TEOS exceed 1 the point is refused (fractions_over_one) before
+    // the model runs; the columns are made without a NaN fill on this path, so each refused point must be written
+    const p = plan({
+      kind: "sweep",
+      variables: [
+        { kind: "weightFraction", materialId: "gptms", from: 0.5, to: 0.9, step: 0.2 },
+        { kind: "weightFraction", materialId: "teos", from: 0.1, to: 0.5, step: 0.2 },
+      ],
+    });
+    const fast = numericModel(base.materials);
+    for (const outputs of [["refractiveIndex", "solMassGrams"], ["refractiveIndex", "phaseVolumeFraction:teos", "absIndexMismatch"]] as OutputKey[][]) {
+      const run = runExplorationSync({ base, plan: p, outputs, model: fast });
+      const refused = new Set(run.refusals.map((r) => r.point));
+      // 0.7 + 0.5, 0.9 + 0.3 and 0.9 + 0.5 exceed 1
+      expect([...refused].sort()).toEqual([5, 7, 8]);
+      for (const r of run.refusals) expect(r).toMatchObject({ code: "fractions_over_one", field: "components" });
+      for (let point = 0; point < p.count; point++) {
+        for (const column of run.values) expect(Number.isNaN(column[point]!)).toBe(refused.has(point));
+      }
+    }
   });
 
   it("computes the figures a search needs even when they are not shown, and lists candidates", () => {

@@ -51,6 +51,8 @@ interface Prepared {
   /** Per output: its slot in evaluator.figures, or −1 when `reads[o]` computes it. */
   slots: Int32Array;
   reads: ((evaluator: NumericEvaluator) => number)[];
+  /** True when every output is a slot (no phase fraction, no |mismatch|). */
+  slotsOnly: boolean;
   /** Scratch: the figures of up to BLOCK points, output by output (BLOCK numbers per output). */
   block: Float64Array;
 }
@@ -72,6 +74,7 @@ function prepared(options: RunOptions, outputs: readonly string[]): Prepared | u
     knobs,
     values: new Float64Array(knobs.knobs.length),
     slots: Int32Array.from(readers, (r) => ("slot" in r ? r.slot : -1)),
+    slotsOnly: readers.every((r) => "slot" in r),
     reads: readers.map((r) => ("read" in r ? r.read : () => Number.NaN)),
     block: new Float64Array(BLOCK * outputs.length),
   };
@@ -81,9 +84,11 @@ function start(options: RunOptions): RunState {
   const outputs = [...options.outputs];
   if (options.search) for (const key of searchOutputs(options.search)) if (!outputs.includes(key)) outputs.push(key);
   const count = options.plan.count;
-  const values = outputs.map(() => new Float64Array(count).fill(Number.NaN));
+  const fast = prepared(options, outputs);
+  // the prepared path writes every point of every column (NaN where refused); the other path only computed ones
+  const values = outputs.map(() => (fast ? new Float64Array(count) : new Float64Array(count).fill(Number.NaN)));
   const run: ExplorationRun = { plan: options.plan, outputs, values, status: new Uint8Array(count).fill(REFUSED), refusals: [] };
-  return { run, readers: outputs.map(outputReader), options, prepared: prepared(options, outputs) };
+  return { run, readers: outputs.map(outputReader), options, prepared: fast };
 }
 
 /** Points whose figures are gathered before they are copied into the run's columns (one copy per column per block). */
@@ -107,9 +112,12 @@ function computePrepared(state: RunState, p: Prepared, from: number, to: number)
         continue;
       }
       run.status[point] = status;
-      for (let o = 0, at = j; o < outputs; o++, at += BLOCK) {
-        const slot = slots[o]!;
-        block[at] = slot >= 0 ? figures[slot]! : reads[o]!(evaluator);
+      if (p.slotsOnly) for (let o = 0, at = j; o < outputs; o++, at += BLOCK) block[at] = figures[slots[o]!]!;
+      else {
+        for (let o = 0, at = j; o < outputs; o++, at += BLOCK) {
+          const slot = slots[o]!;
+          block[at] = slot >= 0 ? figures[slot]! : reads[o]!(evaluator);
+        }
       }
     }
     // column by column: a run's columns are far apart in memory, a block is not
