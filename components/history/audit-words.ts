@@ -33,6 +33,7 @@ export const ACTION_LABELS: Record<AuditAction, string> = {
   "attachment.removed": "removed a document",
   "lot.received": "received a material lot",
   "lot.updated": "changed a material lot",
+  "lot.adjusted": "adjusted a lot's stock on hand",
   "batch.lot_chosen": "chose a lot for a batch line",
   "batch.result_entered": "entered a test result",
   "batch.result_acknowledged": "acknowledged an out-of-specification result",
