@@ -18,7 +18,7 @@ const fmt = (n: number) => String(Number(n.toPrecision(6)));
  * for a reason, in one transaction: the lot row `FOR UPDATE`, the version
  * check (a stale one is a 409 naming `version`, nothing written), then the
  * adjustment row, the lot's new quantity with `version + 1`, and the audit
- * event `lot.adjusted` (before and after, reason, note). The amount is what
+ * event `lot.adjusted` (on hand and version before and after, the unit and reason with the after, the note). The amount is what
  * was counted, not a difference: a batch released from the lot while the
  * adjustment waits for the lock takes from the amount as it was, and one
  * released after takes from the counted amount; neither change is lost.
@@ -80,10 +80,8 @@ export async function adjustLot(actor: Actor, lotId: string, input: AdjustLotInp
       entityId: lotId,
       summary: {
         before: { quantityOnHand: lot.quantityOnHand, version: lot.version },
-        after: { quantityOnHand: input.quantityOnHand, version },
-        unit: lot.unit,
-        reason: input.reason,
-        note,
+        after: { quantityOnHand: input.quantityOnHand, version, unit: lot.unit, reason: input.reason },
+        ...(note ? { note } : {}),
       },
     });
   });

@@ -110,9 +110,7 @@ describe("adjustLot", () => {
     const evs = (await events(lot.id)).map((e) => e.summary);
     expect(evs).toContainEqual({
       before: { quantityOnHand: 500, version: 1 },
-      after: { quantityOnHand: 482.5, version: 2 },
-      unit: "g",
-      reason: "damaged",
+      after: { quantityOnHand: 482.5, version: 2, unit: "g", reason: "damaged" },
       note: "bottle cracked in transit",
     });
     expect(evs).toHaveLength(2);
