@@ -29,6 +29,14 @@ export type BatchDisposition = (typeof BATCH_DISPOSITIONS)[number];
 export const LOT_UNITS = ["g", "kg", "mL", "L"] as const;
 export type LotUnit = (typeof LOT_UNITS)[number];
 
+/**
+ * Why a lot's quantity on hand was set by hand (a stock adjustment): a recount
+ * differed, a container was spilled or damaged, the lot was disposed of
+ * (expired or off-spec), a sample was sent out, or something else (a note says what).
+ */
+export const LOT_ADJUSTMENT_REASONS = ["recount", "damaged", "disposed", "sample", "other"] as const;
+export type LotAdjustmentReason = (typeof LOT_ADJUSTMENT_REASONS)[number];
+
 /** What an uploaded spreadsheet holds: one formulation, or rows of materials. */
 export const IMPORT_KINDS = ["formulation", "materials"] as const;
 export type ImportKind = (typeof IMPORT_KINDS)[number];
@@ -64,6 +72,7 @@ export const AUDIT_ACTIONS = [
   "attachment.added",
   "lot.received",
   "lot.updated",
+  "lot.adjusted",
   "batch.lot_chosen",
   "batch.result_entered",
   "batch.result_acknowledged",

@@ -50,3 +50,12 @@ export const DISPOSITION_LABELS: Record<"released" | "rejected" | "released_unde
   rejected: "Rejected",
   released_under_deviation: "Released under deviation",
 };
+
+/** Words for why a lot's stock on hand was adjusted (the reasons of `LOT_ADJUSTMENT_REASONS`). */
+export const ADJUSTMENT_REASON_LABELS: Record<"recount" | "damaged" | "disposed" | "sample" | "other", string> = {
+  recount: "Recount",
+  damaged: "Spilled or damaged",
+  disposed: "Disposed of (expired or off-spec)",
+  sample: "Sample sent out",
+  other: "Other",
+};

@@ -1,6 +1,7 @@
 /** Plain-word descriptions of audit events, shared by the home page, activity and history. */
 import type { AuditEvent } from "@/lib/client/audit";
 import type { AuditAction } from "@/lib/enums";
+import { ADJUSTMENT_REASON_LABELS } from "@/lib/labels";
 
 /** An audit event as a server page reads it (dates as Date) or as the API sends it (dates as text). */
 export type AuditEventView = Omit<AuditEvent, "createdAt"> & { createdAt: string | Date };
@@ -33,6 +34,7 @@ export const ACTION_LABELS: Record<AuditAction, string> = {
   "attachment.removed": "removed a document",
   "lot.received": "received a material lot",
   "lot.updated": "changed a material lot",
+  "lot.adjusted": "adjusted a lot's stock on hand",
   "batch.lot_chosen": "chose a lot for a batch line",
   "batch.result_entered": "entered a test result",
   "batch.result_acknowledged": "acknowledged an out-of-specification result",
@@ -81,6 +83,11 @@ export function summaryWords(summary: unknown): string {
   ] as const) {
     if (key in after && before[key] !== after[key]) parts.push(`${label} ${shown(before[key])} → ${shown(after[key])}`);
   }
+  if (typeof after.quantityOnHand === "number") {
+    const unit = typeof after.unit === "string" ? ` ${after.unit}` : "";
+    parts.push(`on hand ${shown(before.quantityOnHand)}${unit} → ${after.quantityOnHand}${unit}`);
+  }
+  if (typeof after.reason === "string") parts.push((ADJUSTMENT_REASON_LABELS as Record<string, string>)[after.reason] ?? after.reason);
   if (typeof s.note === "string" && s.note) parts.push(`“${s.note}”`);
   return parts.join(" · ");
 }

@@ -1,5 +1,5 @@
 import { boolean, date, double, index, int, json, mysqlEnum, mysqlTable, text, timestamp, uniqueIndex, varchar } from "drizzle-orm/mysql-core";
-import { BATCH_DISPOSITIONS, LOT_UNITS } from "../../lib/enums";
+import { BATCH_DISPOSITIONS, LOT_ADJUSTMENT_REASONS, LOT_UNITS } from "../../lib/enums";
 import { organization, user } from "./auth";
 import { createdAt, teamRef, updatedAt, userRef, uuidPk } from "./columns";
 import { materials } from "./materials";
@@ -41,6 +41,34 @@ export const materialLots = mysqlTable(
     uniqueIndex("lots_team_material_lot_uq").on(t.teamId, t.materialId, t.supplierLot),
     index("lots_team_material_expiry_idx").on(t.teamId, t.materialId, t.expiresOn),
   ],
+);
+
+/**
+ * A stock adjustment of a lot: its quantity on hand set by hand to what was
+ * counted (a recount, a spill, a disposal, a sample sent out, or another
+ * reason with a note), before and after in the lot's unit. Written in the
+ * transaction that changes the lot, with the lot row locked.
+ */
+export const lotAdjustments = mysqlTable(
+  "lot_adjustments",
+  {
+    id: uuidPk(),
+    teamId: teamRef().references(() => organization.id, { onDelete: "cascade" }),
+    lotId: varchar("lot_id", { length: 36 })
+      .notNull()
+      .references(() => materialLots.id, { onDelete: "cascade" }),
+    /** On hand before and after the adjustment, in the lot's unit. */
+    quantityBefore: double("quantity_before").notNull(),
+    quantityAfter: double("quantity_after").notNull(),
+    /** The lot's version this adjustment made (newest first by it: two adjustments may share a millisecond). */
+    lotVersion: int("lot_version").notNull(),
+    reason: mysqlEnum("reason", LOT_ADJUSTMENT_REASONS).notNull(),
+    /** Required for the reason "other", optional otherwise (at most 2000 characters). */
+    note: text("note"),
+    adjustedBy: userRef("adjusted_by").references(() => user.id, { onDelete: "set null" }),
+    adjustedAt: timestamp("adjusted_at", { fsp: 3 }).defaultNow().notNull(),
+  },
+  (t) => [index("lot_adjustments_lot_idx").on(t.teamId, t.lotId, t.lotVersion)],
 );
 
 /** Which lot each batch line uses (one row per line that names a lot); `grams` taken at release. */
@@ -120,6 +148,7 @@ export const batchDispositions = mysqlTable(
 );
 
 export type MaterialLotRow = typeof materialLots.$inferSelect;
+export type LotAdjustmentRow = typeof lotAdjustments.$inferSelect;
 export type BatchLotUseRow = typeof batchLotUses.$inferSelect;
 export type BatchResultRow = typeof batchResults.$inferSelect;
 export type BatchDispositionRow = typeof batchDispositions.$inferSelect;

@@ -153,6 +153,11 @@ const cases: Case[] = [
   { route: "/api/lots/[id]", name: "correct lot (invalid body)", method: "PATCH", path: () => `/api/lots/${ids.lot}`, body: () => ({ version: 1 }), allowed: 422 },
   { route: "/api/lots/[id]", name: "correct lot (missing)", method: "PATCH", path: () => "/api/lots/missing", body: () => ({ version: 1, notes: "x" }), allowed: 404 },
   { route: "/api/lots/[id]", name: "correct lot (stale version)", method: "PATCH", path: () => `/api/lots/${ids.lot}`, body: () => ({ version: 999_999, notes: "never saved" }), allowed: 409 },
+  { route: "/api/lots/[id]/adjustments", name: "list stock adjustments", method: "GET", path: () => `/api/lots/${ids.lot}/adjustments`, allowed: 200 },
+  { route: "/api/lots/[id]/adjustments", name: "list stock adjustments (missing lot)", method: "GET", path: () => "/api/lots/missing/adjustments", allowed: 404 },
+  { route: "/api/lots/[id]/adjustments", name: "adjust stock (invalid body)", method: "POST", path: () => `/api/lots/${ids.lot}/adjustments`, body: () => ({ version: 1, quantityOnHand: -1, reason: "recount" }), allowed: 422 },
+  { route: "/api/lots/[id]/adjustments", name: "adjust stock (missing lot)", method: "POST", path: () => "/api/lots/missing/adjustments", body: () => ({ version: 1, quantityOnHand: 1, reason: "recount" }), allowed: 404 },
+  { route: "/api/lots/[id]/adjustments", name: "adjust stock (stale version)", method: "POST", path: () => `/api/lots/${ids.lot}/adjustments`, body: () => ({ version: 999_999, quantityOnHand: 1, reason: "recount" }), allowed: 409 },
   { route: "/api/lots/[id]/export", name: "export lot trace (missing)", method: "GET", path: () => "/api/lots/missing/export?format=csv", allowed: 404 },
   { route: "/api/attachments", name: "list a lot's attachments (missing lot)", method: "GET", path: () => "/api/attachments?ownerType=lot&ownerId=missing", kind: "lot", allowed: 404 },
   { route: "/api/batches/[id]/lots", name: "lots of a batch (missing)", method: "GET", path: () => "/api/batches/missing/lots", allowed: 404 },
@@ -256,6 +261,8 @@ describe("another team's records", () => {
       ["POST", `/api/formulations/${ids.formulation}/revisions`, { input: coatInput(otherLib) }],
       ["GET", `/api/lots/${ids.lot}`],
       ["PATCH", `/api/lots/${ids.lot}`, { version: (beforeLot as { version: number }).version, supplier: "Taken over", measuredAssay: 0.5 }],
+      ["GET", `/api/lots/${ids.lot}/adjustments`],
+      ["POST", `/api/lots/${ids.lot}/adjustments`, { version: (beforeLot as { version: number }).version, quantityOnHand: 0, reason: "other", note: "taken over" }],
     ];
     for (const [method, path, json] of probes) {
       const res = await other.fetch(path, { method, json });

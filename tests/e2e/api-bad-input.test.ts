@@ -106,7 +106,8 @@ async function snapshot() {
   const attachments = await (await admin.fetch(`/api/attachments?ownerType=material&ownerId=${materialId}`)).json();
   const teamSettings = await (await admin.fetch("/api/team/settings")).json();
   const lot = await (await admin.fetch(`/api/lots/${correctedLotId}`)).json();
-  return { f, m, d, mem, audit: a.total, batches, batch, attachments, teamSettings, lot };
+  const adjustments = await (await admin.fetch(`/api/lots/${correctedLotId}/adjustments`)).json();
+  return { f, m, d, mem, audit: a.total, batches, batch, attachments, teamSettings, lot, adjustments };
 }
 
 beforeAll(async () => {
@@ -292,6 +293,35 @@ beforeAll(async () => {
     ["oversized body", JSON.stringify({ version: 1, notes: "☃".repeat(700_000) })],
   ] as [string, string][]) {
     cases.push({ label: `lot PATCH ${label}`, client: p, method: "PATCH", path: corrected, body });
+  }
+  // Adjusting a lot's stock (POST /api/lots/:id/adjustments) on the same lot: 1,000,000 g on hand, version 1, never changed.
+  const adjusted = () => `/api/lots/${correctedLotId}/adjustments`;
+  const goodAdjust = { version: 1, quantityOnHand: 999_000, reason: "recount" };
+  const adjust: [Json, string][] = [];
+  for (const v of NUMBER_BAD.concat([0, -1, 1.5, "1"])) adjust.push([{ ...goodAdjust, version: v }, "version"]);
+  // Negative, too large for any lot, over 10 × the 1,000,000 g received, and exactly what is on hand (no change).
+  for (const v of NUMBER_BAD.concat([-1, -0.001, 1e12, "12", 10_000_001, 1_000_000])) adjust.push([{ ...goodAdjust, quantityOnHand: v }, "quantityOnHand"]);
+  adjust.push([{ version: 1, reason: "recount" }, "quantityOnHand"]);
+  for (const v of ["lost", "", "Recount", 5, null, [], { x: 1 }]) adjust.push([{ ...goodAdjust, reason: v }, "reason"]);
+  adjust.push([{ version: 1, quantityOnHand: 5 }, "reason"]);
+  // A note is required for "other", optional otherwise, and held to the one text rule and its length.
+  for (const note of [undefined, null, "", "  \n "]) adjust.push([{ ...goodAdjust, reason: "other", ...(note === undefined ? {} : { note }) }, "note"]);
+  for (const v of [5, true, [], { x: 1 }, "Spill\u202Etxt", "Spill\u0007", "x".repeat(2001)]) adjust.push([{ ...goodAdjust, note: v }, "note"]);
+  for (const extra of [{ delta: -5 }, { unit: "kg" }, { quantityReceived: 5 }, { adjustedBy: "someone" }, { extra: 1 }] as Record<string, Json>[]) {
+    adjust.push([{ ...goodAdjust, ...extra }, "body"]);
+  }
+  adjust.push([{}, "version"]);
+  for (const [body, field] of adjust) {
+    cases.push({ label: `lot adjust ${JSON.stringify(body).slice(0, 70)}`, client: p, method: "POST", path: adjusted, body: JSON.stringify(body), field });
+  }
+  for (const [label, body] of [
+    ["empty body", ""],
+    ["malformed JSON", "{\"version\": "],
+    ["a JSON array", "[1]"],
+    ["a JSON string", "\"recount\""],
+    ["oversized body", JSON.stringify({ ...goodAdjust, note: "☃".repeat(700_000) })],
+  ] as [string, string][]) {
+    cases.push({ label: `lot adjust ${label}`, client: p, method: "POST", path: adjusted, body });
   }
   const disposeBad: [Json, string][] = [
     [{ disposition: "approved" }, "disposition"],

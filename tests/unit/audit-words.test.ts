@@ -18,3 +18,11 @@ describe("audit words for batch records", () => {
     expect(eventHref({ entityType: "batch", entityId: "b1" })).toBe("/batches/b1");
   });
 });
+
+describe("audit words for a lot's stock adjustment", () => {
+  it("returns the amount on hand before and after with the lot's unit, the reason in words and the note", () => {
+    expect(actionWords("lot.adjusted")).toBe("adjusted a lot's stock on hand");
+    const summary = { before: { quantityOnHand: 500, version: 1 }, after: { quantityOnHand: 482.5, version: 2, unit: "g", reason: "damaged" }, note: "bottle cracked" };
+    expect(summaryWords(summary)).toBe("version 2 · on hand 500 g → 482.5 g · Spilled or damaged · “bottle cracked”");
+  });
+});

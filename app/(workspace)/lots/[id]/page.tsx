@@ -1,8 +1,11 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
+import { listLotAdjustments } from "@/db/queries/lot-adjustments";
 import { getLot } from "@/db/queries/lots";
 import { pageContext } from "@/components/layout/page-context";
+import { LotAdjustmentForm } from "@/components/quality/lot-adjustment-form";
+import { LotAdjustmentHistory } from "@/components/quality/lot-adjustment-history";
 import { LotAttachments } from "@/components/quality/lot-attachments";
 import { LotCorrectionForm } from "@/components/quality/lot-correction-form";
 import { DownloadLinks } from "@/components/exports/download-links";
@@ -21,8 +24,8 @@ export default async function LotPage({ params }: { params: Promise<{ id: string
   const ctx = await pageContext();
   if (!can(ctx.role, "lot:read")) return <NotAllowed what="see material lots" />;
   const id = (await params).id;
-  const lot = await getLot(ctx.teamId, id);
-  if (!lot) notFound();
+  const [lot, adjustments] = await Promise.all([getLot(ctx.teamId, id), listLotAdjustments(ctx.teamId, id)]);
+  if (!lot || !adjustments) notFound();
   return (
     <>
       <PageHeader
@@ -39,7 +42,10 @@ export default async function LotPage({ params }: { params: Promise<{ id: string
             <dt className="text-muted">Quantity received</dt>
             <dd>{qty(lot.quantityReceived, lot.unit)}</dd>
             <dt className="text-muted">On hand</dt>
-            <dd data-testid="lot-on-hand">{qty(lot.quantityOnHand, lot.unit)}</dd>
+            <dd>
+              <span data-testid="lot-on-hand">{qty(lot.quantityOnHand, lot.unit)}</span>
+              {lot.quantityOnHand <= 0 ? <span className="ml-1 text-fail">(used up)</span> : null}
+            </dd>
             <dt className="text-muted">Received on</dt>
             <dd>
               {lot.receivedOn}
@@ -65,7 +71,11 @@ export default async function LotPage({ params }: { params: Promise<{ id: string
               lot={{ id: lot.id, version: lot.version, supplier: lot.supplier, supplierLot: lot.supplierLot, expiresOn: lot.expiresOn, measuredAssay: lot.measuredAssay, notes: lot.notes }}
             />
           ) : null}
+          {can(ctx.role, "lot:update") ? (
+            <LotAdjustmentForm key={`adjust-${lot.version}`} lot={{ id: lot.id, version: lot.version, unit: lot.unit, quantityOnHand: lot.quantityOnHand }} />
+          ) : null}
         </Panel>
+        <LotAdjustmentHistory adjustments={adjustments} />
         <LotAttachments lotId={lot.id} canChange={can(ctx.role, "lot:update")} />
         <Panel title="Batches that used this lot" id="uses">
           <DownloadLinks
