@@ -109,7 +109,7 @@ export async function correctLot(actor: Actor, lotId: string, input: CorrectLotI
     if (lot.version !== input.version) {
       throw new ConflictError(
         "conflict",
-        `Someone corrected this lot after you opened it (your copy is version ${input.version}, the saved one is ${lot.version}). Nothing was overwritten: reload to see their changes, then apply yours again.`,
+        `Someone changed this lot after you opened it (a correction or a stock adjustment; your copy is version ${input.version}, the saved one is ${lot.version}). Nothing was overwritten: reload to see their changes, then apply yours again.`,
         "version",
       );
     }

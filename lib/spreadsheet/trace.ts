@@ -3,7 +3,7 @@
  * batch's lots, as .xlsx and CSV. Every text cell is neutralised by the
  * writers (write.ts), so a supplier name like "=HYPERLINK(…)" stays text.
  */
-import { DISPOSITION_LABELS } from "@/lib/labels";
+import { ADJUSTMENT_REASON_LABELS, DISPOSITION_LABELS } from "@/lib/labels";
 import type { Cell } from "./types";
 import { buildWorkbook, toCsv } from "./write";
 
@@ -25,6 +25,15 @@ export interface LotTrace {
     revisionNumber: number;
     batchClosedAt: Date | string | null;
     disposition: keyof typeof DISPOSITION_LABELS | null;
+  }[];
+  /** Stock adjustments of the lot (newest first), when the export lists them. */
+  adjustments?: {
+    adjustedAt: Date | string;
+    adjustedByName: string | null;
+    quantityBefore: number;
+    quantityAfter: number;
+    reason: keyof typeof ADJUSTMENT_REASON_LABELS;
+    note: string | null;
   }[];
 }
 
@@ -76,6 +85,19 @@ function lotTables(lot: LotTrace): { name: string; header: Cell[][]; rows: Cell[
         iso(u.batchClosedAt),
       ]),
     },
+    {
+      name: "Stock adjustments",
+      header: [["Adjusted at (UTC)", "By", `Before (${lot.unit})`, `After (${lot.unit})`, `Change (${lot.unit})`, "Reason", "Note"]],
+      rows: (lot.adjustments ?? []).map((a) => [
+        iso(a.adjustedAt),
+        a.adjustedByName,
+        a.quantityBefore,
+        a.quantityAfter,
+        a.quantityAfter - a.quantityBefore,
+        ADJUSTMENT_REASON_LABELS[a.reason],
+        a.note,
+      ]),
+    },
   ];
 }
 
@@ -99,12 +121,12 @@ function batchTable(batch: BatchTrace): { name: string; header: Cell[][]; rows: 
   };
 }
 
-/** A lot and every batch that used it, as .xlsx. */
+/** A lot, every batch that used it and its stock adjustments, as .xlsx. */
 export function lotTraceWorkbook(lot: LotTrace): Buffer {
   return buildWorkbook(lotTables(lot));
 }
 
-/** A lot and every batch that used it, as CSV (one section per table). */
+/** A lot, every batch that used it and its stock adjustments, as CSV (one section per table). */
 export function lotTraceCsv(lot: LotTrace): string {
   return toCsv(lotTables(lot).map((t) => ({ name: t.name, rows: [...t.header, ...t.rows] })));
 }

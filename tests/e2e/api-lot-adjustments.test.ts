@@ -4,8 +4,10 @@
  * trail keeps `lot.adjusted` with before, after, unit and reason, the list is
  * newest first; a stale version (409) and no change (422) write nothing; a
  * reviewer reads the history but may not adjust (403); the lot correction
- * route still refuses quantities.
+ * route still refuses quantities; the lot's traceability export lists the
+ * adjustments.
  */
+import * as XLSX from "xlsx";
 import { beforeAll, describe, expect, it } from "vitest";
 import { demo, signIn, type Client } from "./http";
 
@@ -117,6 +119,24 @@ describe("POST /api/lots/:id/adjustments", () => {
     expect(res.status).toBe(403);
     expect(((await (await production.fetch(`/api/lots/${lot.id}`)).json()) as Lot).quantityOnHand).toBe(2.5);
     expect((await history(reviewer, lot.id)).rows).toEqual([]);
+  });
+
+  it("puts the adjustments in the lot's traceability export (.xlsx and CSV), newest first", async () => {
+    const lot = await receive(`ADJ-${stamp}-6`);
+    expect((await adjust(production, lot.id, { version: 1, quantityOnHand: 2.2, reason: "recount" })).status).toBe(201);
+    expect((await adjust(production, lot.id, { version: 2, quantityOnHand: 2.0, reason: "sample", note: "to the customer's lab" })).status).toBe(201);
+    const xlsx = await reviewer.fetch(`/api/lots/${lot.id}/export?format=xlsx`);
+    expect(xlsx.status).toBe(200);
+    const wb = XLSX.read(Buffer.from(await xlsx.arrayBuffer()), { type: "buffer" });
+    const rows = XLSX.utils.sheet_to_json<unknown[]>(wb.Sheets["Stock adjustments"]!, { header: 1, defval: null });
+    expect(rows[0]!.slice(2, 5)).toEqual(["Before (kg)", "After (kg)", "Change (kg)"]);
+    expect(rows.slice(1).map((r) => [r[2], r[3], r[5], r[6]])).toEqual([
+      [2.2, 2.0, "Sample sent out", "to the customer's lab"],
+      [2.5, 2.2, "Recount", null],
+    ]);
+    const csv = await (await production.fetch(`/api/lots/${lot.id}/export?format=csv`)).text();
+    expect(csv).toContain("[Stock adjustments]");
+    expect(csv).toContain('"Sample sent out"');
   });
 
   it("leaves the lot correction route refusing quantities (422 on the body)", async () => {

@@ -122,7 +122,7 @@ describe("material lots and batch disposition in the browser", () => {
     expect(other.status).toBe(200);
     await page.locator("#edit-lot-supplier").fill("Browser Silanes GmbH");
     await page.getByRole("button", { name: "Save correction" }).click();
-    await poll(() => page.getByText(/Someone corrected this lot after you opened it/).count()).toBe(1);
+    await poll(() => page.getByText(/Someone changed this lot after you opened it/).count()).toBe(1);
     await page.getByRole("button", { name: "Reload the saved lot" }).click();
     // the page shows the saved lot; Edit opens on its values, the unsaved supplier gone
     await poll(() => page.locator("#received").textContent()).toContain(`Recounted ${stamp}`);
