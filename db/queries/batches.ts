@@ -341,13 +341,22 @@ export async function closeBatch(actor: Actor, id: string) {
     }
     const now = new Date();
     await tx.update(batchRecords).set({ state: "closed", closedAt: now, closedBy: actor.userId, lines }).where(eq(batchRecords.id, id));
+    // A lot corrected after it was picked: the record closes with its new number, said in the audit trail.
+    const relabelled = lines.flatMap((line, i) => {
+      const stored = row.lines[i]?.lotNumber ?? null;
+      return line.lotNumber !== stored ? [`line ${i + 1} ${stored ?? "none"} → ${line.lotNumber ?? "none"}`] : [];
+    });
     await recordEvent(tx, {
       teamId: actor.teamId,
       actorId: actor.userId,
       action: "batch.closed",
       entityType: "batch",
       entityId: id,
-      summary: { before: { state: "open" }, after: { state: "closed" } },
+      summary: {
+        before: { state: "open" },
+        after: { state: "closed" },
+        ...(relabelled.length > 0 ? { note: `lot numbers as their lots were corrected: ${relabelled.join("; ")}` } : {}),
+      },
     });
   });
   return (await getBatch(actor.teamId, id))!;

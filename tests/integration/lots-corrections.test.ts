@@ -219,6 +219,32 @@ describe("a batch line's lot number once a lot is picked", () => {
     expect(typed.lines[line.index]).toMatchObject({ lotId: null, lotNumber: "by hand" });
   });
 
+  it("says in the batch.closed event which lot numbers the record took from lots corrected after they were picked", async () => {
+    const batch = await bq.startBatch(prod, releasedId);
+    const line = batch.lines.find((l) => l.role !== "water")!;
+    const lot = await lq.receiveLot(prod, lotInput(line.materialId, 10_000));
+    await lq.chooseLot(prod, batch.id, line.index, lot.id);
+    for (const l of batch.lines) {
+      await bq.recordLine(prod, batch.id, l.index, l.index === line.index ? { actualGrams: l.targetGrams! } : { actualGrams: l.targetGrams ?? 0, lotNumber: l.role === "water" ? null : `L-${l.index}` });
+    }
+    await lq.correctLot(prod, lot.id, { version: 1, supplierLot: `${lot.supplierLot}-R` });
+    await bq.closeBatch(prod, batch.id);
+    const [closed] = await t.db
+      .select()
+      .from(auditEvents)
+      .where(and(eq(auditEvents.entityId, batch.id), eq(auditEvents.action, "batch.closed")));
+    expect((closed!.summary as { note?: string }).note).toBe(
+      `lot numbers as their lots were corrected: line ${line.index + 1} ${lot.supplierLot} → ${lot.supplierLot}-R`,
+    );
+    // a batch closed with its lots as picked says nothing of the kind
+    const plain = await closedBatch((await lq.receiveLot(prod, lotInput(line.materialId, 10_000))).id);
+    const [event] = await t.db
+      .select()
+      .from(auditEvents)
+      .where(and(eq(auditEvents.entityId, plain.id), eq(auditEvents.action, "batch.closed")));
+    expect(event!.summary).toEqual({ before: { state: "open" }, after: { state: "closed" } });
+  });
+
   it("closes with the picked lot's number as corrected, and keeps it after the lot changes again", async () => {
     const materialId = (await bq.startBatch(prod, releasedId)).lines[0]!.materialId;
     const lot = await lq.receiveLot(prod, lotInput(materialId, 10_000));
