@@ -41,6 +41,8 @@ export interface KernelPlan {
   knobCode: number[];
   /** Component or step index per knob (−1 when none). */
   knobIndex: number[];
+  /** How many leading knobs set the weight fractions of components 0, 1, 2 … in order (read as a block). */
+  leadingWeights: number;
   weights: number[];
   /** STRIDE coefficients per component (C_MASS …). */
   coef: number[];
@@ -137,6 +139,7 @@ export function kernelPlan(table: MaterialTable, input: FormulationInput, knobs:
     n,
     knobCode: [],
     knobIndex: [],
+    leadingWeights: 0,
     weights: zeros(n),
     coef: zeros(n * STRIDE),
     subject: [],
@@ -261,6 +264,9 @@ export function kernelPlan(table: MaterialTable, input: FormulationInput, knobs:
     } else if (knob.kind === "withdrawalSpeed") plan.knobCode.push(KNOB_SPEED);
     else return undefined;
     if (plan.knobIndex.length < plan.knobCode.length) plan.knobIndex.push(-1);
+  }
+  while (plan.leadingWeights < plan.knobCode.length && plan.knobCode[plan.leadingWeights] === KNOB_WEIGHT && plan.knobIndex[plan.leadingWeights] === plan.leadingWeights) {
+    plan.leadingWeights += 1;
   }
   return plan;
 }

@@ -74,7 +74,9 @@ const F = {
  */
 export function kernelPoint(plan: KernelPlan, state: KernelState, values: ArrayLike<number>, out: number[]): number {
   const weights = plan.weights;
-  for (let k = 0; k < values.length; k++) {
+  const lead = plan.leadingWeights;
+  for (let k = 0; k < lead; k++) weights[k] = values[k]!;
+  for (let k = lead; k < values.length; k++) {
     const code = plan.knobCode[k];
     const value = values[k]!;
     if (code === KNOB_WEIGHT) weights[plan.knobIndex[k]!] = value;
