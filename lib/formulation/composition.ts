@@ -78,7 +78,8 @@ export function composeComponents(
   };
   const share = freeMass.equals(solidMass) ? undefined : freeMass.div(solidMass);
   components.forEach((component, index) => {
-    const entry = materialById(byId, component.materialId, `components.${index}.materialId`);
+    // the error field is only written out when the lookup misses
+    const entry = byId.get(component.materialId) ?? materialById(byId, component.materialId, `components.${index}.materialId`);
     const material = entry.material;
     const weightFraction = component.weightFraction;
     const phaseFraction = share ? weightFraction.times(share) : weightFraction;
