@@ -311,7 +311,7 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
   // g of each alcohol released, once: the result reports it and the VOC figure adds it up
   const alcohols: { mol: Dec; molarMass: number; grams: Dec }[] = [];
   const alcohol: AlcoholRelease[] = [];
-  for (const amount of pass.alcohols.values()) {
+  for (const amount of pass.alcohols) {
     const grams = amount.mol.times(dec(amount.molarMass));
     alcohols.push({ mol: amount.mol, molarMass: amount.molarMass, grams });
     alcohol.push({ name: amount.name, mol: toNumber(amount.mol), grams: toNumber(grams) });
