@@ -25,6 +25,8 @@ export interface CoatContext {
   solMass: Dec;
   /** mL of sol (ideal mixing). */
   solVolume: Dec;
+  /** 1000 / mL of sol, i.e. 1 / (sol volume in L). */
+  perLitre: Dec;
   /** Water in the sol, added and carried, mol. */
   totalWaterMol: Dec;
   waterEntry: IndexedMaterial;
@@ -45,7 +47,7 @@ export interface CoatContext {
  * @param context - the decimal figures of the computation
  * @example
  * ```ts
- * addCoatPredictions(result, { input, byId, lines, composite, phases, solidMass, solMass, solVolume, totalWaterMol, waterEntry, alcohols });
+ * addCoatPredictions(result, { input, byId, lines, composite, phases, solidMass, solMass, solVolume, perLitre, totalWaterMol, waterEntry, alcohols });
  * result.voc?.gramsPerLitre;
  * ```
  */
@@ -69,7 +71,7 @@ export function addCoatPredictions(result: FormulationResult, context: CoatConte
   if (optics.optics) result.optics = optics.optics;
   notices.push(...optics.notices);
 
-  const voc = vocFigures({ lines, byId, alcohols: context.alcohols, waterMol: context.totalWaterMol, waterEntry: context.waterEntry, solVolumeMl: solVolume });
+  const voc = vocFigures({ lines, byId, alcohols: context.alcohols, waterMol: context.totalWaterMol, waterEntry: context.waterEntry, solVolumeMl: solVolume, perLitre: context.perLitre });
   result.voc = voc.voc;
   notices.push(...voc.notices);
 

@@ -26,8 +26,8 @@ export interface CompositionPass {
   phases: PhaseInput[];
   subjects: ThermalSubject[];
   conversions: ConversionSubject[];
-  /** Alcohol released on full hydrolysis, by "name|molar mass". */
-  alcohols: Map<string, { name: string; molarMass: number; mol: Dec }>;
+  /** Alcohol released on full hydrolysis, one entry per name and molar mass, in order of first appearance. */
+  alcohols: { name: string; molarMass: number; mol: Dec }[];
   /** Σa, mol network-forming atoms. */
   networkAtomMol: Dec;
   /** Σg, mol hydrolysable groups before any ligand exchange. */
@@ -69,7 +69,7 @@ export function composeComponents(
     phases: [],
     subjects: [],
     conversions: [],
-    alcohols: new Map(),
+    alcohols: [],
     networkAtomMol: ZERO,
     hydrolysableGroupMol: ZERO,
     carriedWaterMol: ZERO,
@@ -78,7 +78,8 @@ export function composeComponents(
   };
   const share = freeMass.equals(solidMass) ? undefined : freeMass.div(solidMass);
   components.forEach((component, index) => {
-    const entry = materialById(byId, component.materialId, `components.${index}.materialId`);
+    // the error field is only written out when the lookup misses
+    const entry = byId.get(component.materialId) ?? materialById(byId, component.materialId, `components.${index}.materialId`);
     const material = entry.material;
     const weightFraction = component.weightFraction;
     const phaseFraction = share ? weightFraction.times(share) : weightFraction;
@@ -88,7 +89,18 @@ export function composeComponents(
     if (material.kind === "precursor") {
       const data = requirePrecursorData(entry);
       const a = precursorAmounts(entry, weightFraction, freeMass);
-      pass.lines.push({ materialId: material.id, role: "precursor", ...a });
+      pass.lines.push({
+        materialId: material.id,
+        role: "precursor",
+        moles: a.moles,
+        massGrams: a.massGrams,
+        volumeMl: a.volumeMl,
+        residueGrams: a.residueGrams,
+        networkAtomMol: a.networkAtomMol,
+        hydrolysableGroupMol: a.hydrolysableGroupMol,
+        carriedWaterMol: a.carriedWaterMol,
+        carriedSolventGrams: a.carriedSolventGrams,
+      });
       pass.phases.push({
         materialId: material.id,
         residueFormula: data.residueFormula,
@@ -104,9 +116,9 @@ export function composeComponents(
       if (present && material.fastHydrolysing) pass.fastHydrolysing.push({ id: material.id, name: material.name, path: entry.path });
       const leaving = data.leavingAlcohol;
       if (leaving && present && !a.alcoholMol.isZero()) {
-        const key = `${leaving.name}|${leaving.molarMass}`;
-        const previous = pass.alcohols.get(key);
-        pass.alcohols.set(key, { name: leaving.name, molarMass: leaving.molarMass, mol: previous ? add(previous.mol, a.alcoholMol) : a.alcoholMol });
+        const previous = pass.alcohols.find((alcohol) => alcohol.name === leaving.name && alcohol.molarMass === leaving.molarMass);
+        if (previous) previous.mol = add(previous.mol, a.alcoholMol);
+        else pass.alcohols.push({ name: leaving.name, molarMass: leaving.molarMass, mol: a.alcoholMol });
       }
       if (present && data.conversionTemperatureC !== undefined) {
         pass.conversions.push({

@@ -277,9 +277,10 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
 
   let addGrams = ZERO;
   let addMl = ZERO;
-  if (addMol.times(waterMolarMass).lessThan(dec(MIN_LINE_GRAMS))) addMol = ZERO;
+  const addMolGrams = addMol.times(waterMolarMass);
+  if (addMolGrams.lessThan(dec(MIN_LINE_GRAMS))) addMol = ZERO;
   if (positive(addMol)) {
-    addGrams = addMol.times(waterMolarMass);
+    addGrams = addMolGrams;
     addMl = volumeOf(waterEntry, addGrams);
     lines.push({ materialId: waterEntry.material.id, role: "water", moles: addMol, massGrams: addGrams, volumeMl: addMl });
     solMass = solMass.plus(addGrams);
@@ -308,12 +309,13 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
   const thermal = checkThermal(subjects, conversions, input.steps, marginC);
 
   // g of each alcohol released, once: the result reports it and the VOC figure adds it up
-  const alcohols = [...pass.alcohols.values()].map((amount) => ({ ...amount, grams: amount.mol.times(dec(amount.molarMass)) }));
-  const alcohol: AlcoholRelease[] = alcohols.map((amount) => ({
-    name: amount.name,
-    mol: toNumber(amount.mol),
-    grams: toNumber(amount.grams),
-  }));
+  const alcohols: { mol: Dec; molarMass: number; grams: Dec }[] = [];
+  const alcohol: AlcoholRelease[] = [];
+  for (const amount of pass.alcohols) {
+    const grams = amount.mol.times(dec(amount.molarMass));
+    alcohols.push({ mol: amount.mol, molarMass: amount.molarMass, grams });
+    alcohol.push({ name: amount.name, mol: toNumber(amount.mol), grams: toNumber(grams) });
+  }
 
   const ordered = orderLines(lines.map(toRecipeLine), input.additionOrder);
   const dispensed: Material[] = [];
@@ -373,6 +375,6 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
   if (solventSummary) result.solvent = solventSummary;
   if (modifierResults.length > 0) result.modifiers = modifierResults;
   // What the coat will be: film (with a coating), optics, VOC, epoxy–amine balance, cost.
-  addCoatPredictions(result, { input, byId, lines, composite: compositeDecimals, phases, solidMass, solMass, solVolume, totalWaterMol, waterEntry, alcohols });
+  addCoatPredictions(result, { input, byId, lines, composite: compositeDecimals, phases, solidMass, solMass, solVolume, perLitre, totalWaterMol, waterEntry, alcohols });
   return result;
 }

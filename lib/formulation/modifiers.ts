@@ -1,5 +1,6 @@
-import { Dec, dec, divideUnlessOne, timesFactor, ZERO } from "./decimal";
+import { Dec, dec, divideUnlessOne, ONE, timesFactor, ZERO } from "./decimal";
 import { FormulationError } from "./errors";
+import { compareSum } from "./sum-compare";
 import type { ModifierSpec, ProcessStep } from "./input-schema";
 import { materialById, requireMolarMass, solutionWaterMol, volumeOf, type IndexedMaterial } from "./material-index";
 import type { ModifierData, PrecursorData } from "./material-schema";
@@ -142,6 +143,7 @@ export function checkModifierLoad(plans: readonly ModifierPlan[], names: (precur
 
 /** Least modifier ratio (mol per mol metal) that counts as "modified" for the fast-hydrolysis caution. Livage, Henry & Sanchez (1988). */
 export const MIN_MODIFIER_RATIO = 0.5;
+const MIN_MODIFIER_RATIO_DEC = dec(MIN_MODIFIER_RATIO);
 
 /**
  * Cautions for fast-hydrolysing alkoxides (Ti, Zr, Al; material flag
@@ -159,11 +161,13 @@ export function fastHydrolysisNotices(
   plans: readonly ModifierPlan[],
   effectiveR: Dec,
 ): Notice[] {
-  if (!effectiveR.greaterThan(1)) return [];
+  if (fast.length === 0 || !effectiveR.greaterThan(ONE)) return [];
   const notices: Notice[] = [];
   for (const precursor of fast) {
-    const ratio = plans.filter((plan) => plan.spec.precursorId === precursor.id).reduce((sum, plan) => sum.plus(dec(plan.spec.molPerMetal)), ZERO);
-    if (ratio.greaterThanOrEqualTo(MIN_MODIFIER_RATIO)) continue;
+    // Σ mol per metal of its modifiers against the minimum, as the decimal sum decides (see compareSum)
+    const ratios: number[] = [];
+    for (const plan of plans) if (plan.spec.precursorId === precursor.id) ratios.push(plan.spec.molPerMetal);
+    if (ratios.length > 0 && compareSum(ratios, MIN_MODIFIER_RATIO_DEC) >= 0) continue;
     notices.push({
       level: "caution",
       code: "fast_hydrolysis_unmodified",

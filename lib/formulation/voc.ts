@@ -2,7 +2,7 @@ import type { DecLine } from "./composition";
 import { ML_PER_L, VOC_BOILING_POINT_MAX_C, WATER_MOLAR_MASS_G_PER_MOL } from "./constants";
 import { type Dec, dec, positive, timesFactor, toNumber, ZERO } from "./decimal";
 import { FormulationError } from "./errors";
-import { requireDensity, type IndexedMaterial } from "./material-index";
+import { volumeOf, type IndexedMaterial } from "./material-index";
 import type { Material } from "./material-schema";
 import type { Notice, VocResult } from "./result-types";
 
@@ -52,6 +52,8 @@ export interface VocInputs {
   waterEntry: IndexedMaterial;
   /** Sol volume, mL (ideal mixing). */
   solVolumeMl: Dec;
+  /** 1000 / sol volume in mL (1 / L), when the caller has it: g per litre is then one product. */
+  perLitre?: Dec;
 }
 
 /**
@@ -108,7 +110,7 @@ export function vocFigures(inputs: VocInputs): { voc: VocResult; notices: Notice
   const waterMaterial = inputs.waterEntry.material;
   const waterMl = inputs.waterMol.isZero()
     ? ZERO
-    : inputs.waterMol.times(dec(waterMaterial.molarMass ?? WATER_MOLAR_MASS_G_PER_MOL)).div(requireDensity(inputs.waterEntry));
+    : volumeOf(inputs.waterEntry, inputs.waterMol.times(dec(waterMaterial.molarMass ?? WATER_MOLAR_MASS_G_PER_MOL)));
   const lessWaterMl = inputs.solVolumeMl.minus(waterMl);
   if (!positive(lessWaterMl)) {
     throw new FormulationError(
@@ -121,7 +123,7 @@ export function vocFigures(inputs: VocInputs): { voc: VocResult; notices: Notice
   const gramsTimesMlPerL = grams.times(ML_PER_L);
   const voc: VocResult = {
     massGrams: toNumber(grams),
-    gramsPerLitre: toNumber(gramsTimesMlPerL.div(inputs.solVolumeMl)),
+    gramsPerLitre: toNumber(inputs.perLitre ? grams.times(inputs.perLitre) : gramsTimesMlPerL.div(inputs.solVolumeMl)),
     gramsPerLitreLessWater: toNumber(gramsTimesMlPerL.div(lessWaterMl)),
     waterMl: toNumber(waterMl),
   };

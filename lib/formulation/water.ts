@@ -1,4 +1,4 @@
-import { Dec, HALF, ZERO } from "./decimal";
+import { Dec, HALF, toNumber, ZERO } from "./decimal";
 import type { Notice } from "./result-types";
 
 /**
@@ -43,7 +43,11 @@ export const WATER_RATIO_TOLERANCE = 1e-9;
 
 /**
  * True when `value` is below `reference` by more than the relative
- * tolerance WATER_RATIO_TOLERANCE.
+ * tolerance WATER_RATIO_TOLERANCE: value < reference · (1 − tolerance) in
+ * decimals. The JS numbers of both (correctly rounded, within 2⁻⁵³ of the
+ * decimals) decide when they lie farther than 1e-14 of their size from the
+ * bound, far beyond the float error of ~4e-16; only a value that close is
+ * compared in decimals.
  *
  * @example
  * ```ts
@@ -52,11 +56,19 @@ export const WATER_RATIO_TOLERANCE = 1e-9;
  * ```
  */
 export function clearlyBelow(value: Dec, reference: Dec): boolean {
+  const v = toNumber(value);
+  const r = toNumber(reference);
+  const difference = v - r * BELOW_FACTOR_NUMBER;
+  const margin = 1e-14 * (Math.abs(v) + Math.abs(r));
+  // numbers outside a double's normal range (non-finite, or so small they lose digits) leave the decision to the decimals
+  if (Number.isFinite(difference) && Number.isFinite(margin) && margin > 1e-300 && Math.abs(difference) > margin) return difference < 0;
   return value.lessThan(reference.times(BELOW_FACTOR));
 }
 
 /** 1 − WATER_RATIO_TOLERANCE, made once. */
 const BELOW_FACTOR = new Dec(1).minus(WATER_RATIO_TOLERANCE);
+/** The same as a JS number. */
+const BELOW_FACTOR_NUMBER = 1 - WATER_RATIO_TOLERANCE;
 
 /** Formats a number for a notice (display only). */
 function show(value: Dec): string {
