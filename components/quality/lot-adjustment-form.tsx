@@ -7,7 +7,7 @@ import { useForm } from "react-hook-form";
 import { Button } from "@/components/ui/button";
 import { Field, inputClass } from "@/components/ui/field";
 import { OutcomeMessage, type Outcome } from "@/components/ui/outcome";
-import { ApiRequestError, errorMessage } from "@/lib/client/fetcher";
+import { lotSaveFailure } from "./lot-save-failure";
 import { adjustLotStock } from "@/lib/client/lot-adjustments";
 import { LOT_ADJUSTMENT_REASONS } from "@/lib/enums";
 import { ADJUSTMENT_REASON_LABELS } from "@/lib/labels";
@@ -43,12 +43,10 @@ export function LotAdjustmentForm({ lot }: LotAdjustmentFormProps) {
       setOpen(false);
       router.refresh();
     } catch (err) {
-      if (err instanceof ApiRequestError) {
-        for (const f of FIELDS) if (err.fields[f]) setError(f, { message: err.fields[f] });
-        // someone else changed the lot first: offer the saved lot (the page keys this form by the lot's version)
-        setStale(err.status === 409 && !!err.fields.version);
-      }
-      setOutcome({ tone: "error", text: `Not saved: ${errorMessage(err)}` });
+      // after someone else's change (409 on the version) the form offers the saved lot (the page keys it by the lot's version)
+      const failure = lotSaveFailure(err, FIELDS, (f, message) => setError(f, { message }));
+      setStale(failure.stale);
+      setOutcome({ tone: "error", text: failure.text });
     }
   });
 

@@ -7,7 +7,8 @@ import { useForm } from "react-hook-form";
 import { Button } from "@/components/ui/button";
 import { Field, inputClass } from "@/components/ui/field";
 import { OutcomeMessage, type Outcome } from "@/components/ui/outcome";
-import { ApiRequestError, apiSend, errorMessage } from "@/lib/client/fetcher";
+import { lotSaveFailure } from "./lot-save-failure";
+import { apiSend } from "@/lib/client/fetcher";
 import { LOT_CORRECTION_FIELDS, lotCorrectionFormSchema, type LotCorrectionFormInput, type LotCorrectionFormValues } from "@/lib/validations/lots";
 
 interface LotCorrectionFormProps {
@@ -59,12 +60,10 @@ export function LotCorrectionForm({ lot }: LotCorrectionFormProps) {
       setOpen(false);
       router.refresh();
     } catch (err) {
-      if (err instanceof ApiRequestError) {
-        for (const f of LOT_CORRECTION_FIELDS) if (err.fields[f]) setError(f, { message: err.fields[f] });
-        // someone else saved a correction first: offer the saved lot (the page keys this form by the lot's version)
-        setStale(err.status === 409 && !!err.fields.version);
-      }
-      setOutcome({ tone: "error", text: `Not saved: ${errorMessage(err)}` });
+      // after someone else's change (409 on the version) the form offers the saved lot (the page keys it by the lot's version)
+      const failure = lotSaveFailure(err, LOT_CORRECTION_FIELDS, (f, message) => setError(f, { message }));
+      setStale(failure.stale);
+      setOutcome({ tone: "error", text: failure.text });
     }
   });
 

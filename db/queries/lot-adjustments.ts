@@ -9,9 +9,7 @@ import { lotAdjustments, materialLots, user } from "@/db/schema";
 import { ConflictError, NotFoundError, RuleError } from "@/lib/errors";
 import { ADJUSTED_QUANTITY_FACTOR, type AdjustLotInput } from "@/lib/validations/lot-adjustments";
 import { recordEvent } from "./audit";
-import { getLot, type Actor } from "./lots";
-
-const fmt = (n: number) => String(Number(n.toPrecision(6)));
+import { fmt, getLot, type Actor } from "./lots";
 
 /**
  * Sets a lot's quantity on hand to `input.quantityOnHand` (in the lot's unit)

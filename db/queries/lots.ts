@@ -298,7 +298,8 @@ export async function chooseLot(actor: Actor, batchId: string, index: number, lo
   return batchLots(actor.teamId, batchId);
 }
 
-const fmt = (n: number) => String(Number(n.toPrecision(6)));
+/** An amount for a message: 6 significant digits, no trailing zeros (e.g. 2.35). */
+export const fmt = (n: number) => String(Number(n.toPrecision(6)));
 
 /**
  * The lots in a batch, line by line (traceability: batch → lots), each with

@@ -48,15 +48,7 @@ export function requirePrecursorData(entry: IndexedMaterial): PrecursorData {
 }
 
 /** Amounts of a precursor line per g of residue (decimal; the units of PrecursorAmounts per g residue). */
-interface PrecursorFactors {
-  moles: Dec;
-  massGrams: Dec;
-  volumeMl: Dec;
-  networkAtomMol: Dec;
-  hydrolysableGroupMol: Dec;
-  carriedWaterMol: Dec;
-  carriedSolventGrams: Dec;
-}
+type PrecursorFactors = Omit<PrecursorAmounts, "residueGrams" | "alcoholMol">;
 
 const factorCache = new ValueKeyedCache<PrecursorFactors>();
 
