@@ -1,4 +1,4 @@
-import { Dec } from "./decimal";
+import { Dec, quotient } from "./decimal";
 import type { Basis } from "./input-schema";
 import type { Notice } from "./result-types";
 
@@ -43,7 +43,7 @@ export function basisNotices(p: {
           field: "basis.solMassGrams",
           message:
             `The sol weighs ${show(p.solMassGrams)} g, not the ${show(target)} g of the basis, so its solids content is ` +
-            `${show(p.solidMassGrams.div(p.solMassGrams))} instead of ${show(basis.solidsFraction)}. Use a solvent fill to match the basis.`,
+            `${show(quotient(p.solidMassGrams, p.solMassGrams))} instead of ${show(basis.solidsFraction)}. Use a solvent fill to match the basis.`,
         },
       ];
     }

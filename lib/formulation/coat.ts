@@ -2,7 +2,7 @@ import type { CompositeFigures, PhaseInput } from "./composite";
 import type { DecLine } from "./composition";
 import { batchCost } from "./cost";
 import { cureBalance } from "./cure";
-import { Dec } from "./decimal";
+import { Dec, quotient } from "./decimal";
 import { filmPrediction } from "./film";
 import type { FormulationInput } from "./input-schema";
 import type { IndexedMaterial } from "./material-index";
@@ -59,8 +59,8 @@ export function addCoatPredictions(result: FormulationResult, context: CoatConte
   let coverage: Dec | undefined;
   if (input.coating) {
     // φ_s = (S / ρ_th) / V_sol; ρ of the sol = sol mass / sol volume
-    const solidVolumeFraction = context.composite.solidVolumeMl.div(solVolume);
-    const film = filmPrediction(input.coating, { solidVolumeFraction, porosity, densityGPerCm3: context.solMass.div(solVolume) });
+    const solidVolumeFraction = quotient(context.composite.solidVolumeMl, solVolume);
+    const film = filmPrediction(input.coating, { solidVolumeFraction, porosity, densityGPerCm3: quotient(context.solMass, solVolume) });
     result.coating = film.coating;
     coverage = new Dec(film.coating.coverageM2PerL);
     notices.push(...film.notices);

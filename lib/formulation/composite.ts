@@ -1,4 +1,4 @@
-import { cubeRoot, Dec, ONE, per, toNumber, ZERO } from "./decimal";
+import { add, cubeRoot, Dec, ONE, per, quotient, toNumber, ZERO } from "./decimal";
 import { FormulationError } from "./errors";
 import type { CompositePhase, CompositeResult, Shrinkage } from "./result-types";
 
@@ -44,7 +44,7 @@ export interface CompositeFigures {
  * ```
  */
 export function shrinkage(solidVolumeMl: Dec, solVolumeMl: Dec): Shrinkage {
-  const ratio = solidVolumeMl.div(solVolumeMl);
+  const ratio = quotient(solidVolumeMl, solVolumeMl);
   return { volumetric: toNumber(ONE.minus(ratio)), linear: toNumber(ONE.minus(cubeRoot(ratio))) };
 }
 
@@ -74,8 +74,9 @@ export function compositeFigures(
   bulk?: BulkDensity,
 ): CompositeFigures {
   const specificVolumes = phases.map((phase) => per(phase.weightFraction, phase.densityValue));
+  // add: a Wide fraction's w/ρ terms then add up exactly (see decimal.ts)
   let totalSpecificVolume = ZERO;
-  for (const value of specificVolumes) totalSpecificVolume = totalSpecificVolume.plus(value);
+  for (const value of specificVolumes) totalSpecificVolume = add(totalSpecificVolume, value);
   const theoreticalDensity = ONE.div(totalSpecificVolume);
   const outPhases: CompositePhase[] = phases.map((phase, index) => {
     const out: CompositePhase = {

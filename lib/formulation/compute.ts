@@ -4,7 +4,7 @@ import { solidMassFromBasis } from "./basis";
 import { compositeFigures, type BulkDensity } from "./composite";
 import { composeComponents, type DecLine } from "./composition";
 import { DEFAULT_THERMAL_MARGIN_C, ENGINE_VERSION, MIN_LINE_GRAMS, ML_PER_L, WATER_MOLAR_MASS_G_PER_MOL } from "./constants";
-import { add, type Dec, dec, HALF, ONE, toNumber, ZERO, positive } from "./decimal";
+import { add, type Dec, dec, HALF, ONE, positive, quotient, toNumber, wide, Wide, ZERO } from "./decimal";
 import { dosePerNetworkAtom } from "./dosing";
 import { decimalSum } from "./sum-compare";
 import { FormulationError } from "./errors";
@@ -107,7 +107,8 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
   const fractionSum = exact ? ONE : decimalSum(input.components.map((c) => c.weightFraction));
   const components = input.components.map((c) => ({
     materialId: c.materialId,
-    weightFraction: exact ? dec(c.weightFraction) : dec(c.weightFraction).div(fractionSum),
+    // Wide: the line amounts and totals that follow from a fraction are exact products and sums
+    weightFraction: exact ? wide(c.weightFraction) : new Wide(dec(c.weightFraction).div(fractionSum)),
     ...(exact ? { value: c.weightFraction } : {}),
   }));
   if (!exact) notices.push(...fractionsScaledNotice(fractionSum));
@@ -169,7 +170,7 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
     });
   }
   for (const [materialId, ligand] of ligandPhases) {
-    const weightFraction = ligand.grams.div(solidMass);
+    const weightFraction = quotient(ligand.grams, solidMass);
     phases.push({
       materialId,
       residueFormula: ligand.formula,
@@ -220,7 +221,7 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
         carriedGrams: toNumber(carried),
         addedMol: toNumber(ratio.addedMol),
         carriedMol: toNumber(ratio.carriedMol),
-        ...finiteField("molPerNetworkAtom", ratio.addedMol.plus(ratio.carriedMol).div(networkAtomMol)),
+        ...finiteField("molPerNetworkAtom", quotient(ratio.addedMol.plus(ratio.carriedMol), networkAtomMol)),
       };
     }
   }
@@ -269,7 +270,7 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
       carriedGrams: toNumber(carried),
       ...(addedMol ? { addedMol: toNumber(addedMol) } : {}),
       ...(carriedMol ? { carriedMol: toNumber(carriedMol) } : {}),
-      ...(addedMol && carriedMol ? finiteField("molPerNetworkAtom", addedMol.plus(carriedMol).div(networkAtomMol)) : {}),
+      ...(addedMol && carriedMol ? finiteField("molPerNetworkAtom", quotient(addedMol.plus(carriedMol), networkAtomMol)) : {}),
     };
   } else {
     addMol = countCarried ? waterToAdd(targetMol, carriedWaterMol) : targetMol;
@@ -323,7 +324,7 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
     const material = byId.get(line.materialId)?.material;
     if (material && line.massGrams > 0 && !dispensed.includes(material)) dispensed.push(material);
   }
-  const effectiveR = totalWaterMol.div(networkAtomMol);
+  const effectiveR = quotient(totalWaterMol, networkAtomMol);
 
   notices.push(
     ...assayBalanceNotices(dispensed.filter((m) => m.assay !== undefined && m.assay < 1).map((material) => ({ material, path: byId.get(material.id)!.path }))),
@@ -357,7 +358,7 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
       hydrolysisMol: toNumber(groupMol),
       condensationMol: toNumber(groupMol.times(HALF)),
       effectiveR: toNumber(effectiveR),
-      ...(groupMol.isZero() ? {} : { effectiveH: toNumber(totalWaterMol.div(groupMol)) }),
+      ...(groupMol.isZero() ? {} : { effectiveH: toNumber(quotient(totalWaterMol, groupMol)) }),
       ...(groupsReplacedMol.isZero() ? {} : { groupsReplacedMol: toNumber(groupsReplacedMol) }),
     },
     alcohol,

@@ -1,6 +1,6 @@
 import type { DecLine } from "./composition";
 import { ML_PER_L } from "./constants";
-import { type Dec, dec, positive, toNumber, ZERO } from "./decimal";
+import { type Dec, dec, positive, quotient, toNumber, ZERO } from "./decimal";
 import type { IndexedMaterial } from "./material-index";
 import type { CostResult, Notice } from "./result-types";
 
@@ -64,11 +64,11 @@ export function batchCost(
       ],
     };
   }
-  total = total.div(G_PER_KG);
-  const perLitre = total.times(ML_PER_L).div(solVolumeMl);
+  total = quotient(total, G_PER_KG);
+  const perLitre = quotient(total.times(ML_PER_L), solVolumeMl);
   const cost: CostResult = {
     total: toNumber(total),
-    perKgDry: toNumber(total.times(G_PER_KG).div(solidMassGrams)),
+    perKgDry: toNumber(quotient(total.times(G_PER_KG), solidMassGrams)),
     perLitreSol: toNumber(perLitre),
   };
   if (coverageM2PerL) cost.perM2 = toNumber(perLitre.div(coverageM2PerL));

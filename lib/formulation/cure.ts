@@ -1,6 +1,6 @@
 import type { DecLine } from "./composition";
 import { CURE_RATIO_RANGE } from "./constants";
-import { type Dec, reciprocal, timesFactor, toNumber, ZERO } from "./decimal";
+import { type Dec, quotient, reciprocal, timesFactor, toNumber, ZERO } from "./decimal";
 import type { IndexedMaterial } from "./material-index";
 import type { CureResult, Notice } from "./result-types";
 
@@ -49,7 +49,7 @@ export function cureBalance(lines: readonly DecLine[], byId: Map<string, Indexed
   const cure: CureResult = { epoxyEq: toNumber(epoxy), amineHydrogenEq: toNumber(amine) };
   const notices: Notice[] = [];
   if (epoxy.greaterThan(0)) {
-    const ratio = amine.div(epoxy);
+    const ratio = quotient(amine, epoxy);
     cure.ratio = toNumber(ratio);
     if (amine.greaterThan(0) && (ratio.lessThan(CURE_RATIO_RANGE.min) || ratio.greaterThan(CURE_RATIO_RANGE.max))) {
       notices.push({

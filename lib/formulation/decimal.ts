@@ -19,6 +19,31 @@ export const Dec: Decimal.Constructor = Decimal.clone({ precision: 20, rounding:
 /** A decimal value produced by `Dec`. */
 export type Dec = Decimal;
 
+/**
+ * Significant digits kept by `Wide`: far more than a product or a sum of the
+ * engine's amounts needs (a 20-digit factor times a weight fraction and a
+ * mass has at most ~40 digits; adding terms of unlike size a few more), so
+ * those results are exact and decimal.js skips its rounding step, about half
+ * the cost of each operation.
+ */
+export const WIDE_PRECISION = 60;
+
+/**
+ * The decimal constructor for amounts that are only multiplied and added
+ * (residue grams, line amounts, their running totals, the phases' weighted
+ * terms): a `Wide` value on the left of `times` or `plus` gives an exact
+ * result, no rounding to 20 digits. Quotients and roots keep `Dec`'s 20
+ * digits: the engine divides with a `Dec` on the left (`ONE.div(x)`,
+ * `reciprocal`), so no quotient is ever worked to 60 digits. A private clone
+ * like `Dec`.
+ *
+ * @example
+ * ```ts
+ * new Wide("0.12345678901234567890").times("0.1").toString(); // "0.01234567890123456789" (exact, 21 digits)
+ * ```
+ */
+export const Wide: Decimal.Constructor = Decimal.clone({ precision: WIDE_PRECISION, rounding: Decimal.ROUND_HALF_EVEN });
+
 /** Largest number of cached conversions kept by `dec` before the cache is emptied. */
 const DEC_CACHE_LIMIT = 10_000;
 const decCache = new Map<number, Dec>();
@@ -40,6 +65,44 @@ export function dec(value: number): Dec {
     if (decCache.size >= DEC_CACHE_LIMIT) decCache.clear();
     cached = new Dec(value);
     decCache.set(value, cached);
+  }
+  return cached;
+}
+
+/**
+ * a ÷ b to `Dec`'s 20 digits whatever a's constructor: decimal.js works a
+ * quotient to the precision of its left operand, and a `Wide` amount on the
+ * left would cost a 60-digit quotient. Use it wherever the dividend may be
+ * an amount (wide.test.ts watches every division the engine makes).
+ *
+ * @example
+ * ```ts
+ * quotient(wide(1), 3).toString(); // "0.33333333333333333333"
+ * ```
+ */
+export function quotient(a: Dec, b: Dec | number): Dec {
+  return (a.constructor === Wide ? new Dec(a) : a).div(b);
+}
+
+const wideCache = new Map<number, Dec>();
+
+/**
+ * The `Wide` decimal of a JS number, memoised like `dec` (a weight fraction
+ * typed on the form recurs on every call). Products and sums with it on the
+ * left are exact (see `Wide`).
+ *
+ * @example
+ * ```ts
+ * wide(0.25).times(dec(1).div(3)).toString(); // "0.0833333333333333333325" (exact: 0.25 × the 20-digit third)
+ * ```
+ */
+export function wide(value: number): Dec {
+  if (value === 0) return ZERO;
+  let cached = wideCache.get(value);
+  if (cached === undefined) {
+    if (wideCache.size >= DEC_CACHE_LIMIT) wideCache.clear();
+    cached = new Wide(value);
+    wideCache.set(value, cached);
   }
   return cached;
 }

@@ -1,6 +1,6 @@
 import type { PhaseInput } from "./composite";
 import { FRINGE_INDEX_MISMATCH } from "./constants";
-import { type Dec, dec, ONE, squareRoot, toNumber, ZERO } from "./decimal";
+import { add, type Dec, dec, ONE, squareRoot, toNumber, ZERO } from "./decimal";
 import type { IndexedMaterial } from "./material-index";
 import type { Material } from "./material-schema";
 import type { Notice, OpticsResult } from "./result-types";
@@ -157,7 +157,8 @@ export function coatOptics(
       missing.push({ name: phaseName(entry.material, phase), path: indexPath(entry) });
       continue;
     }
-    weightedTerm = weightedTerm.plus(phase.weightFraction.times(termPerDensity(index, phase.density, phase.densityValue)));
+    // add: a Wide fraction's terms add up exactly (see decimal.ts)
+    weightedTerm = add(weightedTerm, phase.weightFraction.times(termPerDensity(index, phase.density, phase.densityValue)));
     known += 1;
   }
   if (missing.length > 0) {

@@ -1,4 +1,4 @@
-import { Dec, per, ZERO, positive } from "./decimal";
+import { Dec, per, positive, quotient, ZERO } from "./decimal";
 import { doseMoles, type DosedAmounts } from "./dosing";
 import type { DecLine } from "./composition";
 import { requireMolarMass, type IndexedMaterial } from "./material-index";
@@ -51,7 +51,7 @@ export interface RatioSolvent {
  */
 export function solventByRatio(entry: IndexedMaterial, ratio: Dec, networkAtomMol: Dec, carriedGrams: Dec): RatioSolvent {
   const target = ratio.times(networkAtomMol);
-  const carriedMol = carriedGrams.isZero() ? ZERO : carriedGrams.div(requireMolarMass(entry));
+  const carriedMol = carriedGrams.isZero() ? ZERO : quotient(carriedGrams, requireMolarMass(entry));
   const addMol = target.minus(carriedMol);
   if (!positive(addMol)) {
     const notices: Notice[] = carriedMol.isZero()
@@ -63,7 +63,7 @@ export function solventByRatio(entry: IndexedMaterial, ratio: Dec, networkAtomMo
             field: "solvent.value",
             message:
               `The precursor solutions already bring ${show(carriedMol)} mol ${entry.material.name}, ` +
-              `${show(carriedMol.div(networkAtomMol))} mol per mol network atom, at least the ${show(ratio)} asked for: none is added.`,
+              `${show(quotient(carriedMol, networkAtomMol))} mol per mol network atom, at least the ${show(ratio)} asked for: none is added.`,
           },
         ];
     return { addedMol: ZERO, carriedMol, notices };

@@ -8,6 +8,12 @@ const POWERS_OF_TEN: readonly number[] = Array.from({ length: 23 }, (_, k) => 10
 const MAX_WORDS = 4;
 /** Bound on the relative error of the double-double result, far above its true ~2⁻¹⁰² (see `toNumber`). */
 const RELATIVE_ERROR = 2 ** -96;
+/**
+ * Bound on the relative error when only the first 4 of more words are read:
+ * those 4 words hold at least 22 digits, so the words left out add less than
+ * 10⁻²¹ of the value; 2 · 10⁻²¹ covers that and the double-double's own error.
+ */
+const TRUNCATED_ERROR = 2e-21;
 /** Results kept well inside the normal range of doubles; beyond, the string path decides. */
 const SMALLEST = 1e-290;
 const LARGEST = 1e290;
@@ -44,14 +50,16 @@ function viaString(words: readonly number[], exponent: number, negative: boolean
 /**
  * Converts a decimal to the nearest JS number, correctly rounded from its
  * exact decimal value: the same number as `Number(value.toString())`.
- * Fast path, for up to 28 digits and results inside the normal range: the
- * digits D as an exact double-double (hi + lo, by exact products and sums),
- * times or divided by exact powers of ten in double-double arithmetic, whose
- * result s + t lies within 2⁻⁹⁶ · |s| of the exact value. s is the nearest
- * double to s + t; when s + t ± that error both still round to s, so does
- * every value between them, the exact one included (rounding is monotonic).
- * Otherwise (a value within 2⁻⁹⁶ of a point halfway between two doubles,
- * more digits, a far exponent) the digits are written out and parsed.
+ * Fast path, for results inside the normal range: the digits D of the first
+ * 4 words (up to 28 digits) as an exact double-double (hi + lo, by exact
+ * products and sums), times or divided by exact powers of ten in
+ * double-double arithmetic, whose result s + t lies within 2⁻⁹⁶ · |s| of the
+ * value those words give; words beyond the fourth (a `Wide` amount) add
+ * less than 10⁻²¹ of it, so the bound becomes 2 · 10⁻²¹ · |s|. s is the
+ * nearest double to s + t; when s + t ± the bound both still round to s, so
+ * does every value between them, the exact one included (rounding is
+ * monotonic). Otherwise (a value within the bound of a point halfway between
+ * two doubles, a far exponent) the digits are written out and parsed.
  * Zero gives +0, as `Number("0")` does.
  *
  * @example
@@ -67,8 +75,8 @@ export function toNumber(value: Decimal): number {
   const first = words[0] as number;
   if (first === 0) return 0;
   const negative = value.s < 0;
-  const count = words.length;
-  if (count > MAX_WORDS) return viaString(words, value.e, negative);
+  const truncated = words.length > MAX_WORDS;
+  const count = truncated ? MAX_WORDS : words.length;
   // D = the digits as an integer, hi + lo exactly; D · 10^scale is the value
   let hi = first;
   let lo = 0;
@@ -101,7 +109,7 @@ export function toNumber(value: Decimal): number {
   }
   const magnitude = Math.abs(hi);
   if (!(magnitude > SMALLEST && magnitude < LARGEST)) return viaString(words, value.e, negative);
-  const error = magnitude * RELATIVE_ERROR;
+  const error = magnitude * (truncated ? TRUNCATED_ERROR : RELATIVE_ERROR);
   if (hi + (lo + error) !== hi || hi + (lo - error) !== hi) return viaString(words, value.e, negative);
   return negative ? -hi : hi;
 }

@@ -1,6 +1,6 @@
 import type { DecLine } from "./composition";
 import { ML_PER_L, VOC_BOILING_POINT_MAX_C, WATER_MOLAR_MASS_G_PER_MOL } from "./constants";
-import { type Dec, dec, positive, timesFactor, toNumber, ZERO } from "./decimal";
+import { type Dec, dec, positive, quotient, timesFactor, toNumber, ZERO } from "./decimal";
 import { FormulationError } from "./errors";
 import { volumeOf, type IndexedMaterial } from "./material-index";
 import type { Material } from "./material-schema";
@@ -123,8 +123,8 @@ export function vocFigures(inputs: VocInputs): { voc: VocResult; notices: Notice
   const gramsTimesMlPerL = grams.times(ML_PER_L);
   const voc: VocResult = {
     massGrams: toNumber(grams),
-    gramsPerLitre: toNumber(inputs.perLitre ? grams.times(inputs.perLitre) : gramsTimesMlPerL.div(inputs.solVolumeMl)),
-    gramsPerLitreLessWater: toNumber(gramsTimesMlPerL.div(lessWaterMl)),
+    gramsPerLitre: toNumber(inputs.perLitre ? grams.times(inputs.perLitre) : quotient(gramsTimesMlPerL, inputs.solVolumeMl)),
+    gramsPerLitreLessWater: toNumber(quotient(gramsTimesMlPerL, lessWaterMl)),
     waterMl: toNumber(waterMl),
   };
   const notices: Notice[] = [];

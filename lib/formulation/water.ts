@@ -1,4 +1,4 @@
-import { Dec, HALF, toNumber, ZERO } from "./decimal";
+import { Dec, HALF, quotient, toNumber, ZERO } from "./decimal";
 import type { Notice } from "./result-types";
 
 /**
@@ -99,7 +99,7 @@ export function waterNotices(p: {
   countCarried?: boolean;
 }): Notice[] {
   const notices: Notice[] = [];
-  const effectiveR = (): Dec => p.totalMol.div(p.networkAtomMol);
+  const effectiveR = (): Dec => quotient(p.totalMol, p.networkAtomMol);
   if ((p.countCarried ?? true) && clearlyBelow(p.targetMol, p.carriedMol)) {
     notices.push({
       level: "caution",
@@ -108,7 +108,7 @@ export function waterNotices(p: {
       message:
         `The other materials already bring ${show(p.carriedMol)} mol water, more than the target ${show(p.targetMol)} mol; ` +
         `no water is added and the ratio reached is R = ${show(effectiveR())}` +
-        (p.hydrolysableGroupMol.isZero() ? "." : ` (h = ${show(p.totalMol.div(p.hydrolysableGroupMol))}).`),
+        (p.hydrolysableGroupMol.isZero() ? "." : ` (h = ${show(quotient(p.totalMol, p.hydrolysableGroupMol))}).`),
     });
   }
   const netCondensation = p.hydrolysableGroupMol.times(HALF);
@@ -119,7 +119,7 @@ export function waterNotices(p: {
       code: "below_net_condensation",
       field: "water.value",
       message:
-        `Effective R = ${show(effectiveR())} is below the net-condensation ratio ${show(netCondensation.div(p.networkAtomMol))}: ` +
+        `Effective R = ${show(effectiveR())} is below the net-condensation ratio ${show(quotient(netCondensation, p.networkAtomMol))}: ` +
         "not enough water for complete condensation, alkoxy groups will remain in the gel.",
     });
   } else if (clearlyBelow(p.totalMol, p.hydrolysableGroupMol)) {
@@ -128,7 +128,7 @@ export function waterNotices(p: {
       code: "below_full_hydrolysis",
       field: "water.value",
       message:
-        `Effective R = ${show(effectiveR())} is below the full-hydrolysis ratio ${show(p.hydrolysableGroupMol.div(p.networkAtomMol))}; ` +
+        `Effective R = ${show(effectiveR())} is below the full-hydrolysis ratio ${show(quotient(p.hydrolysableGroupMol, p.networkAtomMol))}; ` +
         "hydrolysis relies on the water released by condensation.",
     });
   }
