@@ -1,4 +1,4 @@
-import { type Dec, dec, ONE } from "./decimal";
+import { type Dec, dec, ONE, wide } from "./decimal";
 import type { Basis } from "./input-schema";
 
 /**
@@ -18,12 +18,12 @@ import type { Basis } from "./input-schema";
 export function solidMassFromBasis(basis: Basis): Dec {
   switch (basis.type) {
     case "solidMass":
-      return dec(basis.grams);
+      return wide(basis.grams);
     case "solidsContent":
-      return dec(basis.solidsFraction).times(dec(basis.solMassGrams));
+      return wide(basis.solidsFraction).times(dec(basis.solMassGrams));
     case "gelBody": {
       const remaining = ONE.minus(dec(basis.linearShrinkage ?? 0));
-      return dec(basis.bulkDensity).times(dec(basis.volumeMl)).times(remaining.pow(3));
+      return wide(basis.bulkDensity).times(dec(basis.volumeMl)).times(remaining.pow(3));
     }
   }
 }

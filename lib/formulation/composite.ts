@@ -108,7 +108,7 @@ export function compositeFigures(
     }
     porosity = ONE.minus(bulk.density.div(theoreticalDensity));
     result.porosity = toNumber(porosity);
-    result.dryGelShrinkage = shrinkage(solidMass.div(bulk.density), solVolumeMl);
+    result.dryGelShrinkage = shrinkage(quotient(solidMass, bulk.density), solVolumeMl);
   }
   return { result, theoreticalDensity, solidVolumeMl, porosity };
 }

@@ -1,5 +1,5 @@
 import type { PhaseInput } from "./composite";
-import { add, type Dec, dec, toNumber, ZERO } from "./decimal";
+import { add, type Dec, dec, quotient, toNumber, ZERO } from "./decimal";
 import type { Component } from "./input-schema";
 import { materialById, type IndexedMaterial } from "./material-index";
 import { organicAmounts } from "./organic";
@@ -76,7 +76,7 @@ export function composeComponents(
     precursorMol: new Map(),
     fastHydrolysing: [],
   };
-  const share = freeMass.equals(solidMass) ? undefined : freeMass.div(solidMass);
+  const share = freeMass.equals(solidMass) ? undefined : quotient(freeMass, solidMass);
   components.forEach((component, index) => {
     // the error field is only written out when the lookup misses
     const entry = byId.get(component.materialId) ?? materialById(byId, component.materialId, `components.${index}.materialId`);

@@ -118,7 +118,7 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
   checkModifierLoad(plans, (id) => byId.get(id)?.material.name ?? id);
   const fractionOf = (id: string): Dec => components.find((c) => c.materialId === id)?.weightFraction ?? ZERO;
   const c = ligandMassPerFreeGram(plans, fractionOf);
-  const freeMass = c.isZero() ? solidMass : solidMass.div(c.plus(1));
+  const freeMass = c.isZero() ? solidMass : quotient(solidMass, c.plus(1));
 
   const pass = composeComponents(components, byId, freeMass, solidMass);
   const lines: DecLine[] = pass.lines;
@@ -196,7 +196,7 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
   // Catalyst: mol active per mol network-forming atom.
   if (input.catalyst && input.catalyst.molPerNetworkAtom > 0) {
     const entry = materialById(byId, input.catalyst.materialId, "catalyst.materialId");
-    const a = dosePerNetworkAtom(entry, dec(input.catalyst.molPerNetworkAtom), networkAtomMol);
+    const a = dosePerNetworkAtom(entry, wide(input.catalyst.molPerNetworkAtom), networkAtomMol);
     lines.push({ materialId: entry.material.id, role: "catalyst", ...a });
     carriedWaterMol = add(carriedWaterMol, a.carriedWaterMol);
     notices.push(...catalystRatioNotices(input.catalyst.molPerNetworkAtom, entry.material.name));
@@ -256,8 +256,8 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
     });
     if (fill.line) {
       lines.push(fill.line);
-      solMass = solMass.plus(fill.line.massGrams);
-      solVolume = solVolume.plus(fill.line.volumeMl);
+      solMass = add(solMass, fill.line.massGrams);
+      solVolume = add(solVolume, fill.line.volumeMl);
     }
     carriedWaterMol = add(carriedWaterMol, fill.carriedWaterMol);
     addMol = fill.addWaterMol;
@@ -284,8 +284,8 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
     addGrams = addMolGrams;
     addMl = volumeOf(waterEntry, addGrams);
     lines.push({ materialId: waterEntry.material.id, role: "water", moles: addMol, massGrams: addGrams, volumeMl: addMl });
-    solMass = solMass.plus(addGrams);
-    solVolume = solVolume.plus(addMl);
+    solMass = add(solMass, addGrams);
+    solVolume = add(solVolume, addMl);
   }
   const totalWaterMol = add(carriedWaterMol, addMol);
 
@@ -367,7 +367,7 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
       volumeMl: toNumber(solVolume),
       residueGramsPerL: toNumber(solidMass.times(perLitre)),
       networkAtomMolarity: toNumber(networkAtomMol.times(perLitre)),
-      solidsFraction: toNumber(solidMass.div(solMass)),
+      solidsFraction: toNumber(quotient(solidMass, solMass)),
     },
     composite,
     thermal: thermal.thermal,

@@ -1,6 +1,6 @@
 import type { DecLine } from "./composition";
 import { ML_PER_L } from "./constants";
-import { type Dec, dec, positive, quotient, toNumber, ZERO } from "./decimal";
+import { add, type Dec, dec, positive, quotient, toNumber, ZERO } from "./decimal";
 import type { IndexedMaterial } from "./material-index";
 import type { CostResult, Notice } from "./result-types";
 
@@ -48,7 +48,7 @@ export function batchCost(
       continue;
     }
     priced += 1;
-    total = total.plus(line.massGrams.times(dec(price)));
+    total = add(total, line.massGrams.times(dec(price)));
   }
   if (priced === 0) return { notices: [] };
   if (unpriced.length > 0) {

@@ -1,6 +1,6 @@
 import type { DecLine } from "./composition";
 import { CURE_RATIO_RANGE } from "./constants";
-import { type Dec, quotient, reciprocal, timesFactor, toNumber, ZERO } from "./decimal";
+import { add, type Dec, quotient, reciprocal, timesFactor, toNumber, ZERO } from "./decimal";
 import type { IndexedMaterial } from "./material-index";
 import type { CureResult, Notice } from "./result-types";
 
@@ -42,8 +42,8 @@ export function cureBalance(lines: readonly DecLine[], byId: Map<string, Indexed
     if (eew === undefined && ahew === undefined) continue;
     any = true;
     const active = activeGrams(line, material.assay);
-    if (eew !== undefined) epoxy = epoxy.plus(active.times(reciprocal(eew)));
-    if (ahew !== undefined) amine = amine.plus(active.times(reciprocal(ahew)));
+    if (eew !== undefined) epoxy = add(epoxy, active.times(reciprocal(eew)));
+    if (ahew !== undefined) amine = add(amine, active.times(reciprocal(ahew)));
   }
   if (!any) return { notices: [] };
   const cure: CureResult = { epoxyEq: toNumber(epoxy), amineHydrogenEq: toNumber(amine) };

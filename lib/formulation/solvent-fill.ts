@@ -1,7 +1,7 @@
 import type { DecLine } from "./composition";
 import { MIN_LINE_GRAMS, WATER_MOLAR_MASS_G_PER_MOL } from "./constants";
 import type { Basis } from "./input-schema";
-import { type Dec, dec, ONE, per, timesFactor, WATER_MOL_PER_GRAM, ZERO, positive } from "./decimal";
+import { type Dec, dec, ONE, per, positive, quotient, timesFactor, WATER_MOL_PER_GRAM, wide, ZERO } from "./decimal";
 import { FormulationError } from "./errors";
 import { requireDensity, solutionWaterMol, volumeOf, waterFractionOf, type IndexedMaterial } from "./material-index";
 
@@ -66,7 +66,7 @@ export function solveFill(p: {
   let solventGrams: Dec;
   let addWaterMol: Dec;
   if (needMol.isZero()) {
-    solventGrams = available.div(solventCost);
+    solventGrams = quotient(available, solventCost);
     addWaterMol = ZERO;
   } else {
     const coefficient = solventCost.minus(carriedPerGram.times(waterCost));
@@ -77,10 +77,10 @@ export function solveFill(p: {
         `${p.solvent.material.name} carries so much water that adding it cannot make up the sol; use a drier solvent`,
       );
     }
-    solventGrams = available.minus(needMol.times(waterCost)).div(coefficient);
+    solventGrams = quotient(available.minus(needMol.times(waterCost)), coefficient);
     addWaterMol = needMol.minus(solventGrams.times(carriedPerGram));
     if (addWaterMol.isNegative()) {
-      solventGrams = available.div(solventCost);
+      solventGrams = quotient(available, solventCost);
       addWaterMol = ZERO;
     }
   }
@@ -104,7 +104,7 @@ export function solveFill(p: {
       "basis.solidsFraction",
       `the reagents alone weigh ${show(reagentsAlone)} ${unit}, more than the ${show(p.target.amount)} ${unit} sol; ` +
         (p.solidGrams
-          ? `lower the solids content: the highest these reagents reach is ${show4(p.solidGrams.div(reagentsAlone))} (with no solvent added)`
+          ? `lower the solids content: the highest these reagents reach is ${show4(quotient(p.solidGrams, reagentsAlone))} (with no solvent added)`
           : "lower the solids content"),
     );
   }
@@ -143,7 +143,8 @@ export function fillSolvent(p: {
   waterNeededMol: Dec;
 }): FillOutcome {
   const fill = solveFill({
-    target: p.basis.type === "gelBody" ? { kind: "volume", amount: dec(p.basis.volumeMl) } : { kind: "mass", amount: dec(p.basis.solMassGrams) },
+    // Wide: what the fill leaves is then an exact difference
+    target: p.basis.type === "gelBody" ? { kind: "volume", amount: wide(p.basis.volumeMl) } : { kind: "mass", amount: wide(p.basis.solMassGrams) },
     otherGrams: p.otherGrams,
     otherMl: p.otherMl,
     waterNeededMol: p.waterNeededMol,

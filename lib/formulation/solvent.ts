@@ -1,4 +1,4 @@
-import { Dec, per, positive, quotient, ZERO } from "./decimal";
+import { add, Dec, per, positive, quotient, ZERO } from "./decimal";
 import { doseMoles, type DosedAmounts } from "./dosing";
 import type { DecLine } from "./composition";
 import { requireMolarMass, type IndexedMaterial } from "./material-index";
@@ -18,7 +18,7 @@ export function carriedSolventGrams(lines: readonly DecLine[], byId: Map<string,
   let grams = ZERO;
   for (const line of lines) {
     if (line.carriedSolventGrams && byId.get(line.materialId)?.material.solventId === solventId) {
-      grams = grams.plus(line.carriedSolventGrams);
+      grams = add(grams, line.carriedSolventGrams);
     }
   }
   return grams;

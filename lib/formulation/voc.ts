@@ -1,6 +1,6 @@
 import type { DecLine } from "./composition";
 import { ML_PER_L, VOC_BOILING_POINT_MAX_C, WATER_MOLAR_MASS_G_PER_MOL } from "./constants";
-import { type Dec, dec, positive, quotient, timesFactor, toNumber, ZERO } from "./decimal";
+import { add, type Dec, dec, positive, quotient, timesFactor, toNumber, ZERO } from "./decimal";
 import { FormulationError } from "./errors";
 import { volumeOf, type IndexedMaterial } from "./material-index";
 import type { Material } from "./material-schema";
@@ -87,7 +87,7 @@ export function vocFigures(inputs: VocInputs): { voc: VocResult; notices: Notice
   const count = (material: Material, mass: Dec): void => {
     const verdict = vocVerdict(material);
     if (verdict === "no") return;
-    grams = grams.plus(mass);
+    grams = add(grams, mass);
     if (verdict === "assumed") assume(material, material.formula === undefined ? "formula" : "boilingPointC");
   };
   for (const line of lines) {
@@ -100,12 +100,12 @@ export function vocFigures(inputs: VocInputs): { voc: VocResult; notices: Notice
       const carried = material.solventId === undefined ? undefined : byId.get(material.solventId)?.material;
       if (carried) count(carried, line.carriedSolventGrams);
       else {
-        grams = grams.plus(line.carriedSolventGrams);
+        grams = add(grams, line.carriedSolventGrams);
         assume(material, "solventId");
       }
     }
   }
-  for (const alcohol of inputs.alcohols) grams = grams.plus(alcohol.grams);
+  for (const alcohol of inputs.alcohols) grams = add(grams, alcohol.grams);
 
   const waterMaterial = inputs.waterEntry.material;
   const waterMl = inputs.waterMol.isZero()
