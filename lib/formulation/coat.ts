@@ -2,7 +2,7 @@ import type { CompositeFigures, PhaseInput } from "./composite";
 import type { DecLine } from "./composition";
 import { batchCost } from "./cost";
 import { cureBalance } from "./cure";
-import { Dec, quotient } from "./decimal";
+import { Dec } from "./decimal";
 import { filmPrediction } from "./film";
 import type { FormulationInput } from "./input-schema";
 import type { IndexedMaterial } from "./material-index";
@@ -16,7 +16,7 @@ export interface CoatContext {
   byId: Map<string, IndexedMaterial>;
   lines: readonly DecLine[];
   /** ρ_th, S / ρ_th and P of the dry composite, decimal (from `compositeFigures`). */
-  composite: Pick<CompositeFigures, "theoreticalDensity" | "solidVolumeMl" | "porosity">;
+  composite: Pick<CompositeFigures, "theoreticalDensity" | "solidVolumeMl" | "solidVolumeFraction" | "porosity">;
   /** Phases of the dry composite, bonded ligands included. */
   phases: readonly PhaseInput[];
   /** S, g of dry composite. */
@@ -25,6 +25,8 @@ export interface CoatContext {
   solMass: Dec;
   /** mL of sol (ideal mixing). */
   solVolume: Dec;
+  /** 1 / mL of sol. */
+  perMl: Dec;
   /** 1000 / mL of sol, i.e. 1 / (sol volume in L). */
   perLitre: Dec;
   /** Water in the sol, added and carried, mol. */
@@ -47,7 +49,7 @@ export interface CoatContext {
  * @param context - the decimal figures of the computation
  * @example
  * ```ts
- * addCoatPredictions(result, { input, byId, lines, composite, phases, solidMass, solMass, solVolume, perLitre, totalWaterMol, waterEntry, alcohols });
+ * addCoatPredictions(result, { input, byId, lines, composite, phases, solidMass, solMass, solVolume, perMl, perLitre, totalWaterMol, waterEntry, alcohols });
  * result.voc?.gramsPerLitre;
  * ```
  */
@@ -59,8 +61,11 @@ export function addCoatPredictions(result: FormulationResult, context: CoatConte
   let coverage: Dec | undefined;
   if (input.coating) {
     // φ_s = (S / ρ_th) / V_sol; ρ of the sol = sol mass / sol volume
-    const solidVolumeFraction = quotient(context.composite.solidVolumeMl, solVolume);
-    const film = filmPrediction(input.coating, { solidVolumeFraction, porosity, densityGPerCm3: quotient(context.solMass, solVolume) });
+    const film = filmPrediction(input.coating, {
+      solidVolumeFraction: context.composite.solidVolumeFraction,
+      porosity,
+      densityGPerCm3: context.solMass.times(context.perMl),
+    });
     result.coating = film.coating;
     coverage = new Dec(film.coating.coverageM2PerL);
     notices.push(...film.notices);
@@ -79,7 +84,7 @@ export function addCoatPredictions(result: FormulationResult, context: CoatConte
   if (cure.cure) result.cure = cure.cure;
   notices.push(...cure.notices);
 
-  const cost = batchCost(lines, byId, solidMass, solVolume, coverage);
+  const cost = batchCost(lines, byId, solidMass, context.perLitre, coverage);
   if (cost.cost) result.cost = cost.cost;
   notices.push(...cost.notices);
 }

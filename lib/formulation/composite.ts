@@ -30,21 +30,22 @@ export interface CompositeFigures {
   theoreticalDensity: Dec;
   /** S / ρ_th, mL of dense dry composite (decimal). */
   solidVolumeMl: Dec;
+  /** φ_s = (S / ρ_th) / V_sol, volume fraction of dense solid in the sol (decimal). */
+  solidVolumeFraction: Dec;
   /** P, 0 when no bulk density is known (decimal). */
   porosity: Dec;
 }
 
 /**
- * Volumetric and linear shrinkage from a sol volume to a solid volume:
- * volumetric = 1 − V_solid / V_sol, linear = 1 − (V_solid / V_sol)^(1/3).
+ * Volumetric and linear shrinkage from a sol volume to a solid volume, from
+ * their ratio r = V_solid / V_sol: volumetric = 1 − r, linear = 1 − r^(1/3).
  *
  * @example
  * ```ts
- * shrinkage(new Dec(27), new Dec(100)); // { volumetric: 0.73, linear: 0.7 }
+ * shrinkage(new Dec(0.27)); // { volumetric: 0.73, linear: 0.7 }
  * ```
  */
-export function shrinkage(solidVolumeMl: Dec, solVolumeMl: Dec): Shrinkage {
-  const ratio = quotient(solidVolumeMl, solVolumeMl);
+export function shrinkage(ratio: Dec): Shrinkage {
   return { volumetric: toNumber(ONE.minus(ratio)), linear: toNumber(ONE.minus(cubeRoot(ratio))) };
 }
 
@@ -57,20 +58,20 @@ export function shrinkage(solidVolumeMl: Dec, solVolumeMl: Dec): Shrinkage {
  *
  * @param phases - residues and organic phases with weight fraction and dry density
  * @param solidMass - S, g
- * @param solVolumeMl - sol volume, mL (ideal mixing)
+ * @param perMl - 1 / sol volume, 1/mL (ideal mixing)
  * @param bulk - bulk density of the dry gel, if known
- * @returns composite figures as plain numbers (`result`), and ρ_th, S / ρ_th and P as decimals
+ * @returns composite figures as plain numbers (`result`), and ρ_th, S / ρ_th, φ_s and P as decimals
  * @example
  * ```ts
  * // 100 % silica (2.20 g/cm³), S = 22 g, sol 100 mL → dense solid 10 mL, volumetric shrinkage 0.9
  * compositeFigures([{ materialId: "teos", weightFraction: new Dec(1), weightFractionValue: 1, density: new Dec(2.2), densityValue: 2.2 }],
- *   new Dec(22), new Dec(100)).result.denseShrinkage.volumetric; // 0.9
+ *   new Dec(22), new Dec(0.01)).result.denseShrinkage.volumetric; // 0.9
  * ```
  */
 export function compositeFigures(
   phases: readonly PhaseInput[],
   solidMass: Dec,
-  solVolumeMl: Dec,
+  perMl: Dec,
   bulk?: BulkDensity,
 ): CompositeFigures {
   const specificVolumes = phases.map((phase) => per(phase.weightFraction, phase.densityValue));
@@ -91,11 +92,12 @@ export function compositeFigures(
   });
   // S / ρ_th = S · Σ (w_k / ρ_k)
   const solidVolumeMl = solidMass.times(totalSpecificVolume);
+  const solidVolumeFraction = solidVolumeMl.times(perMl);
   const result: CompositeResult = {
     massGrams: toNumber(solidMass),
     theoreticalDensity: toNumber(theoreticalDensity),
     phases: outPhases,
-    denseShrinkage: shrinkage(solidVolumeMl, solVolumeMl),
+    denseShrinkage: shrinkage(solidVolumeFraction),
   };
   let porosity = ZERO;
   if (bulk) {
@@ -108,7 +110,7 @@ export function compositeFigures(
     }
     porosity = ONE.minus(bulk.density.div(theoreticalDensity));
     result.porosity = toNumber(porosity);
-    result.dryGelShrinkage = shrinkage(quotient(solidMass, bulk.density), solVolumeMl);
+    result.dryGelShrinkage = shrinkage(quotient(solidMass, bulk.density).times(perMl));
   }
-  return { result, theoreticalDensity, solidVolumeMl, porosity };
+  return { result, theoreticalDensity, solidVolumeMl, solidVolumeFraction, porosity };
 }

@@ -290,7 +290,8 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
   const totalWaterMol = add(carriedWaterMol, addMol);
 
   // Sol figures (ideal mixing).
-  const perLitre = dec(ML_PER_L).div(solVolume); // 1 / (sol volume in L)
+  const perMl = ONE.div(solVolume); // 1 / sol volume, 1/mL
+  const perLitre = perMl.times(ML_PER_L); // 1 / (sol volume in L): an exact shift of perMl's digits
 
   // Dry composite.
   let bulk: BulkDensity | undefined;
@@ -299,7 +300,7 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
   } else if (basis.type === "gelBody") {
     bulk = { density: dec(basis.bulkDensity), field: "basis.bulkDensity" };
   }
-  const compositeDecimals = compositeFigures(phases, solidMass, solVolume, bulk);
+  const compositeDecimals = compositeFigures(phases, solidMass, perMl, bulk);
   const composite = compositeDecimals.result;
 
   // Thermal checks: organic phases and the substrate.
@@ -376,6 +377,6 @@ export function computeFormulation(rawInput: FormulationInput): FormulationResul
   if (solventSummary) result.solvent = solventSummary;
   if (modifierResults.length > 0) result.modifiers = modifierResults;
   // What the coat will be: film (with a coating), optics, VOC, epoxy–amine balance, cost.
-  addCoatPredictions(result, { input, byId, lines, composite: compositeDecimals, phases, solidMass, solMass, solVolume, perLitre, totalWaterMol, waterEntry, alcohols });
+  addCoatPredictions(result, { input, byId, lines, composite: compositeDecimals, phases, solidMass, solMass, solVolume, perMl, perLitre, totalWaterMol, waterEntry, alcohols });
   return result;
 }

@@ -1,11 +1,10 @@
 import type { DecLine } from "./composition";
-import { ML_PER_L } from "./constants";
-import { add, type Dec, dec, positive, quotient, toNumber, ZERO } from "./decimal";
+import { add, Dec, dec, positive, quotient, toNumber, ZERO } from "./decimal";
 import type { IndexedMaterial } from "./material-index";
 import type { CostResult, Notice } from "./result-types";
 
-/** g per kg (exact). */
-const G_PER_KG = 1000;
+/** kg per g (exact): multiplying by it shifts the decimal point, no rounding. */
+const KG_PER_G: Dec = new Dec("0.001");
 
 /**
  * Cost of the batch in the team's currency (chemistry: "What the coat will
@@ -19,20 +18,20 @@ const G_PER_KG = 1000;
  * @param lines - the recipe lines (decimal)
  * @param byId - the indexed materials
  * @param solidMassGrams - S, g of dry composite
- * @param solVolumeMl - sol volume, mL
+ * @param perLitre - 1 / (sol volume in L), 1/L
  * @param coverageM2PerL - predicted coverage, when a coat is set
  * @returns the cost (or none) and notices
  * @example
  * ```ts
  * // 100 g TEOS at 40/kg + 50 g ethanol at 6/kg = 4.3
- * batchCost(lines, byId, dec(28.84), dec(180)).cost?.total; // 4.3
+ * batchCost(lines, byId, dec(28.84), dec(1000).div(180)).cost?.total; // 4.3 (a 180 mL sol)
  * ```
  */
 export function batchCost(
   lines: readonly DecLine[],
   byId: Map<string, IndexedMaterial>,
   solidMassGrams: Dec,
-  solVolumeMl: Dec,
+  perLitre: Dec,
   coverageM2PerL?: Dec,
 ): { cost?: CostResult; notices: Notice[] } {
   let total = ZERO;
@@ -64,13 +63,15 @@ export function batchCost(
       ],
     };
   }
-  total = quotient(total, G_PER_KG);
-  const perLitre = quotient(total.times(ML_PER_L), solVolumeMl);
+  // total was Σ g · price per kg: the batch's cost is that / 1000 (an exact decimal shift)
+  const perKgDry = quotient(total, solidMassGrams);
+  total = total.times(KG_PER_G);
+  const costPerLitre = total.times(perLitre);
   const cost: CostResult = {
     total: toNumber(total),
-    perKgDry: toNumber(quotient(total.times(G_PER_KG), solidMassGrams)),
-    perLitreSol: toNumber(perLitre),
+    perKgDry: toNumber(perKgDry),
+    perLitreSol: toNumber(costPerLitre),
   };
-  if (coverageM2PerL) cost.perM2 = toNumber(perLitre.div(coverageM2PerL));
+  if (coverageM2PerL) cost.perM2 = toNumber(quotient(costPerLitre, coverageM2PerL));
   return { cost, notices: [] };
 }

@@ -236,7 +236,7 @@ export function cubeRoot(value: Dec): Dec {
   if (value.isZero()) return ZERO;
   const approximate = Math.cbrt(toNumber(value));
   // outside the range of a double: let decimal.js do the whole root
-  if (!Number.isFinite(approximate) || approximate === 0) return value.cbrt();
+  if (!Number.isFinite(approximate) || approximate === 0) return new Dec(value).cbrt();
   const guess = new Dec(approximate);
   const square = guess.times(guess);
   return guess.minus(square.times(guess).minus(value).div(square.times(3)));
@@ -257,7 +257,7 @@ export function squareRoot(value: Dec): Dec {
   if (value.isZero()) return ZERO;
   const approximate = Math.sqrt(toNumber(value));
   // outside the range of a double: let decimal.js do the whole root
-  if (!Number.isFinite(approximate) || approximate === 0) return value.sqrt();
+  if (!Number.isFinite(approximate) || approximate === 0) return new Dec(value).sqrt();
   const guess = new Dec(approximate);
-  return guess.plus(value.div(guess)).times(HALF);
+  return guess.plus(quotient(value, guess)).times(HALF);
 }

@@ -12,8 +12,6 @@ const CARBON = /C(?![a-z])/;
 /** How a material counts toward VOC: "yes", "no", or "assumed" (a solvent or catalyst without a boiling point). */
 export type VocVerdict = "yes" | "no" | "assumed";
 
-const verdictCache = new WeakMap<Material, VocVerdict>();
-
 /**
  * Whether a material is a volatile organic compound in the sense of EU
  * Directive 2004/42/EC: organic (carbon in its formula) with an initial
@@ -29,15 +27,10 @@ const verdictCache = new WeakMap<Material, VocVerdict>();
  * ```
  */
 export function vocVerdict(material: Material): VocVerdict {
-  let verdict = verdictCache.get(material);
-  if (verdict !== undefined) return verdict;
-  const solventLike = material.kind === "solvent" || material.kind === "catalyst";
-  if (material.formula === undefined) verdict = material.kind === "solvent" ? "assumed" : "no";
-  else if (!CARBON.test(material.formula)) verdict = "no";
-  else if (material.boilingPointC !== undefined) verdict = material.boilingPointC <= VOC_BOILING_POINT_MAX_C ? "yes" : "no";
-  else verdict = solventLike ? "assumed" : "no";
-  verdictCache.set(material, verdict);
-  return verdict;
+  if (material.formula === undefined) return material.kind === "solvent" ? "assumed" : "no";
+  if (!CARBON.test(material.formula)) return "no";
+  if (material.boilingPointC !== undefined) return material.boilingPointC <= VOC_BOILING_POINT_MAX_C ? "yes" : "no";
+  return material.kind === "solvent" || material.kind === "catalyst" ? "assumed" : "no";
 }
 
 /** What the VOC figure needs from the rest of the computation. */
