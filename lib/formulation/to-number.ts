@@ -50,7 +50,10 @@ function viaString(words: readonly number[], exponent: number, negative: boolean
 /**
  * Converts a decimal to the nearest JS number, correctly rounded from its
  * exact decimal value: the same number as `Number(value.toString())`.
- * Fast path, for results inside the normal range: the digits D of the first
+ * Up to 14 digits with a power of ten up to 10²²: D and the power are exact
+ * doubles, and one IEEE multiplication or division rounds correctly
+ * (W. D. Clinger, "How to read floating point numbers accurately", PLDI
+ * 1990). Otherwise, for results inside the normal range: the digits D of the first
  * 4 words (up to 28 digits) as an exact double-double (hi + lo, by exact
  * products and sums), times or divided by exact powers of ten in
  * double-double arithmetic, whose result s + t lies within 2⁻⁹⁶ · |s| of the
@@ -75,6 +78,16 @@ export function toNumber(value: Decimal): number {
   const first = words[0] as number;
   if (first === 0) return 0;
   const negative = value.s < 0;
+  if (words.length <= 2) {
+    // up to 14 digits: D < 10¹⁴ is an exact double, and so is 10^|scale| for |scale| ≤ 22, so one
+    // IEEE multiplication or division gives the correctly rounded result (Clinger's fast path)
+    const digits = words.length === 1 ? first : first * 1e7 + (words[1] as number);
+    const shift = value.e + 1 - digitCount(first) - 7 * (words.length - 1);
+    if (shift >= -22 && shift <= 22) {
+      const magnitude = shift >= 0 ? digits * (POWERS_OF_TEN[shift] as number) : digits / (POWERS_OF_TEN[-shift] as number);
+      return negative ? -magnitude : magnitude;
+    }
+  }
   const truncated = words.length > MAX_WORDS;
   const count = truncated ? MAX_WORDS : words.length;
   // D = the digits as an integer, hi + lo exactly; D · 10^scale is the value
