@@ -5,9 +5,11 @@ import { toNumber } from "./to-number";
 export { toNumber };
 
 /**
- * The decimal constructor used by every engine computation: 20 significant
- * digits, banker's rounding. A private clone, so that global changes to
- * decimal.js settings elsewhere in the application cannot alter results.
+ * The engine's decimal constructor: 20 significant digits, banker's
+ * rounding, for constants, quotients, roots and whatever is not a sum or
+ * product of amounts (those are `Wide`, exact). A private clone, so that
+ * global changes to decimal.js settings elsewhere in the application cannot
+ * alter results.
  *
  * @example
  * ```ts
