@@ -7,17 +7,34 @@ const SDS = "Check the supplier's safety data sheet and follow local regulations
 /** GHS hazard statements (UN GHS): fatal or toxic if inhaled. */
 const INHALATION_TOXIC = ["H330", "H331"];
 /** GHS hazard statement (UN GHS): causes severe skin burns and eye damage. */
-const CORROSIVE = "H314";
+const CORROSIVE = ["H314"];
 /** GHS hazard statement (UN GHS): causes serious eye damage. */
-const SEVERE_EYE_DAMAGE = "H318";
+const SEVERE_EYE_DAMAGE = ["H318"];
 
 function hasHazard(material: Material, codes: readonly string[]): boolean {
-  return (material.hazards ?? []).some((code) => codes.some((wanted) => code.startsWith(wanted)));
+  const hazards = material.hazards;
+  if (hazards === undefined) return false;
+  for (const code of hazards) {
+    for (const wanted of codes) if (code.startsWith(wanted)) return true;
+  }
+  return false;
 }
 
 function names(materials: readonly Material[]): string {
-  return materials.map((material) => material.name).join(", ");
+  let text = "";
+  for (let i = 0; i < materials.length; i += 1) text = i === 0 ? materials[i]!.name : `${text}, ${materials[i]!.name}`;
+  return text;
 }
+
+/** The materials that carry one of the hazard statements `codes` (by prefix), in order. */
+function withHazard(materials: readonly Material[], codes: readonly string[]): Material[] {
+  const found: Material[] = [];
+  for (const material of materials) if (hasHazard(material, codes)) found.push(material);
+  return found;
+}
+
+/** Release of methanol: the alcohol's name, trimmed, in lower case. */
+const isMethanol = (name: string): boolean => name.trim().toLowerCase() === "methanol";
 
 /**
  * Safety notices for the dispensed materials (chemistry: "Safety"): alkoxides
@@ -39,9 +56,12 @@ function names(materials: readonly Material[]): string {
 export function safetyNotices(dispensed: readonly Material[], alcohols: readonly AlcoholRelease[]): Notice[] {
   const notices: Notice[] = [];
   // The material's own flag decides; without one, a precursor with alkoxy groups is taken to be an alkoxide.
-  const alkoxides = dispensed.filter(
-    (material) => material.moistureSensitive ?? (material.kind === "precursor" && (material.precursor?.hydrolysableGroupsPerMolecule ?? 0) > 0),
-  );
+  const alkoxides: Material[] = [];
+  for (const material of dispensed) {
+    if (material.moistureSensitive ?? (material.kind === "precursor" && (material.precursor?.hydrolysableGroupsPerMolecule ?? 0) > 0)) {
+      alkoxides.push(material);
+    }
+  }
   if (alkoxides.length > 0) {
     notices.push({
       level: "caution",
@@ -49,20 +69,28 @@ export function safetyNotices(dispensed: readonly Material[], alcohols: readonly
       message: `Alkoxides (${names(alkoxides)}) are moisture-sensitive and flammable: keep containers closed, dispense dry, away from ignition sources. ${SDS}`,
     });
   }
-  const methanol = alcohols.find((alcohol) => alcohol.name.trim().toLowerCase() === "methanol" && alcohol.mol > 0);
+  let methanol = false;
+  for (const alcohol of alcohols) {
+    if (isMethanol(alcohol.name) && alcohol.mol > 0) {
+      methanol = true;
+      break;
+    }
+  }
   if (methanol) {
-    const sources = dispensed.filter(
-      (material) => material.precursor?.leavingAlcohol?.name.trim().toLowerCase() === "methanol",
-    );
+    const sources: Material[] = [];
+    for (const material of dispensed) {
+      const leaving = material.precursor?.leavingAlcohol;
+      if (leaving && isMethanol(leaving.name)) sources.push(material);
+    }
     notices.push({
       level: "caution",
       code: "methanol_released",
       message: `Hydrolysis of methoxy precursors (${names(sources)}) releases methanol, toxic by inhalation, skin contact and ingestion: work in a fume hood. ${SDS}`,
     });
   }
-  const toxic = dispensed.filter((material) => hasHazard(material, INHALATION_TOXIC));
+  const toxic = withHazard(dispensed, INHALATION_TOXIC);
   if (toxic.length > 0) {
-    const eyes = toxic.filter((material) => hasHazard(material, [SEVERE_EYE_DAMAGE]));
+    const eyes = withHazard(toxic, SEVERE_EYE_DAMAGE);
     notices.push({
       level: "caution",
       code: "toxic_by_inhalation",
@@ -72,7 +100,7 @@ export function safetyNotices(dispensed: readonly Material[], alcohols: readonly
         `. Handle only in a fume hood with eye protection. ${SDS}`,
     });
   }
-  const corrosive = dispensed.filter((material) => hasHazard(material, [CORROSIVE]));
+  const corrosive = withHazard(dispensed, CORROSIVE);
   if (corrosive.length > 0) {
     notices.push({
       level: "caution",
