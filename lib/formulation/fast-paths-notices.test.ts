@@ -7,7 +7,10 @@
  */
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
+import { Dec } from "./decimal";
 import { orderLines } from "./line-order";
+import { fastHydrolysisNotices, MIN_MODIFIER_RATIO, type ModifierPlan } from "./modifiers";
+import { compareSum } from "./sum-compare";
 import type { Material } from "./material-schema";
 import type { AlcoholRelease, LineRole, Notice, RecipeLine } from "./result-types";
 import { safetyNotices } from "./safety";
@@ -97,6 +100,26 @@ function referenceSafetyNotices(dispensed: readonly Material[], alcohols: readon
   return notices;
 }
 
+function referenceFastHydrolysisNotices(fast: readonly { id: string; name: string; path: string }[], plans: readonly ModifierPlan[], effectiveR: Dec): Notice[] {
+  if (fast.length === 0 || !effectiveR.greaterThan(1)) return [];
+  const notices: Notice[] = [];
+  for (const precursor of fast) {
+    const ratios: number[] = [];
+    for (const plan of plans) if (plan.spec.precursorId === precursor.id) ratios.push(plan.spec.molPerMetal);
+    if (ratios.length > 0 && compareSum(ratios, new Dec(MIN_MODIFIER_RATIO)) >= 0) continue;
+    notices.push({
+      level: "caution",
+      code: "fast_hydrolysis_unmodified",
+      field: "modifiers",
+      message:
+        `${precursor.name} hydrolyses far faster than the silicon alkoxides and, at an effective R of ${Number(effectiveR.toPrecision(4))}, ` +
+        `will precipitate unless it is modified first: add a chelating modifier (acetylacetone, ethyl acetoacetate or a carboxylic acid) ` +
+        `at ${MIN_MODIFIER_RATIO}–2 mol per mol metal before any water.`,
+    });
+  }
+  return notices;
+}
+
 // ---- random input ----
 
 const ROLES: LineRole[] = ["precursor", "organic", "modifier", "solvent", "water", "catalyst"];
@@ -122,7 +145,7 @@ const subject: fc.Arbitrary<ThermalSubject> = fc.record({
   ),
 });
 
-const hazardCode = fc.constantFrom("H225", "H314", "H318", "H319", "H330", "H331", "H3311", "H31", "EUH014", "H330F");
+const hazardCode = fc.constantFrom("H225", "H314", "H318", "H319", "H330", "H331", "H3311", "H31", "H3", "", "h330", "X330", "EUH014", "H330F", "H314H318");
 const material: fc.Arbitrary<Material> = fc.record(
   {
     id: ids,
@@ -175,6 +198,25 @@ describe("safetyNotices", () => {
     fc.assert(
       fc.property(fc.array(material, { maxLength: 6 }), fc.array(alcohol, { maxLength: 3 }), (dispensed, alcohols) => {
         expect(safetyNotices(dispensed, alcohols)).toEqual(referenceSafetyNotices(dispensed, alcohols));
+      }),
+      { numRuns: 5000 },
+    );
+  });
+});
+
+describe("fastHydrolysisNotices", () => {
+  const precursorIds = fc.constantFrom("ti", "zr", "al");
+  // only the fields the notice reads; the rest of a plan does not enter it
+  const plan = fc
+    .record({ precursorId: precursorIds, molPerMetal: fc.constantFrom(0.1, 0.2, 0.25, 0.3, 0.4, 0.5, 1) })
+    .map(({ precursorId, molPerMetal }) => ({ spec: { materialId: "acac", precursorId, molPerMetal } }) as unknown as ModifierPlan);
+  const fast = fc.array(fc.record({ id: precursorIds, name: fc.string({ maxLength: 5 }), path: fc.constant("materials.0") }), { maxLength: 4 });
+  const effectiveR = fc.constantFrom("0.5", "1", "1.00001", "4", "3.14159265", "12.345678").map((text) => new Dec(text));
+
+  it("raises the cautions, with the same words, that the notice built per precursor did", () => {
+    fc.assert(
+      fc.property(fast, fc.array(plan, { maxLength: 5 }), effectiveR, (f, plans, r) => {
+        expect(fastHydrolysisNotices(f, plans, r)).toEqual(referenceFastHydrolysisNotices(f, plans, r));
       }),
       { numRuns: 5000 },
     );
