@@ -14,7 +14,7 @@ import { compareSum } from "./sum-compare";
 import type { Material } from "./material-schema";
 import type { AlcoholRelease, LineRole, Notice, RecipeLine } from "./result-types";
 import { safetyNotices } from "./safety";
-import { hardLimit, type NamedLimit, type StepAtmosphere, type ThermalSubject } from "./thermal";
+import { checkThermal, hardLimit, type NamedLimit, type StepAtmosphere, type ThermalSubject } from "./thermal";
 
 // ---- the earlier definitions, as they were ----
 
@@ -220,5 +220,17 @@ describe("fastHydrolysisNotices", () => {
       }),
       { numRuns: 5000 },
     );
+  });
+});
+
+describe("checkThermal's row text", () => {
+  it("names a material by the last subject with its id, as a map built from the subjects did", () => {
+    // PEG melts at 52 °C (data/materials.ts); a drying step at 60 °C is past it: a caution row for each subject
+    const peg = { materialId: "peg", role: "organic" as const, thermal: { meltingC: 52, degradationOnsetC: 180 }, path: "materials.0" };
+    const { notices } = checkThermal([{ ...peg, name: "first" }, { ...peg, name: "second" }], [], [{ name: "Dry", temperatureC: 60, durationH: 1, stage: "drying" }], 20);
+    expect(notices.map((n) => n.message)).toEqual([
+      "Process steps within the 20 °C margin of a limit, past a glass transition or melting point, or above a service rating: " +
+        '"Dry" at 60 °C vs second melting point 52 °C; "Dry" at 60 °C vs second melting point 52 °C.',
+    ]);
   });
 });
