@@ -253,6 +253,14 @@ const KIND_WORDS: Record<MaterialKind, string> = {
   modifier: "a modifier",
 };
 
+/** The kinds each reference may name. */
+const COMPONENT_KINDS: readonly MaterialKind[] = ["precursor", "organic"];
+const WATER_KINDS: readonly MaterialKind[] = ["water"];
+const MODIFIER_KINDS: readonly MaterialKind[] = ["modifier"];
+const SOLVENT_KINDS: readonly MaterialKind[] = ["solvent"];
+const CATALYST_KINDS: readonly MaterialKind[] = ["catalyst"];
+const SUBSTRATE_KINDS: readonly MaterialKind[] = ["substrate"];
+
 function checkReference(
   ctx: Ctx,
   byId: Map<string, Material>,
@@ -265,7 +273,9 @@ function checkReference(
     addIssue(ctx, path, "unknown_material", "the chosen material is not in the materials list");
     return;
   }
-  if (!kinds.includes(material.kind)) {
+  let known = false;
+  for (const kind of kinds) if (kind === material.kind) known = true;
+  if (!known) {
     const wanted = kinds.map((kind) => KIND_WORDS[kind]).join(" or ");
     addIssue(ctx, path, "wrong_kind", `"${material.name}" is ${KIND_WORDS[material.kind]}, expected ${wanted}`);
   }
@@ -309,25 +319,34 @@ export const formulationInputSchema = z
   )
   .superRefine((input, ctx) => {
     const byId = new Map<string, Material>();
-    input.materials.forEach((material, index) => {
+    const materials = input.materials;
+    for (let index = 0; index < materials.length; index += 1) {
+      const material = materials[index]!;
       if (byId.has(material.id)) {
         addIssue(ctx, ["materials", index, "id"], "duplicate_material", `the material "${material.name}" appears twice in the materials list`);
       } else {
         byId.set(material.id, material);
       }
-    });
+    }
 
     const seen = new Set<string>();
-    input.components.forEach((component, index) => {
-      const path = ["components", index, "materialId"];
-      checkReference(ctx, byId, component.materialId, path, ["precursor", "organic"]);
+    const components = input.components;
+    const fractions = new Array<number>(components.length);
+    for (let index = 0; index < components.length; index += 1) {
+      const component = components[index]!;
+      checkReference(ctx, byId, component.materialId, ["components", index, "materialId"], COMPONENT_KINDS);
       if (seen.has(component.materialId)) {
-        addIssue(ctx, path, "duplicate_component", `"${byId.get(component.materialId)?.name ?? "a material"}" is chosen for two components; combine its weight fractions`);
+        addIssue(
+          ctx,
+          ["components", index, "materialId"],
+          "duplicate_component",
+          `"${byId.get(component.materialId)?.name ?? "a material"}" is chosen for two components; combine its weight fractions`,
+        );
       }
       seen.add(component.materialId);
-    });
+      fractions[index] = component.weightFraction;
+    }
     // |Σw − 1| > tolerance, as the decimal sum decides (the float sum settles all but a sum at the edge)
-    const fractions = input.components.map((component) => component.weightFraction);
     if (compareSum(fractions, HIGHEST_SUM) > 0 || compareSum(fractions, LOWEST_SUM) < 0) {
       const total = decimalSum(fractions);
       addIssue(
@@ -338,7 +357,7 @@ export const formulationInputSchema = z
       );
     }
 
-    checkReference(ctx, byId, input.water.materialId, ["water", "materialId"], ["water"]);
+    checkReference(ctx, byId, input.water.materialId, ["water", "materialId"], WATER_KINDS);
     const componentPrecursor = (id: string): boolean => seen.has(id) && byId.get(id)?.kind === "precursor";
     const nameOf = (id: string): string => (byId.has(id) ? `"${byId.get(id)!.name}"` : "the chosen material");
     if (input.water.ratio === "perPrecursor") {
@@ -348,18 +367,22 @@ export const formulationInputSchema = z
         addIssue(ctx, ["water", "referenceId"], "invalid_input", `${nameOf(input.water.referenceId)} is not a precursor of this composition`);
       }
     }
-    input.modifiers?.forEach((modifier, index) => {
-      checkReference(ctx, byId, modifier.materialId, ["modifiers", index, "materialId"], ["modifier"]);
-      const material = byId.get(modifier.materialId);
-      if (material?.kind === "modifier" && !material.modifier) {
-        addIssue(ctx, ["modifiers", index, "materialId"], "invalid_input", `"${material.name}" has no modifier data (groups replaced, bonded ligand)`);
+    const modifiers = input.modifiers;
+    if (modifiers) {
+      for (let index = 0; index < modifiers.length; index += 1) {
+        const modifier = modifiers[index]!;
+        checkReference(ctx, byId, modifier.materialId, ["modifiers", index, "materialId"], MODIFIER_KINDS);
+        const material = byId.get(modifier.materialId);
+        if (material?.kind === "modifier" && !material.modifier) {
+          addIssue(ctx, ["modifiers", index, "materialId"], "invalid_input", `"${material.name}" has no modifier data (groups replaced, bonded ligand)`);
+        }
+        if (!componentPrecursor(modifier.precursorId)) {
+          addIssue(ctx, ["modifiers", index, "precursorId"], "invalid_input", `${nameOf(modifier.precursorId)} is not a precursor of this composition`);
+        }
       }
-      if (!componentPrecursor(modifier.precursorId)) {
-        addIssue(ctx, ["modifiers", index, "precursorId"], "invalid_input", `${nameOf(modifier.precursorId)} is not a precursor of this composition`);
-      }
-    });
+    }
     if (input.solvent) {
-      checkReference(ctx, byId, input.solvent.materialId, ["solvent", "materialId"], ["solvent"]);
+      checkReference(ctx, byId, input.solvent.materialId, ["solvent", "materialId"], SOLVENT_KINDS);
       if (input.solvent.mode === "fill" && input.basis.type === "solidMass") {
         addIssue(
           ctx,
@@ -370,16 +393,19 @@ export const formulationInputSchema = z
       }
     }
     if (input.catalyst) {
-      checkReference(ctx, byId, input.catalyst.materialId, ["catalyst", "materialId"], ["catalyst"]);
+      checkReference(ctx, byId, input.catalyst.materialId, ["catalyst", "materialId"], CATALYST_KINDS);
     }
     if (input.substrateId !== undefined) {
-      checkReference(ctx, byId, input.substrateId, ["substrateId"], ["substrate"]);
+      checkReference(ctx, byId, input.substrateId, ["substrateId"], SUBSTRATE_KINDS);
     }
-    input.additionOrder?.forEach((id, index) => {
-      if (!byId.has(id)) {
-        addIssue(ctx, ["additionOrder", index], "unknown_material", "a material in the addition order is not in the materials list");
+    const additionOrder = input.additionOrder;
+    if (additionOrder) {
+      for (let index = 0; index < additionOrder.length; index += 1) {
+        if (!byId.has(additionOrder[index]!)) {
+          addIssue(ctx, ["additionOrder", index], "unknown_material", "a material in the addition order is not in the materials list");
+        }
       }
-    });
+    }
   });
 
 /** The engine's input, see `formulationInputSchema`. */

@@ -19,17 +19,25 @@ const ROLE_ORDER: Record<LineRole, number> = { precursor: 0, modifier: 1, organi
  * ```
  */
 export function orderLines(lines: readonly RecipeLine[], additionOrder?: readonly string[]): RecipeLine[] {
-  const position = new Map<string, number>();
-  additionOrder?.forEach((id, index) => {
-    if (!position.has(id)) position.set(id, index);
-  });
+  let position: Map<string, number> | undefined;
+  if (additionOrder && additionOrder.length > 0) {
+    position = new Map<string, number>();
+    for (let index = 0; index < additionOrder.length; index += 1) {
+      const id = additionOrder[index]!;
+      if (!position.has(id)) position.set(id, index);
+    }
+  }
   const unlisted = additionOrder ? additionOrder.length : 0;
-  return lines
-    .map((line, index) => ({ line, index }))
-    .sort((a, b) => {
-      const pa = position.get(a.line.materialId) ?? unlisted + ROLE_ORDER[a.line.role];
-      const pb = position.get(b.line.materialId) ?? unlisted + ROLE_ORDER[b.line.role];
-      return pa - pb || a.index - b.index;
-    })
-    .map(({ line }) => line);
+  // each line's place: its position in the addition order, else after all of those by its role
+  const keys = new Array<number>(lines.length);
+  let sorted = true;
+  for (let index = 0; index < lines.length; index += 1) {
+    const line = lines[index]!;
+    keys[index] = position?.get(line.materialId) ?? unlisted + ROLE_ORDER[line.role];
+    if (index > 0 && keys[index]! < keys[index - 1]!) sorted = false;
+  }
+  // lines already in order stay as they are (the sort is stable); otherwise sort their indices by place, then by index
+  if (sorted) return lines.slice();
+  const order = keys.map((_, index) => index).sort((a, b) => keys[a]! - keys[b]! || a - b);
+  return order.map((index) => lines[index]!);
 }

@@ -26,6 +26,30 @@ export const MATERIAL_NAME_MAX = 200;
 /** CAS Registry Number layout: 2–7 digits, 2 digits, 1 check digit. */
 const CAS_NUMBER = /^\d{2,7}-\d{2}-\d$/;
 
+const DIGIT_0 = 0x30;
+const DIGIT_9 = 0x39;
+const HYPHEN = 0x2d;
+
+/**
+ * The check of `casCheckDigitValid` by character codes, for text of ASCII
+ * digits and hyphens only (hyphens ignored; the last digit is the check
+ * digit; no digit at all passes, as 0 = 0); undefined for any other text.
+ */
+function digitsAndHyphensCheck(cas: string): boolean | undefined {
+  let check = -1;
+  let position = 0;
+  let total = 0;
+  for (let i = cas.length - 1; i >= 0; i -= 1) {
+    const unit = cas.charCodeAt(i);
+    if (unit === HYPHEN) continue;
+    if (unit < DIGIT_0 || unit > DIGIT_9) return undefined;
+    if (check < 0) check = unit - DIGIT_0;
+    else total += (unit - DIGIT_0) * position;
+    position += 1;
+  }
+  return check < 0 ? true : total % 10 === check;
+}
+
 /**
  * CAS Registry Number check digit: the sum of each digit (excluding the check
  * digit) times its position counted from the right, modulo 10.
@@ -37,6 +61,9 @@ const CAS_NUMBER = /^\d{2,7}-\d{2}-\d$/;
  * ```
  */
 export function casCheckDigitValid(cas: string): boolean {
+  const fast = digitsAndHyphensCheck(cas);
+  if (fast !== undefined) return fast;
+  // any other character: Number() of a single character decides (0 for white space, NaN otherwise), as before
   const digits = cas.replace(/-/g, "");
   const check = Number(digits.slice(-1));
   const body = digits.slice(0, -1);

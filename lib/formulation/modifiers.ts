@@ -163,20 +163,18 @@ export function fastHydrolysisNotices(
 ): Notice[] {
   if (fast.length === 0 || !effectiveR.greaterThan(ONE)) return [];
   const notices: Notice[] = [];
+  // the same words for every precursor: built once, when the first caution is raised
+  let rest: string | undefined;
   for (const precursor of fast) {
     // Σ mol per metal of its modifiers against the minimum, as the decimal sum decides (see compareSum)
-    const ratios: number[] = [];
-    for (const plan of plans) if (plan.spec.precursorId === precursor.id) ratios.push(plan.spec.molPerMetal);
-    if (ratios.length > 0 && compareSum(ratios, MIN_MODIFIER_RATIO_DEC) >= 0) continue;
-    notices.push({
-      level: "caution",
-      code: "fast_hydrolysis_unmodified",
-      field: "modifiers",
-      message:
-        `${precursor.name} hydrolyses far faster than the silicon alkoxides and, at an effective R of ${Number(effectiveR.toPrecision(4))}, ` +
-        `will precipitate unless it is modified first: add a chelating modifier (acetylacetone, ethyl acetoacetate or a carboxylic acid) ` +
-        `at ${MIN_MODIFIER_RATIO}–2 mol per mol metal before any water.`,
-    });
+    let ratios: number[] | undefined;
+    for (const plan of plans) if (plan.spec.precursorId === precursor.id) (ratios ??= []).push(plan.spec.molPerMetal);
+    if (ratios !== undefined && compareSum(ratios, MIN_MODIFIER_RATIO_DEC) >= 0) continue;
+    rest ??=
+      ` hydrolyses far faster than the silicon alkoxides and, at an effective R of ${Number(effectiveR.toPrecision(4))}, ` +
+      `will precipitate unless it is modified first: add a chelating modifier (acetylacetone, ethyl acetoacetate or a carboxylic acid) ` +
+      `at ${MIN_MODIFIER_RATIO}–2 mol per mol metal before any water.`;
+    notices.push({ level: "caution", code: "fast_hydrolysis_unmodified", field: "modifiers", message: `${precursor.name}${rest}` });
   }
   return notices;
 }

@@ -4,20 +4,45 @@ import type { AlcoholRelease, Notice } from "./result-types";
 /** Closing words of every safety notice. */
 const SDS = "Check the supplier's safety data sheet and follow local regulations.";
 
-/** GHS hazard statements (UN GHS): fatal or toxic if inhaled. */
-const INHALATION_TOXIC = ["H330", "H331"];
-/** GHS hazard statement (UN GHS): causes severe skin burns and eye damage. */
-const CORROSIVE = "H314";
-/** GHS hazard statement (UN GHS): causes serious eye damage. */
-const SEVERE_EYE_DAMAGE = "H318";
+/** What a material's hazard statements say, as bits: acutely toxic by inhalation, severe eye damage, corrosive. */
+const INHALATION_TOXIC = 1;
+const SEVERE_EYE_DAMAGE = 2;
+const CORROSIVE = 4;
 
-function hasHazard(material: Material, codes: readonly string[]): boolean {
-  return (material.hazards ?? []).some((code) => codes.some((wanted) => code.startsWith(wanted)));
+/**
+ * GHS hazard statements (UN GHS) by their code's prefix (a code such as
+ * "H330" may carry letters after it): H330/H331 fatal or toxic if inhaled,
+ * H318 causes serious eye damage, H314 causes severe skin burns and eye damage.
+ */
+const HAZARD_PREFIXES: readonly (readonly [string, number])[] = [
+  ["H330", INHALATION_TOXIC],
+  ["H331", INHALATION_TOXIC],
+  ["H318", SEVERE_EYE_DAMAGE],
+  ["H314", CORROSIVE],
+];
+const CODE_H = 0x48;
+const CODE_3 = 0x33;
+
+/** The bits of the hazards a material carries; every prefix above starts with "H3", so other codes are passed over. */
+function hazardBits(material: Material): number {
+  const hazards = material.hazards;
+  if (hazards === undefined) return 0;
+  let bits = 0;
+  for (const code of hazards) {
+    if (code.charCodeAt(0) !== CODE_H || code.charCodeAt(1) !== CODE_3) continue;
+    for (const [prefix, bit] of HAZARD_PREFIXES) if (code.startsWith(prefix)) bits |= bit;
+  }
+  return bits;
 }
 
 function names(materials: readonly Material[]): string {
-  return materials.map((material) => material.name).join(", ");
+  let text = "";
+  for (let i = 0; i < materials.length; i += 1) text = i === 0 ? materials[i]!.name : `${text}, ${materials[i]!.name}`;
+  return text;
 }
+
+/** Release of methanol: the alcohol's name, trimmed, in lower case. */
+const isMethanol = (name: string): boolean => name.trim().toLowerCase() === "methanol";
 
 /**
  * Safety notices for the dispensed materials (chemistry: "Safety"): alkoxides
@@ -39,9 +64,12 @@ function names(materials: readonly Material[]): string {
 export function safetyNotices(dispensed: readonly Material[], alcohols: readonly AlcoholRelease[]): Notice[] {
   const notices: Notice[] = [];
   // The material's own flag decides; without one, a precursor with alkoxy groups is taken to be an alkoxide.
-  const alkoxides = dispensed.filter(
-    (material) => material.moistureSensitive ?? (material.kind === "precursor" && (material.precursor?.hydrolysableGroupsPerMolecule ?? 0) > 0),
-  );
+  const alkoxides: Material[] = [];
+  for (const material of dispensed) {
+    if (material.moistureSensitive ?? (material.kind === "precursor" && (material.precursor?.hydrolysableGroupsPerMolecule ?? 0) > 0)) {
+      alkoxides.push(material);
+    }
+  }
   if (alkoxides.length > 0) {
     notices.push({
       level: "caution",
@@ -49,20 +77,38 @@ export function safetyNotices(dispensed: readonly Material[], alcohols: readonly
       message: `Alkoxides (${names(alkoxides)}) are moisture-sensitive and flammable: keep containers closed, dispense dry, away from ignition sources. ${SDS}`,
     });
   }
-  const methanol = alcohols.find((alcohol) => alcohol.name.trim().toLowerCase() === "methanol" && alcohol.mol > 0);
+  let methanol = false;
+  for (const alcohol of alcohols) {
+    if (isMethanol(alcohol.name) && alcohol.mol > 0) {
+      methanol = true;
+      break;
+    }
+  }
   if (methanol) {
-    const sources = dispensed.filter(
-      (material) => material.precursor?.leavingAlcohol?.name.trim().toLowerCase() === "methanol",
-    );
+    const sources: Material[] = [];
+    for (const material of dispensed) {
+      const leaving = material.precursor?.leavingAlcohol;
+      if (leaving && isMethanol(leaving.name)) sources.push(material);
+    }
     notices.push({
       level: "caution",
       code: "methanol_released",
       message: `Hydrolysis of methoxy precursors (${names(sources)}) releases methanol, toxic by inhalation, skin contact and ingestion: work in a fume hood. ${SDS}`,
     });
   }
-  const toxic = dispensed.filter((material) => hasHazard(material, INHALATION_TOXIC));
+  // one pass over each material's hazard statements; the lists keep the order of `dispensed`
+  const toxic: Material[] = [];
+  const eyes: Material[] = [];
+  const corrosive: Material[] = [];
+  for (const material of dispensed) {
+    const bits = hazardBits(material);
+    if (bits & INHALATION_TOXIC) {
+      toxic.push(material);
+      if (bits & SEVERE_EYE_DAMAGE) eyes.push(material);
+    }
+    if (bits & CORROSIVE) corrosive.push(material);
+  }
   if (toxic.length > 0) {
-    const eyes = toxic.filter((material) => hasHazard(material, [SEVERE_EYE_DAMAGE]));
     notices.push({
       level: "caution",
       code: "toxic_by_inhalation",
@@ -72,7 +118,6 @@ export function safetyNotices(dispensed: readonly Material[], alcohols: readonly
         `. Handle only in a fume hood with eye protection. ${SDS}`,
     });
   }
-  const corrosive = dispensed.filter((material) => hasHazard(material, [CORROSIVE]));
   if (corrosive.length > 0) {
     notices.push({
       level: "caution",

@@ -35,8 +35,41 @@ const CONTROL_EXCEPT_LINE_BREAKS = /[\u0000-\u0008\u000B\u000C\u000E-\u001F\u007
 const INVISIBLE =
   /[\s\p{Z}\p{Cf}\u034F\u115F\u1160\u17B4\u17B5\u180B-\u180F\u2800\u3164\uFE00-\uFE0F\uFFA0\u{E0100}-\u{E01EF}]/gu;
 
-const PRINTABLE_ASCII = /^[\x20-\x7E]*$/;
-const NOT_ONLY_SPACES = /[^ ]/;
+/** U+0021 "!" … U+007E "~": printable ASCII other than the space; none of them is invisible. */
+const FIRST_VISIBLE_ASCII = 0x21;
+const LAST_VISIBLE_ASCII = 0x7e;
+/** The C0 and C1 controls and DEL lie below U+00A0, the first code unit past them. */
+const PAST_CONTROLS = 0xa0;
+const FIRST_SURROGATE = 0xd800;
+const LAST_SURROGATE = 0xdfff;
+
+/**
+ * True when none of the rules below can apply, by one pass over the UTF-16
+ * code units: no control character (C0, DEL, C1), no surrogate (so none is
+ * lone), no bidirectional control, and at least one printable ASCII
+ * character other than the space (so the text has something visible).
+ */
+function plainlyFine(value: string): boolean {
+  let visible = false;
+  for (let i = 0; i < value.length; i += 1) {
+    const unit = value.charCodeAt(i);
+    if (unit >= FIRST_VISIBLE_ASCII && unit <= LAST_VISIBLE_ASCII) {
+      visible = true;
+    } else if (unit < PAST_CONTROLS) {
+      if (unit !== 0x20) return false;
+    } else if (
+      (unit >= FIRST_SURROGATE && unit <= LAST_SURROGATE) ||
+      unit === 0x061c ||
+      unit === 0x200e ||
+      unit === 0x200f ||
+      (unit >= 0x202a && unit <= 0x202e) ||
+      (unit >= 0x2066 && unit <= 0x2069)
+    ) {
+      return false;
+    }
+  }
+  return visible;
+}
 
 function codePoint(ch: string): string {
   return `U+${ch.codePointAt(0)!.toString(16).toUpperCase().padStart(4, "0")}`;
@@ -56,9 +89,9 @@ function codePoint(ch: string): string {
  * ```
  */
 export function textProblem(value: string, opts: { multiline?: boolean } = {}): string | null {
-  // Printable ASCII with a character other than a space has none of the problems below (no surrogate,
-  // bidirectional control or control character; every character but the space is visible).
-  if (PRINTABLE_ASCII.test(value) && NOT_ONLY_SPACES.test(value)) return null;
+  // Text with a printable ASCII character other than the space, and without a control character, a surrogate or
+  // a bidirectional control anywhere, has none of the problems below; anything else takes the full checks.
+  if (plainlyFine(value)) return null;
   if (LONE_SURROGATE.test(value)) return "must not contain a broken character (a lone UTF-16 surrogate)";
   const bidi = BIDI_CONTROL.exec(value);
   if (bidi) return `must not contain the bidirectional control ${codePoint(bidi[0])}`;

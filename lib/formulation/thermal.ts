@@ -80,16 +80,16 @@ function degradation(t: ThermalData, atmosphere: StepAtmosphere): NamedLimit | u
 export function hardLimit(subject: ThermalSubject, atmosphere: StepAtmosphere = "air"): NamedLimit | undefined {
   const t = subject.thermal;
   if (!t) return undefined;
-  const candidates: NamedLimit[] = [];
-  const td = degradation(t, atmosphere);
-  if (td) candidates.push(td);
+  // candidates in this order, the first of equal ones kept: degradation, short-term (or service) limit, melting
+  let lowest = degradation(t, atmosphere);
   if (subject.role === "substrate") {
-    if (t.heatDeflectionC !== undefined) candidates.push({ limit: "heatDeflection", limitC: t.heatDeflectionC });
-    else if (t.maxServiceC !== undefined) candidates.push({ limit: "maxService", limitC: t.maxServiceC });
-    if (t.meltingC !== undefined) candidates.push({ limit: "melting", limitC: t.meltingC });
+    if (t.heatDeflectionC !== undefined) {
+      if (!lowest || t.heatDeflectionC < lowest.limitC) lowest = { limit: "heatDeflection", limitC: t.heatDeflectionC };
+    } else if (t.maxServiceC !== undefined) {
+      if (!lowest || t.maxServiceC < lowest.limitC) lowest = { limit: "maxService", limitC: t.maxServiceC };
+    }
+    if (t.meltingC !== undefined && (!lowest || t.meltingC < lowest.limitC)) lowest = { limit: "melting", limitC: t.meltingC };
   }
-  let lowest: NamedLimit | undefined;
-  for (const candidate of candidates) if (!lowest || candidate.limitC < lowest.limitC) lowest = candidate;
   return lowest;
 }
 
@@ -120,7 +120,22 @@ function anyLimit(subject: ThermalSubject): NamedLimit | undefined {
   return hardLimit(subject, "air") ?? softLimits(subject, "curing")[0];
 }
 
-function show(value: number): string {
+/** Integers below this magnitude print the same with and without rounding to 6 significant digits. */
+const EXACT_AT_6_DIGITS = 1e6;
+
+/**
+ * A temperature (°C) or duration (h) as the thermal messages print it:
+ * rounded to 6 significant digits, without trailing zeros. An integer of
+ * fewer than 7 digits is printed as it is (the rounding leaves it unchanged).
+ *
+ * @example
+ * ```ts
+ * showValue(132); // "132"
+ * showValue(2 / 3); // "0.666667"
+ * ```
+ */
+export function showValue(value: number): string {
+  if (Number.isInteger(value) && value < EXACT_AT_6_DIGITS && value > -EXACT_AT_6_DIGITS) return String(value);
   return String(Number(value.toPrecision(6)));
 }
 
@@ -137,16 +152,18 @@ function checkStep(subject: ThermalSubject, limit: NamedLimit, step: ProcessStep
   } else if (hard && t >= hard.limitC - marginC) {
     status = "caution";
   } else {
-    for (const soft of softLimits(subject, stage)) {
-      if (t >= soft.limitC) {
+    const soft = softLimits(subject, stage);
+    for (const candidate of soft) {
+      if (t >= candidate.limitC) {
         status = "caution";
-        reference = soft;
+        reference = candidate;
         break;
       }
     }
+    // A row names the limit it was judged against; a material with soft limits only names the first of them.
+    reference ??= soft[0];
   }
-  // A row names the limit it was judged against; a material with soft limits only names the first of them.
-  reference ??= softLimits(subject, stage)[0] ?? limit;
+  reference ??= limit;
   return {
     materialId: subject.materialId,
     stepName: step.name,
@@ -158,6 +175,26 @@ function checkStep(subject: ThermalSubject, limit: NamedLimit, step: ProcessStep
     stage,
     atmosphere,
   };
+}
+
+/** The row statuses that get a notice, worst first. */
+const LEVELS_REPORTED = ["fail", "caution"] as const;
+
+/** The name a row shows for its material: of the last subject with that id (as a Map built from the subjects keeps), else the id. */
+function subjectName(subjects: readonly ThermalSubject[], materialId: string): string {
+  for (let i = subjects.length - 1; i >= 0; i -= 1) if (subjects[i]!.materialId === materialId) return subjects[i]!.name;
+  return materialId;
+}
+
+/** The rows of one status (conversion rows aside) as "; "-separated text, or undefined when there are none. */
+function rowDetails(checks: readonly ThermalCheck[], level: ThermalStatus, subjects: readonly ThermalSubject[]): string | undefined {
+  let detail: string | undefined;
+  for (const row of checks) {
+    if (row.status !== level || row.limit === "conversion") continue;
+    const text = `"${row.stepName}" at ${showValue(row.temperatureC)} °C vs ${subjectName(subjects, row.materialId)} ${LIMIT_LABELS[row.limit]} ${showValue(row.limitC)} °C`;
+    detail = detail === undefined ? text : `${detail}; ${text}`;
+  }
+  return detail;
 }
 
 /**
@@ -226,14 +263,15 @@ export function checkThermal(
           code: "above_service_rating",
           field: "steps",
           message:
-            `${subject.name} spends ${show(hours.toNumber())} h at or above its continuous-use rating of ${show(service.maxServiceC)} °C ` +
-            `(${above.map((step) => `"${step.name}" ${show(step.temperatureC)} °C`).join(", ")}): keep such steps short; ` +
-            `its short-term limit is the heat deflection temperature, ${show(service.heatDeflectionC)} °C.`,
+            `${subject.name} spends ${showValue(hours.toNumber())} h at or above its continuous-use rating of ${showValue(service.maxServiceC)} °C ` +
+            `(${above.map((step) => `"${step.name}" ${showValue(step.temperatureC)} °C`).join(", ")}): keep such steps short; ` +
+            `its short-term limit is the heat deflection temperature, ${showValue(service.heatDeflectionC)} °C.`,
         });
       }
     }
   }
 
+  let conversionMissed = false;
   if (conversions.length > 0) {
     let hottest: ProcessStep | undefined;
     for (const step of steps) if (!hottest || step.temperatureC > hottest.temperatureC) hottest = step;
@@ -253,16 +291,17 @@ export function checkThermal(
         });
       }
       if (!reached) {
+        conversionMissed = true;
         const conflict =
           maxAllowed !== undefined && precursor.conversionTemperatureC > maxAllowed.value
-            ? ` It is also above the highest allowed step temperature (${show(maxAllowed.value)} °C).`
+            ? ` It is also above the highest allowed step temperature (${showValue(maxAllowed.value)} °C).`
             : "";
         notices.push({
           level: "caution",
           code: "conversion_not_reached",
           field: "steps",
           message:
-            `No process step reaches the conversion temperature of ${precursor.name} (${show(precursor.conversionTemperatureC)} °C): ` +
+            `No process step reaches the conversion temperature of ${precursor.name} (${showValue(precursor.conversionTemperatureC)} °C): ` +
             `its residue will not be the stated ${precursor.residueFormula}.${conflict}`,
         });
       }
@@ -271,7 +310,7 @@ export function checkThermal(
 
   let status: ThermalStatus = "clear";
   for (const check of checks) if (STATUS_RANK[check.status] > STATUS_RANK[status]) status = check.status;
-  if (notices.some((notice) => notice.code === "conversion_not_reached") && status === "clear") status = "caution";
+  if (conversionMissed && status === "clear") status = "caution";
 
   if (steps.length === 0) {
     notices.push({
@@ -281,13 +320,9 @@ export function checkThermal(
       message: "No process steps yet: thermal compatibility is checked once steps are added.",
     });
   }
-  const names = new Map(subjects.map((subject) => [subject.materialId, subject.name]));
-  for (const level of ["fail", "caution"] as const) {
-    const rows = checks.filter((check) => check.status === level && check.limit !== "conversion");
-    if (rows.length === 0) continue;
-    const detail = rows
-      .map((row) => `"${row.stepName}" at ${show(row.temperatureC)} °C vs ${names.get(row.materialId) ?? row.materialId} ${LIMIT_LABELS[row.limit]} ${show(row.limitC)} °C`)
-      .join("; ");
+  for (const level of LEVELS_REPORTED) {
+    const detail = rowDetails(checks, level, subjects);
+    if (detail === undefined) continue;
     notices.push({
       level: level === "fail" ? "error" : "caution",
       code: level === "fail" ? "thermal_limit_exceeded" : "thermal_limit_near",
@@ -295,7 +330,7 @@ export function checkThermal(
       message:
         level === "fail"
           ? `Process steps at or above a hard thermal limit: ${detail}.`
-          : `Process steps within the ${show(marginC)} °C margin of a limit, past a glass transition or melting point, or above a service rating: ${detail}.`,
+          : `Process steps within the ${showValue(marginC)} °C margin of a limit, past a glass transition or melting point, or above a service rating: ${detail}.`,
     });
   }
 
