@@ -46,9 +46,23 @@ export const WIDE_PRECISION = 60;
  */
 export const Wide: Decimal.Constructor = Decimal.clone({ precision: WIDE_PRECISION, rounding: Decimal.ROUND_HALF_EVEN });
 
-/** Largest number of cached conversions kept by `dec` before the cache is emptied. */
+/** Largest number of cached conversions kept by `dec` and `wide` before a cache is emptied. */
 const DEC_CACHE_LIMIT = 10_000;
-const decCache = new Map<number, Dec>();
+
+/** A memoised conversion of JS numbers to decimals of one constructor (0 gives `ZERO`). */
+function memoisedConversion(Ctor: Decimal.Constructor): (value: number) => Dec {
+  const cache = new Map<number, Dec>();
+  return (value) => {
+    if (value === 0) return ZERO;
+    let cached = cache.get(value);
+    if (cached === undefined) {
+      if (cache.size >= DEC_CACHE_LIMIT) cache.clear();
+      cached = new Ctor(value);
+      cache.set(value, cached);
+    }
+    return cached;
+  };
+}
 
 /**
  * The decimal of a JS number, memoised: material constants (molar masses,
@@ -60,16 +74,7 @@ const decCache = new Map<number, Dec>();
  * dec(208.329).times(2).toNumber(); // 416.658
  * ```
  */
-export function dec(value: number): Dec {
-  if (value === 0) return ZERO;
-  let cached = decCache.get(value);
-  if (cached === undefined) {
-    if (decCache.size >= DEC_CACHE_LIMIT) decCache.clear();
-    cached = new Dec(value);
-    decCache.set(value, cached);
-  }
-  return cached;
-}
+export const dec: (value: number) => Dec = memoisedConversion(Dec);
 
 /**
  * a ÷ b to `Dec`'s 20 digits whatever a's constructor: decimal.js works a
@@ -86,8 +91,6 @@ export function quotient(a: Dec, b: Dec | number): Dec {
   return (a.constructor === Wide ? new Dec(a) : a).div(b);
 }
 
-const wideCache = new Map<number, Dec>();
-
 /**
  * The `Wide` decimal of a JS number, memoised like `dec` (a weight fraction
  * typed on the form recurs on every call). Products and sums with it on the
@@ -98,16 +101,7 @@ const wideCache = new Map<number, Dec>();
  * wide(0.25).times(dec(1).div(3)).toString(); // "0.0833333333333333333325" (exact: 0.25 × the 20-digit third)
  * ```
  */
-export function wide(value: number): Dec {
-  if (value === 0) return ZERO;
-  let cached = wideCache.get(value);
-  if (cached === undefined) {
-    if (wideCache.size >= DEC_CACHE_LIMIT) wideCache.clear();
-    cached = new Wide(value);
-    wideCache.set(value, cached);
-  }
-  return cached;
-}
+export const wide: (value: number) => Dec = memoisedConversion(Wide);
 
 const reciprocalCache = new Map<number, Dec>();
 

@@ -7,34 +7,17 @@ import { compareSum, decimalSum } from "./sum-compare";
 import { nonEmptyString, rangedNumber, required } from "./zod-helpers";
 import {
   basisSchema,
-  componentSchema,
-  WATER_RATIOS,
-  waterSpecSchema,
-  solventSpecSchema,
   catalystSpecSchema,
-  STEP_STAGES,
-  STEP_ATMOSPHERES,
-  processStepSchema,
-  modifierSpecSchema,
-  COATING_METHODS,
   coatingSpecSchema,
+  componentSchema,
+  modifierSpecSchema,
+  processStepSchema,
+  solventSpecSchema,
+  waterSpecSchema,
 } from "./input-parts";
 
 // the parts stay importable from here, beside the input they make up
-export {
-  basisSchema,
-  componentSchema,
-  WATER_RATIOS,
-  waterSpecSchema,
-  solventSpecSchema,
-  catalystSpecSchema,
-  STEP_STAGES,
-  STEP_ATMOSPHERES,
-  processStepSchema,
-  modifierSpecSchema,
-  COATING_METHODS,
-  coatingSpecSchema,
-};
+export * from "./input-parts";
 
 type Ctx = z.RefinementCtx;
 
